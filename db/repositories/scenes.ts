@@ -1,0 +1,212 @@
+import { sql, type Kysely } from 'kysely';
+import type { Database, SceneRow, SceneStatus } from '../schema';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { canReadAllScenes } from '@/lib/auth/roles';
+import { recordAudit } from './audit';
+
+type Db = Kysely<Database>;
+
+export interface SceneSummary {
+  id: number;
+  title: string;
+  status: SceneStatus;
+  revision: number;
+  ownerId: number;
+  ownerName: string;
+  updatedAt: string;
+  inTrainingSet: boolean;
+}
+
+export interface Scene extends SceneSummary {
+  organisationId: number;
+  document: Record<string, unknown>;
+  equipmentProfileId: number | null;
+  equipmentProfileVersion: number | null;
+  createdAt: string;
+}
+
+type SceneWithOwner = SceneRow & { owner_name: string };
+
+function toScene(row: SceneWithOwner): Scene {
+  return {
+    id: row.id,
+    organisationId: row.organisation_id,
+    title: row.title,
+    status: row.status,
+    revision: row.revision,
+    ownerId: row.owner_id,
+    ownerName: row.owner_name,
+    document: row.document,
+    equipmentProfileId: row.equipment_profile_id,
+    equipmentProfileVersion: row.equipment_profile_version,
+    inTrainingSet: row.in_training_set === 1,
+    createdAt: row.created_at,
+    updatedAt: row.updated_at,
+  };
+}
+
+/** The scenes a user may read: their organisation's, not deleted; operators see their own plus approved ones. */
+function visibleTo(db: Db, user: CurrentUser) {
+  let q = db
+    .selectFrom('scenes')
+    .innerJoin('users', 'users.id', 'scenes.owner_id')
+    .where('scenes.organisation_id', '=', user.organisationId)
+    .where('scenes.deleted_at', 'is', null);
+  if (!canReadAllScenes(user.role)) {
+    q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
+  }
+  return q;
+}
+
+export interface ListScenesOptions {
+  page: number;
+  pageSize: number;
+  title?: string;
+  status?: SceneStatus;
+}
+
+export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOptions) {
+  let q = visibleTo(db, user);
+  if (opts.title) q = q.where(sql<boolean>`instr(lower(scenes.title), ${opts.title.toLowerCase()}) > 0`);
+  if (opts.status) q = q.where('scenes.status', '=', opts.status);
+  const total = await q.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+  const rows = await q
+    .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'users.name as owner_name'])
+    .orderBy('scenes.updated_at', 'desc')
+    .orderBy('scenes.id', 'desc')
+    .limit(opts.pageSize)
+    .offset((opts.page - 1) * opts.pageSize)
+    .execute();
+  const items: SceneSummary[] = rows.map((r) => ({
+    id: r.id,
+    title: r.title,
+    status: r.status,
+    revision: r.revision,
+    ownerId: r.owner_id,
+    ownerName: r.owner_name,
+    updatedAt: r.updated_at,
+    inTrainingSet: r.in_training_set === 1,
+  }));
+  return { items, total: Number(total.n), page: opts.page, pageSize: opts.pageSize };
+}
+
+export async function getScene(db: Db, user: CurrentUser, id: number): Promise<Scene | undefined> {
+  const row = await visibleTo(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
+  return row ? toScene(row as SceneWithOwner) : undefined;
+}
+
+export interface NewSceneInput {
+  title: string;
+  document: Record<string, unknown>;
+  equipmentProfileId?: number | null;
+  equipmentProfileVersion?: number | null;
+}
+
+/** Creates a scene with its first revision and an audit row, in one transaction. */
+export async function createScene(db: Db, user: CurrentUser, input: NewSceneInput): Promise<Scene> {
+  const id = await db.transaction().execute(async (trx) => {
+    const now = new Date().toISOString();
+    const doc = JSON.stringify(input.document);
+    const row = await trx
+      .insertInto('scenes')
+      .values({
+        organisation_id: user.organisationId,
+        owner_id: user.id,
+        title: input.title,
+        document: doc,
+        revision: 1,
+        equipment_profile_id: input.equipmentProfileId ?? null,
+        equipment_profile_version: input.equipmentProfileVersion ?? null,
+        created_at: now,
+        updated_at: now,
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: user.id, created_at: now }).execute();
+    await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: row.id, action: 'scene.create', detail: { title: input.title } });
+    return row.id;
+  });
+  return (await getScene(db, user, id))!;
+}
+
+export interface SceneChanges {
+  revision: number;
+  title?: string;
+  document?: Record<string, unknown>;
+  status?: SceneStatus;
+  equipmentProfileId?: number | null;
+  equipmentProfileVersion?: number | null;
+}
+
+export type UpdateOutcome = { kind: 'ok'; scene: Scene } | { kind: 'stale'; current: number };
+
+/**
+ * Saves a new revision if `changes.revision` is the current one. The revision check and the write happen
+ * in the same statement, so two saves based on the same revision cannot both win.
+ */
+export async function updateScene(db: Db, user: CurrentUser, id: number, changes: SceneChanges): Promise<UpdateOutcome> {
+  const outcome = await db.transaction().execute(async (trx): Promise<UpdateOutcome> => {
+    const now = new Date().toISOString();
+    const next = changes.revision + 1;
+    const updated = await trx
+      .updateTable('scenes')
+      .set({
+        revision: next,
+        updated_at: now,
+        ...(changes.title !== undefined && { title: changes.title }),
+        ...(changes.status !== undefined && { status: changes.status }),
+        ...(changes.document !== undefined && { document: JSON.stringify(changes.document) }),
+        ...(changes.equipmentProfileId !== undefined && { equipment_profile_id: changes.equipmentProfileId }),
+        ...(changes.equipmentProfileVersion !== undefined && { equipment_profile_version: changes.equipmentProfileVersion }),
+      })
+      .where('id', '=', id)
+      .where('organisation_id', '=', user.organisationId)
+      .where('deleted_at', 'is', null)
+      .where('revision', '=', changes.revision)
+      .returning(['document'])
+      .executeTakeFirst();
+    if (!updated) {
+      const cur = await trx.selectFrom('scenes').select('revision').where('id', '=', id).executeTakeFirst();
+      return { kind: 'stale', current: cur?.revision ?? -1 };
+    }
+    await trx
+      .insertInto('scene_revisions')
+      .values({ scene_id: id, revision: next, document: JSON.stringify(updated.document), author_id: user.id, created_at: now })
+      .execute();
+    await recordAudit(trx, {
+      organisationId: user.organisationId,
+      userId: user.id,
+      sceneId: id,
+      action: 'scene.update',
+      detail: { revision: next, fields: Object.keys(changes).filter((k) => k !== 'revision') },
+    });
+    return { kind: 'ok', scene: undefined as unknown as Scene };
+  });
+  if (outcome.kind === 'stale') return outcome;
+  return { kind: 'ok', scene: (await getScene(db, user, id))! };
+}
+
+export async function softDeleteScene(db: Db, user: CurrentUser, id: number): Promise<boolean> {
+  return db.transaction().execute(async (trx) => {
+    const res = await trx
+      .updateTable('scenes')
+      .set({ deleted_at: new Date().toISOString() })
+      .where('id', '=', id)
+      .where('organisation_id', '=', user.organisationId)
+      .where('deleted_at', 'is', null)
+      .executeTakeFirst();
+    if (Number(res.numUpdatedRows) === 0) return false;
+    await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: id, action: 'scene.delete' });
+    return true;
+  });
+}
+
+export function listRevisions(db: Db, sceneId: number) {
+  return db
+    .selectFrom('scene_revisions')
+    .innerJoin('users', 'users.id', 'scene_revisions.author_id')
+    .select(['scene_revisions.revision', 'scene_revisions.created_at', 'users.name as author_name'])
+    .where('scene_id', '=', sceneId)
+    .orderBy('revision', 'desc')
+    .execute();
+}

@@ -1,0 +1,44 @@
+import type { Kysely } from 'kysely';
+import type { Database, NewUser, Role } from '../schema';
+
+type Db = Kysely<Database>;
+
+const publicColumns = ['users.id', 'users.organisation_id', 'users.email', 'users.name', 'users.role', 'users.units', 'users.active', 'users.created_at'] as const;
+
+export function findUserByEmail(db: Db, email: string) {
+  return db.selectFrom('users').selectAll().where('email', '=', email.trim().toLowerCase()).executeTakeFirst();
+}
+
+export function findUserById(db: Db, id: number) {
+  return db
+    .selectFrom('users')
+    .innerJoin('organisations', 'organisations.id', 'users.organisation_id')
+    .select([...publicColumns, 'organisations.name as organisation_name'])
+    .where('users.id', '=', id)
+    .executeTakeFirst();
+}
+
+export function listUsers(db: Db, organisationId: number) {
+  return db
+    .selectFrom('users')
+    .select([...publicColumns])
+    .where('organisation_id', '=', organisationId)
+    .orderBy('name')
+    .execute();
+}
+
+export async function createUser(db: Db, user: Omit<NewUser, 'created_at'>) {
+  return db
+    .insertInto('users')
+    .values({ ...user, email: user.email.trim().toLowerCase(), created_at: new Date().toISOString() })
+    .returning([...publicColumns.map((c) => c.replace('users.', '') as 'id')])
+    .executeTakeFirstOrThrow();
+}
+
+export function setUserRole(db: Db, organisationId: number, id: number, role: Role) {
+  return db.updateTable('users').set({ role }).where('id', '=', id).where('organisation_id', '=', organisationId).executeTakeFirst();
+}
+
+export function setUserUnits(db: Db, id: number, units: 'imperial' | 'metric') {
+  return db.updateTable('users').set({ units }).where('id', '=', id).executeTakeFirst();
+}

@@ -1,0 +1,34 @@
+import type { z } from 'zod';
+
+export interface FieldIssue {
+  /** Dotted path of the field, e.g. "document.objects.0.x"; "body" for the body as a whole. */
+  path: string;
+  message: string;
+}
+
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly issues?: FieldIssue[],
+  ) {
+    super(message);
+  }
+}
+
+export function zodIssues(error: z.ZodError, prefix?: string): FieldIssue[] {
+  return error.issues.map((i) => ({
+    path: [prefix, ...i.path.map(String)].filter((p) => p !== undefined && p !== '').join('.') || prefix || 'body',
+    message: i.message,
+  }));
+}
+
+/** "title: Too small; revision: Expected number" — a one-line message that names each field. */
+export function describeIssues(issues: FieldIssue[]): string {
+  const shown = issues.slice(0, 5).map((i) => `${i.path}: ${i.message}`);
+  return shown.join('; ') + (issues.length > 5 ? `; and ${issues.length - 5} more` : '');
+}
+
+export function jsonError(status: number, error: string, issues?: FieldIssue[]): Response {
+  return Response.json(issues ? { error, issues } : { error }, { status });
+}

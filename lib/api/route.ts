@@ -1,0 +1,78 @@
+import { z } from 'zod';
+import type { Role } from '@/db/schema';
+import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
+import { AccessError, assertRole } from '@/lib/auth/roles';
+import { HttpError, describeIssues, jsonError, zodIssues } from './errors';
+
+/** Bodies above this are refused before parsing (a scene document is far smaller). */
+export const MAX_JSON_BODY = 2 * 1024 * 1024;
+
+interface RouteOptions<P extends z.ZodType, B extends z.ZodType, Q extends z.ZodType> {
+  /** Roles allowed; omit to allow any signed-in user. */
+  roles?: readonly Role[];
+  params?: P;
+  body?: B;
+  query?: Q;
+}
+
+export interface RouteContext<P, B, Q> {
+  req: Request;
+  user: CurrentUser;
+  params: P;
+  body: B;
+  query: Q;
+}
+
+type NextContext = { params: Promise<Record<string, string | string[]>> };
+
+function parseWith<T extends z.ZodType>(schema: T, value: unknown, where: string): z.output<T> {
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) {
+    const issues = zodIssues(parsed.error, where === 'body' ? undefined : where);
+    throw new HttpError(400, `Invalid ${where}: ${describeIssues(issues)}`, issues);
+  }
+  return parsed.data;
+}
+
+async function readJson(req: Request): Promise<unknown> {
+  const declared = Number(req.headers.get('content-length') ?? '0');
+  if (declared > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
+  const text = await req.text();
+  if (text.length > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
+  if (text.trim() === '') throw new HttpError(400, 'body: a JSON body is required', [{ path: 'body', message: 'Required' }]);
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new HttpError(400, 'body: the request body is not valid JSON', [{ path: 'body', message: 'Malformed JSON' }]);
+  }
+}
+
+/**
+ * Wraps a route handler: session and role first (401/403), then params, query and body through zod (400),
+ * then the handler. Handlers throw HttpError for 404/409; anything else unexpected is logged and becomes 500.
+ */
+export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown>(
+  options: RouteOptions<P, B, Q>,
+  handler: (ctx: RouteContext<z.output<P>, z.output<B>, z.output<Q>>) => Promise<Response | unknown>,
+) {
+  return async (req: Request, context?: NextContext): Promise<Response> => {
+    try {
+      const user = assertRole(await getCurrentUser(), options.roles);
+      const rawParams = context?.params ? await context.params : {};
+      const params = options.params ? parseWith(options.params, rawParams, 'params') : rawParams;
+      const url = new URL(req.url);
+      const query = options.query ? parseWith(options.query, Object.fromEntries(url.searchParams), 'query') : {};
+      const body = options.body ? parseWith(options.body, await readJson(req), 'body') : undefined;
+      const out = await handler({ req, user, params, body, query } as RouteContext<z.output<P>, z.output<B>, z.output<Q>>);
+      return out instanceof Response ? out : Response.json(out ?? { ok: true });
+    } catch (err) {
+      if (err instanceof AccessError) return jsonError(err.status, err.message);
+      if (err instanceof HttpError) return jsonError(err.status, err.message, err.issues);
+      console.error('Unhandled route error', err);
+      return jsonError(500, 'Something went wrong on the server');
+    }
+  };
+}
+
+/** Path id: a positive integer in the URL. */
+export const idParams = z.object({ id: z.coerce.number().int().positive() });

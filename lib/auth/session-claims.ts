@@ -1,0 +1,9 @@
+import { getServerSession } from 'next-auth';
+import { authOptions } from './options';
+
+/** The signed-in user's id from the next-auth JWT, or null. Tests replace this module. */
+export async function getSessionUserId(): Promise<number | null> {
+  const session = await getServerSession(authOptions);
+  const id = session?.user?.id;
+  return typeof id === 'number' && Number.isInteger(id) ? id : null;
+}

@@ -1,0 +1,8 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  reactStrictMode: true,
+  // better-sqlite3 is native; concaveman (inside @turf/convex) breaks when bundled into route handlers.
+  serverExternalPackages: ['better-sqlite3', 'concaveman'],
+  poweredByHeader: false,
+};
+export default nextConfig;

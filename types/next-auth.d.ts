@@ -1,0 +1,23 @@
+import type { Role } from '@/db/schema';
+import 'next-auth';
+import 'next-auth/jwt';
+
+declare module 'next-auth' {
+  interface Session {
+    user: {
+      id: number;
+      name?: string | null;
+      email?: string | null;
+      role: Role;
+      organisationId: number;
+    };
+  }
+}
+
+declare module 'next-auth/jwt' {
+  interface JWT {
+    userId: number;
+    role: Role;
+    organisationId: number;
+  }
+}
