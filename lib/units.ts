@@ -1,0 +1,62 @@
+/** Exact conversion factors (International yard and pound agreement, 1959; NIST SP 811). */
+export const M_PER_IN = 0.0254;
+export const M_PER_FT = 0.3048;
+export const KG_PER_LB = 0.45359237;
+/** Standard gravity, 3rd CGPM (1901). */
+export const G = 9.80665;
+/** 1 psf in Pa: 1 lbf / ft² = KG_PER_LB·G / M_PER_FT². */
+export const PA_PER_PSF = (KG_PER_LB * G) / (M_PER_FT * M_PER_FT);
+
+export type UnitSystem = 'imperial' | 'metric';
+
+export const ftToM = (ft: number) => ft * M_PER_FT;
+export const mToFt = (m: number) => m / M_PER_FT;
+export const inToM = (inch: number) => inch * M_PER_IN;
+export const mToIn = (m: number) => m / M_PER_IN;
+export const lbToKg = (lb: number) => lb * KG_PER_LB;
+export const kgToLb = (kg: number) => kg / KG_PER_LB;
+export const kgToKn = (kg: number) => (kg * G) / 1000;
+export const knToKg = (kn: number) => (kn * 1000) / G;
+export const kpaToPsf = (kpa: number) => (kpa * 1000) / PA_PER_PSF;
+export const psfToKpa = (psf: number) => (psf * PA_PER_PSF) / 1000;
+export const m2ToFt2 = (m2: number) => m2 / (M_PER_FT * M_PER_FT);
+export const ft2ToM2 = (ft2: number) => ft2 * M_PER_FT * M_PER_FT;
+
+/** 12.5 m → 41' 0" (rounded to the nearest inch, carrying 12" into the feet). */
+export function formatFeetInches(m: number): string {
+  const sign = m < 0 ? '−' : '';
+  let totalIn = Math.round(Math.abs(mToIn(m)));
+  const ft = Math.floor(totalIn / 12);
+  totalIn -= ft * 12;
+  return `${sign}${ft}′ ${totalIn}″`;
+}
+
+/** Parses 41' 6", 41'6, 41 ft 6 in, 41.5 (feet) or 498" (inches) into metres; null when unreadable. */
+export function parseFeetInches(text: string): number | null {
+  const t = text.trim().replace(/[′’]/g, "'").replace(/[″”]/g, '"');
+  const m = t.match(/^(-?\d+(?:\.\d+)?)\s*(?:'|ft)\s*(?:(\d+(?:\.\d+)?)\s*(?:"|in)?)?$/i);
+  if (m) return ftToM(Number(m[1])) + inToM(Number(m[2] ?? 0)) * Math.sign(Number(m[1]) || 1);
+  const inches = t.match(/^(-?\d+(?:\.\d+)?)\s*(?:"|in)$/i);
+  if (inches) return inToM(Number(inches[1]));
+  const bare = t.match(/^-?\d+(?:\.\d+)?$/);
+  if (bare) return ftToM(Number(t));
+  return null;
+}
+
+const group = (n: number, digits = 0) => n.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits });
+
+export function formatLength(m: number, units: UnitSystem): string {
+  return units === 'metric' ? `${group(m, 2)} m` : formatFeetInches(m);
+}
+
+export function formatMass(kg: number, units: UnitSystem): string {
+  return units === 'metric' ? `${group(kg)} kg` : `${group(kgToLb(kg))} lb`;
+}
+
+export function formatPressure(kpa: number, units: UnitSystem): string {
+  return units === 'metric' ? `${group(kpa, 0)} kPa` : `${group(kpaToPsf(kpa))} psf`;
+}
+
+export function formatForce(kn: number, units: UnitSystem): string {
+  return units === 'metric' ? `${group(kn, 1)} kN` : `${group(kgToLb(knToKg(kn)))} lbf`;
+}
