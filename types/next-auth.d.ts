@@ -3,6 +3,10 @@ import 'next-auth';
 import 'next-auth/jwt';
 
 declare module 'next-auth' {
+  interface User {
+    role: Role;
+    organisationId: number;
+  }
   interface Session {
     user: {
       id: number;

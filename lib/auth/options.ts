@@ -4,7 +4,6 @@ import { z } from 'zod';
 import { getDb } from '@/db';
 import { findUserByEmail } from '@/db/repositories/users';
 import { verifyPassword } from './password';
-import type { Role } from '@/db/schema';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email().max(254),
@@ -38,8 +37,8 @@ export const authOptions: NextAuthOptions = {
     async jwt({ token, user }) {
       if (user) {
         token.userId = Number(user.id);
-        token.role = (user as { role: Role }).role;
-        token.organisationId = (user as { organisationId: number }).organisationId;
+        token.role = user.role;
+        token.organisationId = user.organisationId;
       }
       return token;
     },

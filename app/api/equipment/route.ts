@@ -1,0 +1,25 @@
+import { z } from 'zod';
+import { getDb } from '@/db';
+import { createEquipmentProfile, listEquipmentProfiles } from '@/db/repositories/equipment';
+import { recordAudit } from '@/db/repositories/audit';
+import { route } from '@/lib/api/route';
+import { equipmentProfileSchema } from '@/lib/validations/equipment';
+
+export const runtime = 'nodejs';
+
+const listQuery = z.object({ includeRetired: z.enum(['true', 'false']).optional() });
+
+export const GET = route({ query: listQuery }, async ({ user, query }) => {
+  return { items: await listEquipmentProfiles(getDb(), user.organisationId, { includeRetired: query.includeRetired === 'true' }) };
+});
+
+export const POST = route({ roles: ['admin'], body: equipmentProfileSchema }, async ({ user, body }) => {
+  const profile = await getDb()
+    .transaction()
+    .execute(async (trx) => {
+      const p = await createEquipmentProfile(trx, user.organisationId, body);
+      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.create', detail: { id: p.id } });
+      return p;
+    });
+  return Response.json(profile, { status: 201 });
+});

@@ -1,0 +1,22 @@
+import type { Metadata, Viewport } from 'next';
+import '@fontsource/inter-tight/400.css';
+import '@fontsource/inter-tight/500.css';
+import '@fontsource/inter-tight/600.css';
+import '@fontsource/inter-tight/700.css';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Arcline', template: '%s · Arcline' },
+  description: 'Lift planning sketches for heavy recovery crews: stability, ground pressure and clearance through the whole swing.',
+  icons: { icon: '/arcline-mark.svg' },
+};
+
+export const viewport: Viewport = { width: 'device-width', initialScale: 1, themeColor: '#15202B' };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-screen bg-paper font-sans text-ink antialiased">{children}</body>
+    </html>
+  );
+}

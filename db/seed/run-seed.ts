@@ -1,0 +1,71 @@
+import type { Kysely } from 'kysely';
+import type { Database } from '../schema';
+import { hashPassword } from '@/lib/auth/password';
+import { DEMO_ORGS, DEMO_PASSWORD, DEMO_USERS } from './demo-users';
+import { DEMO_TRUCKS } from './demo-trucks';
+import { DEMO_SCENES } from './demo-scenes';
+
+/** Inserts the invented demo scenario into an empty database, in one transaction. Returns false if data exists. */
+export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
+  const existing = await db.selectFrom('organisations').select('id').limit(1).executeTakeFirst();
+  if (existing) return false;
+  const hash = await hashPassword(DEMO_PASSWORD);
+  const now = new Date().toISOString();
+  await db.transaction().execute(async (trx) => {
+    const orgIds = new Map<string, number>();
+    for (const o of DEMO_ORGS) {
+      const row = await trx.insertInto('organisations').values({ name: o.name, slug: o.slug, created_at: now }).returning('id').executeTakeFirstOrThrow();
+      orgIds.set(o.slug, row.id);
+    }
+    const userIds = new Map<string, number>();
+    for (const u of DEMO_USERS) {
+      const row = await trx
+        .insertInto('users')
+        .values({ organisation_id: orgIds.get(u.org)!, email: u.email, name: u.name, role: u.role, password_hash: hash, created_at: now })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      userIds.set(u.email, row.id);
+    }
+    const truckIds = new Map<string, { id: number; version: number }>();
+    for (const t of DEMO_TRUCKS) {
+      const row = await trx
+        .insertInto('equipment_profiles')
+        .values({
+          organisation_id: orgIds.get(t.org)!,
+          kind: 'truck',
+          name: t.name,
+          unit_number: t.unitNumber,
+          spec: JSON.stringify(t.spec),
+          created_at: now,
+          updated_at: now,
+        })
+        .returning(['id', 'version'])
+        .executeTakeFirstOrThrow();
+      truckIds.set(t.unitNumber, row);
+    }
+    for (const s of DEMO_SCENES) {
+      const owner = userIds.get(s.owner)!;
+      const truck = s.truck ? truckIds.get(s.truck) : undefined;
+      const doc = JSON.stringify(s.document);
+      const row = await trx
+        .insertInto('scenes')
+        .values({
+          organisation_id: orgIds.get(s.org)!,
+          owner_id: owner,
+          title: s.title,
+          status: s.status,
+          document: doc,
+          revision: 1,
+          equipment_profile_id: truck?.id ?? null,
+          equipment_profile_version: truck?.version ?? null,
+          in_training_set: s.inTrainingSet ? 1 : 0,
+          created_at: now,
+          updated_at: now,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: owner, created_at: now }).execute();
+    }
+  });
+  return true;
+}

@@ -1,0 +1,45 @@
+import { z } from 'zod';
+import { SCENE_STATUSES } from '@/db/schema';
+
+/** Largest scene document accepted, as serialised JSON. */
+export const MAX_DOCUMENT_CHARS = 1_500_000;
+
+export const sceneTitle = z
+  .string({ error: 'Title is required' })
+  .trim()
+  .min(3, 'Title needs at least 3 characters')
+  .max(120, 'Title can be at most 120 characters');
+
+/**
+ * The scene document is checked here only as a JSON object of bounded size; the editor's own versioned
+ * schema (canvas/document) validates its contents.
+ */
+export const sceneDocument = z
+  .record(z.string(), z.unknown(), { error: 'Document must be a JSON object' })
+  .refine((d) => JSON.stringify(d).length <= MAX_DOCUMENT_CHARS, 'Document is larger than 1.5 MB');
+
+export const sceneStatus = z.enum(SCENE_STATUSES as [string, ...string[]]) as z.ZodType<(typeof SCENE_STATUSES)[number]>;
+
+export const createSceneSchema = z.object({
+  title: sceneTitle,
+  document: sceneDocument.optional(),
+  equipmentProfileId: z.number().int().positive().nullable().optional(),
+});
+export type CreateSceneInput = z.infer<typeof createSceneSchema>;
+
+export const updateSceneSchema = z
+  .object({
+    revision: z.number({ error: 'revision is required: the revision this save is based on' }).int().positive(),
+    title: sceneTitle.optional(),
+    document: sceneDocument.optional(),
+    equipmentProfileId: z.number().int().positive().nullable().optional(),
+  })
+  .strict();
+export type UpdateSceneInput = z.infer<typeof updateSceneSchema>;
+
+export const listScenesQuery = z.object({
+  page: z.coerce.number().int().min(1).max(100000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+  title: z.string().trim().max(120).optional(),
+  status: sceneStatus.optional(),
+});

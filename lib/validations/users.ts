@@ -1,0 +1,16 @@
+import { z } from 'zod';
+import { ROLES } from '@/db/schema';
+
+export const roleSchema = z.enum(ROLES as unknown as [string, ...string[]], {
+  error: `Role must be one of ${ROLES.join(', ')}`,
+}) as unknown as z.ZodType<(typeof ROLES)[number]>;
+
+export const createUserSchema = z.object({
+  name: z.string({ error: 'Name is required' }).trim().min(2, 'Name needs at least 2 characters').max(80),
+  email: z.string({ error: 'E-mail is required' }).trim().toLowerCase().email('Enter a valid e-mail address').max(254),
+  role: roleSchema,
+  password: z.string({ error: 'Password is required' }).min(10, 'Password needs at least 10 characters').max(200),
+});
+export type CreateUserInput = z.infer<typeof createUserSchema>;
+
+export const updateMeSchema = z.object({ units: z.enum(['imperial', 'metric']) });

@@ -1,0 +1,10 @@
+import type { Migration } from 'kysely';
+import * as foundation from './2026-12-01T00-00_foundation';
+
+/**
+ * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
+ * tsx, vitest and the Next server alike. Add new migrations here with a date-prefixed name.
+ */
+export const migrations: Record<string, Migration> = {
+  '2026-12-01T00-00_foundation': foundation,
+};

@@ -1,0 +1,21 @@
+/**
+ * One command for the demo: migrate, seed if empty, build, start on PORT (default 3000).
+ */
+import { execSync, spawn } from 'node:child_process';
+import crypto from 'node:crypto';
+
+const port = process.env.PORT ?? '3000';
+const env = {
+  ...process.env,
+  NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://localhost:${port}`,
+  // A fresh secret per start only signs everyone out on restart; set NEXTAUTH_SECRET to keep sessions.
+  NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? crypto.randomBytes(32).toString('hex'),
+};
+const run = (cmd: string) => execSync(cmd, { stdio: 'inherit', env });
+
+run('npx tsx db/migrate.ts');
+run('npx tsx db/seed.ts');
+run('npx next build');
+console.log(`\nArcline demo on http://localhost:${port}. Demo sign-ins are listed in README.md.\n`);
+const child = spawn('npx', ['next', 'start', '-p', port], { stdio: 'inherit', env });
+child.on('exit', (code) => process.exit(code ?? 0));
