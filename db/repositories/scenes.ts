@@ -210,3 +210,22 @@ export function listRevisions(db: Db, sceneId: number) {
     .orderBy('revision', 'desc')
     .execute();
 }
+
+/** Training-set membership is not a document change, so it does not bump the revision. */
+export async function setTrainingSet(db: Db, user: CurrentUser, id: number, inTrainingSet: boolean) {
+  await db.transaction().execute(async (trx) => {
+    await trx
+      .updateTable('scenes')
+      .set({ in_training_set: inTrainingSet ? 1 : 0 })
+      .where('id', '=', id)
+      .where('organisation_id', '=', user.organisationId)
+      .where('deleted_at', 'is', null)
+      .execute();
+    await recordAudit(trx, {
+      organisationId: user.organisationId,
+      userId: user.id,
+      sceneId: id,
+      action: inTrainingSet ? 'scene.training.add' : 'scene.training.remove',
+    });
+  });
+}

@@ -1,0 +1,17 @@
+import { z } from 'zod';
+import { getDb } from '@/db';
+import { getScene, setTrainingSet } from '@/db/repositories/scenes';
+import { idParams, route } from '@/lib/api/route';
+import { HttpError } from '@/lib/api/errors';
+
+export const runtime = 'nodejs';
+
+const body = z.object({ inTrainingSet: z.boolean({ error: 'inTrainingSet must be true or false' }) }).strict();
+
+/** A trainer adds a scene to, or takes it out of, the organisation's training set. */
+export const PUT = route({ roles: ['trainer'], params: idParams, body }, async ({ user, params, body }) => {
+  const db = getDb();
+  if (!(await getScene(db, user, params.id))) throw new HttpError(404, 'Scene not found');
+  await setTrainingSet(db, user, params.id, body.inTrainingSet);
+  return (await getScene(db, user, params.id))!;
+});
