@@ -1,0 +1,87 @@
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs';
+import fsp from 'node:fs/promises';
+import path from 'node:path';
+import { Readable } from 'node:stream';
+
+/**
+ * The one module that touches uploaded files on local disk. Callers hold only an opaque key that this
+ * module generated; a key is never a path, so no caller can reach outside the storage root.
+ */
+
+/** Keys are lower-case UUIDs: nothing else is accepted, so "../x", "/etc" or "a/b" can never name a file. */
+const KEY_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
+
+export class StorageKeyError extends Error {
+  constructor(key: string) {
+    super(`Not a storage key: ${JSON.stringify(key.slice(0, 80))}`);
+  }
+}
+
+/** Read at call time, so tests and the e2e server can point it at their own folder. */
+export function storageRoot(): string {
+  return path.resolve(process.env.UPLOAD_DIR ?? path.join('data', 'uploads'));
+}
+
+export function isStorageKey(key: string): boolean {
+  return KEY_PATTERN.test(key);
+}
+
+function fileFor(key: string): string {
+  if (!isStorageKey(key)) throw new StorageKeyError(key);
+  const root = storageRoot();
+  // Two-character fan-out keeps any one folder small.
+  const file = path.join(root, key.slice(0, 2), key);
+  // Belt and braces: the pattern already rules this out.
+  if (path.relative(root, file).startsWith('..')) throw new StorageKeyError(key);
+  return file;
+}
+
+export function newStorageKey(): string {
+  return randomUUID();
+}
+
+/** Writes the bytes under a new key and returns it. Written to a temp name then renamed, so a reader never sees half a file. */
+export async function putObject(bytes: Uint8Array): Promise<string> {
+  const key = newStorageKey();
+  const file = fileFor(key);
+  await fsp.mkdir(path.dirname(file), { recursive: true });
+  const tmp = `${file}.${process.pid}.tmp`;
+  await fsp.writeFile(tmp, bytes, { flag: 'wx' });
+  await fsp.rename(tmp, file);
+  return key;
+}
+
+/** The whole object, or null when there is none under this key. */
+export async function getObject(key: string): Promise<Buffer | null> {
+  try {
+    return await fsp.readFile(fileFor(key));
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return null;
+    throw err;
+  }
+}
+
+/** A web stream of the object plus its size, or null when there is none. */
+export async function openObjectStream(key: string): Promise<{ stream: ReadableStream<Uint8Array>; bytes: number } | null> {
+  const file = fileFor(key);
+  try {
+    const stat = await fsp.stat(file);
+    const stream = Readable.toWeb(fs.createReadStream(file)) as ReadableStream<Uint8Array>;
+    return { stream, bytes: stat.size };
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return null;
+    throw err;
+  }
+}
+
+/** Removes the object; true if something was removed. */
+export async function deleteObject(key: string): Promise<boolean> {
+  try {
+    await fsp.unlink(fileFor(key));
+    return true;
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return false;
+    throw err;
+  }
+}
