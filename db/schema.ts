@@ -79,6 +79,20 @@ export interface AuditLogTable {
   created_at: Timestamp;
 }
 
+export interface SceneUploadTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  /** Opaque key from lib/storage.ts; never a path. */
+  storage_key: string;
+  mime: 'image/png' | 'image/jpeg' | 'image/webp';
+  bytes: number;
+  width: number | null;
+  height: number | null;
+  uploader_id: number;
+  created_at: Timestamp;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -86,6 +100,7 @@ export interface Database {
   scenes: SceneTable;
   scene_revisions: SceneRevisionTable;
   audit_log: AuditLogTable;
+  scene_uploads: SceneUploadTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -99,3 +114,5 @@ export type NewScene = Insertable<SceneTable>;
 export type SceneUpdate = Updateable<SceneTable>;
 export type SceneRevisionRow = Selectable<SceneRevisionTable>;
 export type AuditLogRow = Selectable<AuditLogTable>;
+export type SceneUploadRow = Selectable<SceneUploadTable>;
+export type NewSceneUpload = Insertable<SceneUploadTable>;

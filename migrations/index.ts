@@ -1,5 +1,6 @@
 import type { Migration } from 'kysely';
 import * as foundation from './2026-12-01T00-00_foundation';
+import * as sceneUploads from './2026-12-01T22-45_scene-uploads';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -7,4 +8,5 @@ import * as foundation from './2026-12-01T00-00_foundation';
  */
 export const migrations: Record<string, Migration> = {
   '2026-12-01T00-00_foundation': foundation,
+  '2026-12-01T22-45_scene-uploads': sceneUploads,
 };
