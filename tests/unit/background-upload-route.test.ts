@@ -17,7 +17,7 @@ let cobaltSceneId: number;
 
 const ctx = (params: Record<string, string>) => ({ params: Promise.resolve(params) });
 
-function upload(id: number, file: Blob | string | null, name = 'site.png') {
+function upload(id: number, file: Blob | null, name = 'site.png') {
   const form = new FormData();
   if (file !== null) form.set('file', file, name);
   return POST(new Request(`http://t/api/scenes/${id}/background`, { method: 'POST', body: form }), ctx({ id: String(id) }));
