@@ -1,0 +1,112 @@
+import { CAUTION_LINES } from '@/lib/caution';
+import { reactionMaxima, type ReactionMaximum } from './bearing';
+import { bearingCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck, type Check } from './checks';
+import { clearanceOver } from './clearance';
+import { percentOfRated } from './load-chart';
+import { upperWeight } from './load-weight';
+import { powerLineOver } from './power-lines';
+import { prepareLift, withLoadMass, type PreparedLift } from './prepare';
+import { createReactionState, describeReactions, reactionsAt } from './reactions';
+import type { LiftResult, WorstCase } from './result';
+import { shackleVerdict, slingVerdict, winchVerdict, type RiggingVerdict } from './rigging';
+import type { LiftInput, LiftInputIn } from './schema';
+import { insideDistance } from './support-polygon';
+import { sweepSamples, sweepTipping } from './sweep';
+import { assertStandsUnloaded } from './tipping';
+
+export interface AnalyzeOptions {
+  /** Sampling step of the swing sweeps, degrees (≤ 1; the sweep array uses it too). */
+  step?: number;
+}
+
+function worstCaseOf(p: PreparedLift, step: number): { worst: WorstCase; sweep: ReturnType<typeof sweepTipping> } {
+  const sweep = sweepTipping(p, step);
+  const w = sweep.worst;
+  return {
+    sweep,
+    worst: {
+      slew: w.slew,
+      percentOfTipping: w.percentOfTipping,
+      line: p.lines[w.line].id,
+      tippingLoad: w.percentOfTipping > 0 ? (100 * p.hookLoad) / w.percentOfTipping : null,
+    },
+  };
+}
+
+function riggingVerdicts(p: PreparedLift): RiggingVerdict[] {
+  const r = p.input.rigging;
+  if (!r) return [];
+  const load = p.input.load.mass;
+  return [
+    ...r.slings.map((s) => slingVerdict(s, load)),
+    ...r.shackles.map((s) => shackleVerdict(s, load)),
+    ...(r.winch ? [winchVerdict(r.winch, p.hookLoad)] : []),
+  ];
+}
+
+function massChecks(p: PreparedLift, worst: WorstCase, maxima: ReactionMaximum[], rigging: RiggingVerdict[], label: string): Check[] {
+  const { limits, soil, supports, loadChart, boom } = p.input;
+  const checks = [stabilityCheck(label ? 'stability:upper-weight' : 'stability', worst.percentOfTipping, worst.slew, worst.line, limits.percentOfTipping, label)];
+  maxima.forEach((m, i) => checks.push(bearingCheck(m, soil.allowable, supports[i].cribbingArea !== undefined, label)));
+  rigging.forEach((r) => checks.push(riggingCheck(r, label)));
+  if (loadChart) checks.push(loadChartCheck(percentOfRated(loadChart, p.radius, boom.length, p.hookLoad), p.radius, limits.percentOfRated, label));
+  return checks;
+}
+
+/** The whole analysis of a planned lift over its swing. Throws LiftError for input it cannot analyse. */
+export function analyzeLift(raw: LiftInputIn | LiftInput, options: AnalyzeOptions = {}): LiftResult {
+  const step = Math.min(1, options.step ?? 1);
+  const p = prepareLift(raw);
+  assertStandsUnloaded(p);
+  const { worst, sweep } = worstCaseOf(p, step);
+
+  const state = reactionsAt(p, worst.slew, createReactionState(p.supportX.length));
+  const atWorstCase = describeReactions(p, state);
+  const maxima = reactionMaxima(p, step);
+  const clearances = p.targets.map((t) => clearanceOver(p, t));
+  const powerLines = p.powerLines.map((l) => powerLineOver(p, l));
+  const rigging = riggingVerdicts(p);
+
+  const a = (worst.slew * Math.PI) / 180;
+  const hx = Math.cos(a) * p.hookX0 - Math.sin(a) * p.hookY0;
+  const hy = Math.sin(a) * p.hookX0 + Math.cos(a) * p.hookY0;
+  const W = p.fixedMass + p.rotMass + p.hookLoad;
+  const rx = p.rotMx0 * Math.cos(a) - p.rotMy0 * Math.sin(a);
+  const ry = p.rotMx0 * Math.sin(a) + p.rotMy0 * Math.cos(a);
+  const cgx = (p.fixedMx + rx + p.hookLoad * hx) / W;
+  const cgy = (p.fixedMy + ry + p.hookLoad * hy) / W;
+
+  const checks = massChecks(p, worst, maxima, rigging, '');
+  clearances.forEach((c) => checks.push(clearanceCheck(c, p.input.limits.clearance)));
+  powerLines.forEach((l) => checks.push(powerLineCheck(l)));
+
+  let upper: LiftResult['upperWeight'] = null;
+  if (p.input.weightUncertainty) {
+    const up = withLoadMass(p, upperWeight(p.input.load.mass, p.input.weightUncertainty));
+    const u = worstCaseOf(up, step).worst;
+    const uMax = reactionMaxima(up, step);
+    upper = { loadMass: up.input.load.mass, hookLoad: up.hookLoad, worstCase: u, reactionMaxima: uMax };
+    const label = `At the upper weight (${p.input.weightUncertainty} % over, ${Math.round(up.input.load.mass)} kg): `;
+    checks.push(...massChecks(up, u, uMax, riggingVerdicts(up), label));
+  }
+
+  const chart = p.input.loadChart;
+  return {
+    tippingLines: p.lines.map((l) => ({
+      id: l.id, from: l.from, to: l.to, distanceFromAxis: l.distanceFromAxis, distanceFromCG: insideDistance(l, cgx, cgy),
+      a: { x: l.ax, y: l.ay }, b: { x: l.bx, y: l.by },
+    })),
+    worstCase: worst,
+    sweep: sweepSamples(p, sweep),
+    lineChanges: sweep.changes,
+    reactions: { atWorstCase, maxima, tipsAtWorstCase: state.tips },
+    clearances,
+    powerLines,
+    rigging,
+    loadChart: chart ? { ...percentOfRated(chart, p.radius, p.input.boom.length, p.hookLoad), radius: p.radius, boomLength: p.input.boom.length } : null,
+    upperWeight: upper,
+    hook: { radius: p.radius, tipHeight: p.tipZ, loadBottom: p.loadBottom, hookLoad: p.hookLoad },
+    checks,
+    caution: CAUTION_LINES,
+  };
+}

@@ -1,0 +1,63 @@
+import { placeOutline } from './footprint';
+import { pointPolygonDistance, polygonGap } from './geometry';
+import { slewAt, type PreparedLift, type Target } from './prepare';
+import { lipschitzMin } from './search';
+
+/**
+ * Clearance between the load and the truck's own parts and obstacles as the load turns with the boom.
+ * Horizontal: the smallest plan gap over the swing (0 where the outlines overlap). Vertical: the load's
+ * bottom (tip height − hang) minus the part's top, which matters where they overlap in plan. A conflict
+ * is an overlap in plan with a negative vertical clearance.
+ */
+export interface Clearance {
+  target: string;
+  kind: 'body' | 'obstacle';
+  /** Smallest plan gap over the swing, m (0 when the outlines overlap in plan). */
+  horizontal: number;
+  /** Load bottom minus the part's top, m. */
+  vertical: number;
+  /** Slew of the smallest gap (the first slew of overlap when they overlap). */
+  slew: number;
+  overlapsInPlan: boolean;
+  conflict: boolean;
+}
+
+/** Reused outline buffer: the gap function runs thousands of times per analysis. */
+let buf = new Float64Array(64);
+
+/** Plan gap between the load outline at slew `deg` and one target. */
+export function gapAt(p: PreparedLift, target: Target, deg: number): number {
+  const a = (deg * Math.PI) / 180;
+  const c = Math.cos(a);
+  const s = Math.sin(a);
+  const hx = c * p.hookX0 - s * p.hookY0;
+  const hy = s * p.hookX0 + c * p.hookY0;
+  const fp = p.footprint;
+  if (fp.kind === 'circle') return Math.max(0, pointPolygonDistance(hx, hy, target.poly, target.n) - fp.radius);
+  if (buf.length < 2 * fp.n) buf = new Float64Array(2 * fp.n);
+  placeOutline(fp.local, fp.n, c, s, hx, hy, buf);
+  return polygonGap(buf, fp.n, target.poly, target.n);
+}
+
+/** Tolerances of the clearance walk: 2 mm, plus 0.2 % of the gap for far-away targets. */
+const WALK = { tolAbs: 0.002, tolRel: 0.002, minStep: 0.005, coarseStep: 15 };
+
+export function clearanceOver(p: PreparedLift, target: Target): Clearance {
+  // Outline points move at most (radius + reach) metres per radian of slew.
+  const lipschitz = ((p.radius + p.footprint.reach) * Math.PI) / 180;
+  const r = lipschitzMin((t) => gapAt(p, target, slewAt(p, t)), p.span, lipschitz, WALK);
+  return describe(p, target, r.v, slewAt(p, r.t));
+}
+
+export function clearanceAt(p: PreparedLift, target: Target, deg: number): Clearance {
+  return describe(p, target, gapAt(p, target, deg), deg);
+}
+
+function describe(p: PreparedLift, target: Target, horizontal: number, slew: number): Clearance {
+  const vertical = p.loadBottom - target.top;
+  const overlapsInPlan = horizontal <= 0;
+  return { target: target.id, kind: target.kind, horizontal, vertical, slew, overlapsInPlan, conflict: overlapsInPlan && vertical < 0 };
+}
+
+/** The plan's clearance limit is met when the load passes far enough beside it or far enough above it. */
+export const clearanceWithin = (c: Clearance, limit: number) => c.horizontal >= limit || c.vertical >= limit;

@@ -1,0 +1,170 @@
+import { assertMass, LiftError } from './errors';
+import { signedArea2, toFlat } from './geometry';
+import { validateLoadChart } from './load-chart';
+import { liftInputSchema, type LiftInput, type LiftInputIn, type PowerLine, type Prism } from './schema';
+import { siteToTruck, type SitePose } from './types';
+import { supportPolygon, type SupportPoint, type TippingLineGeom } from './support-polygon';
+import { footprintLocal, type FootprintLocal } from './footprint';
+
+/** A body part or obstacle as the clearance sweep sees it: a flat polygon in the truck frame. */
+export interface Target {
+  id: string;
+  kind: 'body' | 'obstacle';
+  poly: Float64Array;
+  n: number;
+  top: number;
+}
+
+/** Everything the per-angle evaluations need, worked out once per input. */
+export interface PreparedLift {
+  input: LiftInput;
+  hull: SupportPoint[];
+  lines: TippingLineGeom[];
+  /** Non-rotating masses: total and first moments about the axis (kg, kg·m). */
+  fixedMass: number;
+  fixedMx: number;
+  fixedMy: number;
+  /** Masses that turn with the slew, boom included, with first moments at slew 0. */
+  rotMass: number;
+  rotMx0: number;
+  rotMy0: number;
+  /** Hook load = load + block + rigging, kg. */
+  hookLoad: number;
+  hookX0: number;
+  hookY0: number;
+  /** Radius of the hook from the slew axis, m (constant over the swing). */
+  radius: number;
+  pivotX0: number;
+  pivotY0: number;
+  pivotZ: number;
+  tipZ: number;
+  loadBottom: number;
+  loadTop: number;
+  footprint: FootprintLocal;
+  supportX: Float64Array;
+  supportY: Float64Array;
+  targets: Target[];
+  powerLines: PowerLine[];
+  /** Planned arc: slew(t) = from + sign·t for t in [0, span] degrees. */
+  from: number;
+  span: number;
+  sign: 1 | -1;
+}
+
+function parseInput(raw: LiftInputIn | LiftInput): LiftInput {
+  const parsed = liftInputSchema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const issue = parsed.error.issues[0];
+  const field = issue.path.map(String).join('.') || 'input';
+  const last = String(issue.path[issue.path.length - 1] ?? '');
+  const code = /mass$/i.test(last) ? 'invalid-mass' : 'invalid-input';
+  throw new LiftError(code, `${field}: ${issue.message}`, field);
+}
+
+function checkPolygon(points: readonly { x: number; y: number }[], field: string, what: string): Float64Array {
+  const flat = toFlat(points);
+  const distinct = new Set(points.map((p) => `${p.x},${p.y}`)).size;
+  if (distinct < 3 || Math.abs(signedArea2(flat, points.length)) < 1e-9) {
+    throw new LiftError('degenerate-polygon', `${what} has no area: its outline needs three or more points not on one line.`, field);
+  }
+  return flat;
+}
+
+function siteObjects(input: LiftInput): { obstacles: Prism[]; powerLines: PowerLine[] } {
+  const site = input.site;
+  if (!site) return { obstacles: [], powerLines: [] };
+  const pose: SitePose = { x: site.x, y: site.y, heading: site.heading };
+  return {
+    obstacles: site.obstacles.map((o) => ({ ...o, polygon: o.polygon.map((p) => siteToTruck(p, pose)) })),
+    powerLines: site.powerLines.map((l) => ({
+      ...l,
+      a: { ...siteToTruck(l.a, pose), z: l.a.z },
+      b: { ...siteToTruck(l.b, pose), z: l.b.z },
+    })),
+  };
+}
+
+/** Arc from `from` to `to` in `direction`; a span of exactly 360 is kept as a full turn. */
+export function arcOf(swing: LiftInput['swing']): { from: number; span: number; sign: 1 | -1 } {
+  const sign = swing.direction === 'ccw' ? 1 : -1;
+  const raw = sign * (swing.to - swing.from);
+  const span = raw >= 0 && raw <= 360 ? raw : ((raw % 360) + 360) % 360;
+  return { from: swing.from, span, sign };
+}
+
+/** Validates the input (typed errors) and precomputes what every slew evaluation shares. */
+export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
+  const input = parseInput(raw);
+  input.masses.forEach((m, i) => assertMass(m.mass, `masses.${i}.mass`, `Mass "${m.id}"`));
+  assertMass(input.boom.mass, 'boom.mass', 'The boom');
+  assertMass(input.load.mass, 'load.mass', 'The load');
+  assertMass(input.hook.blockMass, 'hook.blockMass', 'The hook block');
+  assertMass(input.hook.riggingMass, 'hook.riggingMass', 'The rigging');
+  input.supports.forEach((s, i) => assertMass(s.cribbingMass ?? 0, `supports.${i}.cribbingMass`, `Cribbing under "${s.id}"`));
+  if (!(input.boom.length > 0)) {
+    throw new LiftError('zero-length-boom', `The boom length is ${input.boom.length} m; give the length from pivot to tip.`, 'boom.length');
+  }
+  const { hull, lines } = supportPolygon(input.supports);
+  if (input.loadChart) validateLoadChart(input.loadChart);
+
+  const fromSite = siteObjects(input);
+  const targets: Target[] = [];
+  input.bodies.forEach((b, i) => {
+    targets.push({ id: b.id, kind: 'body', poly: checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), n: b.polygon.length, top: b.top });
+  });
+  [...input.obstacles, ...fromSite.obstacles].forEach((o, i) => {
+    const field = i < input.obstacles.length ? `obstacles.${i}.polygon` : `site.obstacles.${i - input.obstacles.length}.polygon`;
+    targets.push({ id: o.id, kind: 'obstacle', poly: checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), n: o.polygon.length, top: o.top });
+  });
+  if (input.load.footprint.kind === 'polygon') checkPolygon(input.load.footprint.points, 'load.footprint.points', 'The load footprint');
+
+  let fixedMass = 0, fixedMx = 0, fixedMy = 0, rotMass = 0, rotMx0 = 0, rotMy0 = 0;
+  for (const m of input.masses) {
+    if (m.rotates) {
+      rotMass += m.mass;
+      rotMx0 += m.mass * m.x;
+      rotMy0 += m.mass * m.y;
+    } else {
+      fixedMass += m.mass;
+      fixedMx += m.mass * m.x;
+      fixedMy += m.mass * m.y;
+    }
+  }
+  const { pivot, length, elevation, mass: boomMass, cgFraction } = input.boom;
+  const el = (elevation * Math.PI) / 180;
+  const reach = length * Math.cos(el);
+  rotMass += boomMass;
+  rotMx0 += boomMass * (pivot.x + cgFraction * reach);
+  rotMy0 += boomMass * pivot.y;
+  const hookX0 = pivot.x + reach;
+  const hookY0 = pivot.y;
+  const tipZ = pivot.z + length * Math.sin(el);
+  const loadBottom = tipZ - input.load.hang;
+  const { from, span, sign } = arcOf(input.swing);
+  return {
+    input, hull, lines,
+    fixedMass, fixedMx, fixedMy, rotMass, rotMx0, rotMy0,
+    hookLoad: input.load.mass + input.hook.blockMass + input.hook.riggingMass,
+    hookX0, hookY0, radius: Math.hypot(hookX0, hookY0),
+    pivotX0: pivot.x, pivotY0: pivot.y, pivotZ: pivot.z, tipZ,
+    loadBottom, loadTop: loadBottom + input.load.height,
+    footprint: footprintLocal(input.load.footprint),
+    supportX: Float64Array.from(input.supports, (s) => s.x),
+    supportY: Float64Array.from(input.supports, (s) => s.y),
+    targets,
+    powerLines: [...input.powerLines, ...fromSite.powerLines],
+    from, span, sign,
+  };
+}
+
+/** The same prepared lift with another load mass (for the upper-weight case and property tests). */
+export function withLoadMass(p: PreparedLift, loadMass: number): PreparedLift {
+  assertMass(loadMass, 'load.mass', 'The load');
+  const input = { ...p.input, load: { ...p.input.load, mass: loadMass } };
+  return { ...p, input, hookLoad: loadMass + input.hook.blockMass + input.hook.riggingMass };
+}
+
+export const slewAt = (p: PreparedLift, t: number) => {
+  const s = (p.from + p.sign * t) % 360;
+  return s < 0 ? s + 360 : s;
+};

@@ -1,0 +1,55 @@
+import type { ReactionMaximum } from './bearing';
+import type { Check } from './checks';
+import type { Clearance } from './clearance';
+import type { ChartLookup } from './load-chart';
+import type { PowerLineClearance } from './power-lines';
+import type { SupportReaction } from './reactions';
+import type { RiggingVerdict } from './rigging';
+import type { LineChange, SweepSample } from './sweep';
+
+/** The analysis result. The field names of issue 3's contract are kept; the rest are additions. */
+export interface TippingLineResult {
+  id: string;
+  from: string;
+  to: string;
+  /** Perpendicular distance from the slew axis, m (positive: the axis is inside). */
+  distanceFromAxis: number;
+  /** Perpendicular distance from the combined CG (hook load included) at the worst-case slew, m (positive inside). */
+  distanceFromCG: number;
+  a: { x: number; y: number };
+  b: { x: number; y: number };
+}
+
+export interface WorstCase {
+  slew: number;
+  percentOfTipping: number;
+  line: string;
+  /** Hook load that would tip the truck about that line at that slew, kg (null when the hook is inside every line). */
+  tippingLoad: number | null;
+}
+
+export interface UpperWeightResult {
+  /** Load mass at the upper end of its uncertainty, kg. */
+  loadMass: number;
+  hookLoad: number;
+  worstCase: WorstCase;
+  reactionMaxima: ReactionMaximum[];
+}
+
+export interface LiftResult {
+  tippingLines: TippingLineResult[];
+  worstCase: WorstCase;
+  sweep: SweepSample[];
+  /** Slews where the governing tipping line changes. */
+  lineChanges: LineChange[];
+  reactions: { atWorstCase: SupportReaction[]; maxima: ReactionMaximum[]; tipsAtWorstCase: boolean };
+  clearances: Clearance[];
+  powerLines: PowerLineClearance[];
+  rigging: RiggingVerdict[];
+  loadChart: (ChartLookup & { percent: number | null; radius: number; boomLength: number }) | null;
+  upperWeight: UpperWeightResult | null;
+  hook: { radius: number; tipHeight: number; loadBottom: number; hookLoad: number };
+  checks: Check[];
+  /** The standing caution that goes with every result. */
+  caution: readonly string[];
+}
