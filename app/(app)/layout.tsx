@@ -1,0 +1,13 @@
+import { redirect } from 'next/navigation';
+import type { ReactNode } from 'react';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { AppShell } from '@/components/shell/app-shell';
+
+export const dynamic = 'force-dynamic';
+
+/** Session guard for every signed-in page; each page still checks its own role and organisation. */
+export default async function AppLayout({ children }: { children: ReactNode }) {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  return <AppShell user={user}>{children}</AppShell>;
+}

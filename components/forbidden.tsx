@@ -1,0 +1,20 @@
+import { ButtonLink } from '@/components/ui/button';
+import { roleLabel } from '@/components/shell/app-shell';
+import type { CurrentUser } from '@/lib/auth/current-user';
+
+/** The 403 page body: says what is missing and who can help, instead of an unexplained blank. */
+export function Forbidden({ user, needs }: { user: CurrentUser; needs: string }) {
+  return (
+    <div className="mx-auto mt-8 max-w-xl rounded-plate border-2 border-ink bg-paper-raised p-8 shadow-plate">
+      <p className="text-caption font-bold uppercase tracking-[0.14em] text-over">403 · Not available for your role</p>
+      <h1 className="mt-2 text-title text-ink">This page is for {needs}</h1>
+      <p className="mt-3 text-body text-ink-soft">
+        You are signed in as <strong>{user.name}</strong>, {roleLabel(user.role).toLowerCase()} at {user.organisationName}. Ask an administrator in your
+        organisation if you need access.
+      </p>
+      <ButtonLink href="/scenes" variant="secondary" className="mt-6">
+        Back to scenes
+      </ButtonLink>
+    </div>
+  );
+}

@@ -1,0 +1,45 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+import { cx } from '@/components/ui/cx';
+import { AppIcon, type IconName } from '@/components/ui/icons';
+
+export interface NavItem {
+  href: string;
+  label: string;
+  icon: IconName;
+}
+
+/** Main navigation. Vertical in the laptop / landscape sidebar, a scrolling row of tabs on a portrait tablet. */
+export function AppNav({ items, orientation }: { items: NavItem[]; orientation: 'vertical' | 'horizontal' }) {
+  const path = usePathname();
+  const vertical = orientation === 'vertical';
+  return (
+    <nav aria-label="Main">
+      <ul className={cx(vertical ? 'flex flex-col gap-1' : 'flex gap-1 overflow-x-auto')}>
+        {items.map((item) => {
+          const active = path === item.href || path.startsWith(item.href + '/');
+          return (
+            <li key={item.href}>
+              <Link
+                href={item.href}
+                aria-current={active ? 'page' : undefined}
+                className={cx(
+                  'flex min-h-touch items-center gap-3 rounded-plate px-3 text-body font-semibold whitespace-nowrap',
+                  vertical ? 'border-l-4' : 'border-b-4 rounded-b-none',
+                  active ? 'border-signal bg-paper-raised/10 text-paper-raised' : 'border-transparent text-paper-raised/80 hover:bg-paper-raised/10 hover:text-paper-raised',
+                )}
+              >
+                <span className={cx(active ? 'text-signal' : 'text-teal-bright')}>
+                  <AppIcon name={item.icon} />
+                </span>
+                {item.label}
+              </Link>
+            </li>
+          );
+        })}
+      </ul>
+    </nav>
+  );
+}
