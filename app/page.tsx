@@ -1,3 +1,0 @@
-export default function Home() {
-  return <main className="p-8 text-2xl font-semibold">Arcline</main>;
-}
