@@ -63,7 +63,17 @@ export interface ListScenesOptions {
   pageSize: number;
   title?: string;
   status?: SceneStatus;
+  sort?: 'updatedAt' | 'title' | 'status' | 'ownerName' | 'revision';
+  dir?: 'asc' | 'desc';
 }
+
+const SORT_COLUMNS = {
+  updatedAt: 'scenes.updated_at',
+  title: 'scenes.title',
+  status: 'scenes.status',
+  ownerName: 'users.name',
+  revision: 'scenes.revision',
+} as const;
 
 export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOptions) {
   let q = visibleTo(db, user);
@@ -72,8 +82,8 @@ export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOpti
   const total = await q.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
   const rows = await q
     .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'users.name as owner_name'])
-    .orderBy('scenes.updated_at', 'desc')
-    .orderBy('scenes.id', 'desc')
+    .orderBy(SORT_COLUMNS[opts.sort ?? 'updatedAt'], opts.dir ?? 'desc')
+    .orderBy('scenes.id', opts.dir ?? 'desc')
     .limit(opts.pageSize)
     .offset((opts.page - 1) * opts.pageSize)
     .execute();

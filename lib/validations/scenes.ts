@@ -42,4 +42,8 @@ export const listScenesQuery = z.object({
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
   title: z.string().trim().max(120).optional(),
   status: sceneStatus.optional(),
+  sort: z.enum(['updatedAt', 'title', 'status', 'ownerName', 'revision']).default('updatedAt'),
+  dir: z.enum(['asc', 'desc']).default('desc'),
 });
+export type ListScenesQuery = z.infer<typeof listScenesQuery>;
+export const SCENE_SORT_KEYS = ['updatedAt', 'title', 'status', 'ownerName', 'revision'] as const;
