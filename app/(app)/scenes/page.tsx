@@ -1,0 +1,38 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { PageHeader } from '@/components/ui/page-header';
+import { ButtonLink } from '@/components/ui/button';
+import { ScenesTable } from '@/components/scenes/scenes-table';
+
+export const metadata: Metadata = { title: 'Scenes' };
+
+const WHAT_YOU_SEE = {
+  operator: 'Your own scenes, and the approved scenes of your organisation.',
+  supervisor: 'Every scene in your organisation.',
+  trainer: 'Every scene in your organisation, including the training set.',
+  admin: 'Every scene in your organisation.',
+} as const;
+
+export default async function ScenesPage() {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  const canCreate = user.role === 'operator';
+  return (
+    <>
+      <PageHeader
+        eyebrow={user.organisationName}
+        title="Scenes"
+        description={WHAT_YOU_SEE[user.role]}
+        actions={
+          canCreate ? (
+            <ButtonLink href="/scenes/new" variant="signal" size="lg">
+              + New scene
+            </ButtonLink>
+          ) : undefined
+        }
+      />
+      <ScenesTable canCreate={canCreate} />
+    </>
+  );
+}
