@@ -1,0 +1,70 @@
+/** Client calls to the scenes API, over an injectable fetch so the saving logic can be tested without a server. */
+
+export type Fetch = (input: string, init?: RequestInit) => Promise<Response>;
+
+export interface SavedScene {
+  id: number;
+  title: string;
+  revision: number;
+  updatedAt: string;
+  document: Record<string, unknown>;
+}
+
+export type PutOutcome =
+  | { kind: 'saved'; scene: SavedScene }
+  | { kind: 'conflict'; currentRevision: number | null; message: string }
+  /** The request never reached the server (no connection, DNS, reset). */
+  | { kind: 'network' }
+  | { kind: 'refused'; status: number; message: string };
+
+async function errorMessage(res: Response): Promise<string> {
+  try {
+    const body = (await res.json()) as { error?: string };
+    return body.error ?? `The server answered ${res.status}`;
+  } catch {
+    return `The server answered ${res.status}`;
+  }
+}
+
+export async function putSceneDocument(fetchFn: Fetch, sceneId: number, revision: number, document: unknown): Promise<PutOutcome> {
+  let res: Response;
+  try {
+    res = await fetchFn(`/api/scenes/${sceneId}`, {
+      method: 'PUT',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ revision, document }),
+    });
+  } catch {
+    return { kind: 'network' };
+  }
+  if (res.ok) return { kind: 'saved', scene: (await res.json()) as SavedScene };
+  if (res.status === 409) {
+    const body = (await res.json().catch(() => ({}))) as { error?: string; currentRevision?: number };
+    return { kind: 'conflict', currentRevision: body.currentRevision ?? null, message: body.error ?? 'Someone else saved this scene first' };
+  }
+  return { kind: 'refused', status: res.status, message: await errorMessage(res) };
+}
+
+export async function getScene(fetchFn: Fetch, sceneId: number): Promise<SavedScene> {
+  const res = await fetchFn(`/api/scenes/${sceneId}`, { headers: { Accept: 'application/json' } });
+  if (!res.ok) throw new Error(await errorMessage(res));
+  return (await res.json()) as SavedScene;
+}
+
+/** POST /api/scenes: a new scene owned by the signed-in operator. */
+export async function createScene(fetchFn: Fetch, title: string, document: unknown): Promise<SavedScene> {
+  const res = await fetchFn('/api/scenes', {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ title, document }),
+  });
+  if (!res.ok) throw new Error(await errorMessage(res));
+  return (await res.json()) as SavedScene;
+}
+
+/** "<title> (my copy)", shortened so it stays within the 120-character title limit. */
+export function copyTitle(title: string): string {
+  const suffix = ' (my copy)';
+  const base = title.trim().slice(0, 120 - suffix.length).trimEnd();
+  return `${base}${suffix}`;
+}
