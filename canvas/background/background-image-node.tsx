@@ -14,8 +14,6 @@ interface View {
 interface Props extends View {
   sceneId: number;
   background: BackgroundPlacement;
-  /** Dragging an unlocked image ends here with its new top-left corner, site metres. */
-  onMoved?(next: { x: number; y: number }): void;
 }
 
 function useHtmlImage(url: string): HTMLImageElement | null {
@@ -38,13 +36,15 @@ const toScreen = (v: View, p: { x: number; y: number }) => ({
   y: v.viewport.height / 2 - (p.y - v.camera.y) * v.camera.pxPerM,
 });
 
-/** The site image, drawn under the plan at its calibrated scale. Put it in the lowest layer. */
-export function BackgroundImageNode({ sceneId, background, camera, viewport, onMoved }: Props) {
+/**
+ * The site image, drawn under the plan at its calibrated scale. Put it in the lowest layer. It never takes
+ * pointer events: the editor does its own hit-testing, and the image is moved from the panel.
+ */
+export function BackgroundImageNode({ sceneId, background, camera, viewport }: Props) {
   const img = useHtmlImage(backgroundUrl(sceneId, background.uploadId));
   if (!img) return null;
   const at = toScreen({ camera, viewport }, background);
   const scale = background.metresPerPixel * camera.pxPerM;
-  const draggable = !background.locked && !!onMoved;
   return (
     <KonvaImage
       image={img}
@@ -56,12 +56,7 @@ export function BackgroundImageNode({ sceneId, background, camera, viewport, onM
       // Document rotation is counter-clockwise seen from above; Konva turns clockwise on screen.
       rotation={-background.rotation}
       opacity={background.opacity}
-      listening={draggable}
-      draggable={draggable}
-      onDragEnd={(e) => {
-        const p = e.target.position();
-        onMoved?.({ x: camera.x + (p.x - viewport.width / 2) / camera.pxPerM, y: camera.y - (p.y - viewport.height / 2) / camera.pxPerM });
-      }}
+      listening={false}
     />
   );
 }

@@ -10,8 +10,8 @@ export const DRAFT_DEBOUNCE_MS = 150;
 export interface AutosaveOptions<Doc> {
   sceneId: number;
   title: string;
-  /** The server copy the editor opened: revision, updatedAt (ISO) and document. */
-  server: { revision: number; updatedAt: string };
+  /** The server copy the editor opened: its revision and, when known, when it was saved (ISO). */
+  server: { revision: number; updatedAt?: string };
   source: DocumentSource<Doc>;
   drafts: DraftStore;
   network: NetworkSignal;
@@ -153,7 +153,9 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
       if (draft) {
         // A draft on the same base revision holds edits the server never got. A draft on an older base is
         // still newer work if it was written after the server copy; sending it then surfaces the conflict.
-        const newer = draft.baseRevision === o.server.revision || (draft.baseRevision < o.server.revision && draft.savedAt > Date.parse(o.server.updatedAt));
+        // Without the server's time, an older-base draft is sent anyway and the conflict choice decides.
+        const serverTime = o.server.updatedAt ? Date.parse(o.server.updatedAt) : -Infinity;
+        const newer = draft.baseRevision === o.server.revision || (draft.baseRevision < o.server.revision && draft.savedAt > serverTime);
         if (newer && draft.baseRevision <= o.server.revision) {
           o.source.replaceDocument(draft.document as Doc, { revision: draft.baseRevision });
           lastSeenDoc = o.source.getDocument();

@@ -11,7 +11,7 @@ interface Props<Doc> {
   store: EditorStoreLike<Doc>;
   sceneId: number;
   title: string;
-  server: { revision: number; updatedAt: string };
+  server: { revision: number; updatedAt?: string };
   /** The owner operator edits (and so autosaves); other readers only export. */
   canEdit: boolean;
   canImport: boolean;

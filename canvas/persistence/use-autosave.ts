@@ -9,7 +9,7 @@ import { networkFromBrowser, type SaveState } from './types';
 export interface UseAutosaveOptions {
   sceneId: number;
   title: string;
-  server: { revision: number; updatedAt: string };
+  server: { revision: number; updatedAt?: string };
   /** Read-only viewers (supervisor, trainer) never save. */
   enabled: boolean;
 }
