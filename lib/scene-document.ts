@@ -2,6 +2,5 @@
  * A new scene's document. The editor owns the document schema (canvas/document); this stays the one
  * place the server gets a blank document from, so the two cannot drift.
  */
-export function emptySceneDocument(): Record<string, unknown> {
-  return { version: 1, objects: [] };
-}
+export { emptySceneDocument } from '@/canvas/document/empty';
+export type { SceneDocument } from '@/canvas/document/schema';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { SCENE_STATUSES } from '@/db/schema';
+import { storedSceneDocumentSchema } from '@/canvas/document/parse';
 
 /** Largest scene document accepted, as serialised JSON. */
 export const MAX_DOCUMENT_CHARS = 1_500_000;
@@ -11,12 +12,14 @@ export const sceneTitle = z
   .max(120, 'Title can be at most 120 characters');
 
 /**
- * The scene document is checked here only as a JSON object of bounded size; the editor's own versioned
- * schema (canvas/document) validates its contents.
+ * The scene document: the editor's versioned schema (canvas/document), shared by client and server.
+ * Older versions are migrated before validation; error paths name the field ("document.objects.2.height").
  */
 export const sceneDocument = z
-  .record(z.string(), z.unknown(), { error: 'Document must be a JSON object' })
-  .refine((d) => JSON.stringify(d).length <= MAX_DOCUMENT_CHARS, 'Document is larger than 1.5 MB');
+  .unknown()
+  .refine((d) => d !== null && typeof d === 'object' && !Array.isArray(d), 'Document must be a JSON object')
+  .refine((d) => typeof d !== 'object' || JSON.stringify(d).length <= MAX_DOCUMENT_CHARS, 'Document is larger than 1.5 MB')
+  .pipe(storedSceneDocumentSchema);
 
 export const sceneStatus = z.enum(SCENE_STATUSES as [string, ...string[]]) as z.ZodType<(typeof SCENE_STATUSES)[number]>;
 
