@@ -40,6 +40,11 @@ export const riggingPickSchema = z.object({
   angleFromHorizontal: z.number().gt(0).max(90).default(90),
   /** Rated capacity for the chosen hitch, kg. */
   ratingKg: z.number().positive().max(500_000),
+  /** The item's ratings per hitch as the inventory gave them, so a hitch change picks the right one. */
+  ratings: z
+    .object({ vertical: z.number().positive().nullable(), choker: z.number().positive().nullable(), basket: z.number().positive().nullable() })
+    .nullable()
+    .default(null),
   massKg: massKg.max(2000).default(0),
 });
 

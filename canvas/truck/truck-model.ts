@@ -1,4 +1,5 @@
 import type { Pt, Polygon } from '../geometry/vec';
+import type { TruckSpec } from '@/lib/equipment/truck-spec';
 import { DEG } from '../geometry/vec';
 
 /**
@@ -37,8 +38,8 @@ export interface TruckModel {
   boom: { pivot: { x: number; y: number; z: number }; minLength: number; maxLength: number; minElevation: number; maxElevation: number };
   /** True when the profile carried no usable geometry and the outline is the built-in example. */
   exampleOutline: boolean;
-  /** The profile's spec as stored, for the engine adapter. */
-  spec: unknown;
+  /** The validated spec, for the engine adapter; null for the example outline (no analysis). */
+  spec: TruckSpec | null;
 }
 
 /** Pad centre for a leg set `extension` metres out from retracted (truck frame). */

@@ -1,0 +1,52 @@
+import { notFound, redirect } from 'next/navigation';
+import type { Metadata } from 'next';
+import { getDb } from '@/db';
+import { getScene } from '@/db/repositories/scenes';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { parseSceneDocument } from '@/canvas/document/parse';
+import { SceneEditorLoader } from '@/canvas/scene-editor-loader';
+import type { TruckProfileInput } from '@/canvas/truck/from-spec';
+import { loadSceneProfiles } from '@/canvas/truck/load-profiles';
+
+export const metadata: Metadata = { title: 'Scene editor' };
+
+/** Loads and authorises on the server: signed in, the scene in the user's organisation, else 404. */
+export default async function SceneEditorPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id: raw } = await params;
+  const user = await getCurrentUser();
+  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/scenes/${raw}`)}`);
+  const id = Number(raw);
+  if (!Number.isInteger(id) || id <= 0) notFound();
+  const db = getDb();
+  const scene = await getScene(db, user, id);
+  if (!scene) notFound();
+  const parsed = parseSceneDocument(scene.document);
+  if (!parsed.ok) {
+    return (
+      <main className="mx-auto max-w-xl p-8">
+        <h1 className="text-xl font-semibold">This scene’s sketch cannot be opened</h1>
+        <p className="mt-2 text-ink-soft">The saved document does not match the editor’s format:</p>
+        <ul className="mt-3 list-disc pl-6 text-sm">
+          {parsed.issues.slice(0, 8).map((i) => (
+            <li key={i.path + i.message}>
+              <code>{i.path || 'document'}</code>: {i.message}
+            </li>
+          ))}
+        </ul>
+      </main>
+    );
+  }
+  const profiles: TruckProfileInput[] = await loadSceneProfiles(db, user.organisationId, parsed.document, scene.equipmentProfileId);
+  // Only the owning operator edits; everyone else who can see the scene gets it read-only.
+  const readOnly = !(user.role === 'operator' && scene.ownerId === user.id);
+  return (
+    <SceneEditorLoader
+      scene={{ id: scene.id, title: scene.title, status: scene.status, revision: scene.revision, ownerName: scene.ownerName }}
+      document={parsed.document}
+      profiles={profiles}
+      readOnly={readOnly}
+      units={user.units}
+      user={{ name: user.name, role: user.role }}
+    />
+  );
+}

@@ -1,0 +1,75 @@
+'use client';
+import type { LoadObject, LoadShape } from '../../document/objects';
+import { useEditorContext, useEditorState } from '../../editor-context';
+import { updateObject } from '../../commands/objects';
+import { LengthField, MassField, NumberField, SelectField } from '../fields';
+import { Section } from './section';
+import { loadMass } from '../../shapes/load/geometry';
+import { formatMass } from '@/lib/units';
+import { RiggingPicker } from './rigging-picker';
+
+/** The load's shape, weight (given or estimated), hang and rigging. */
+export function LoadInspector({ load }: { load: LoadObject }) {
+  const { store } = useEditorContext();
+  const units = useEditorState((s) => s.units);
+  const ro = useEditorState((s) => s.readOnly) || load.locked;
+  const up = (patch: Partial<LoadObject>) => store.getState().run(updateObject(load.id, patch));
+  const shape = (patch: Partial<LoadShape>) => up({ shape: { ...load.shape, ...patch } as LoadShape });
+  const s = load.shape;
+  return (
+    <>
+      <Section title="Shape">
+        <SelectField
+          label="Kind"
+          value={s.kind}
+          disabled={ro}
+          options={[
+            { value: 'coil', label: 'Steel coil' },
+            { value: 'box', label: 'Box or crate' },
+            { value: 'vehicle', label: 'Vehicle' },
+          ]}
+          onCommit={(kind) =>
+            up({
+              shape: kind === 'coil' ? { kind, eye: 'horizontal', outerDiameter: 1.8, innerDiameter: 0.6, width: 1.5 } : kind === 'box' ? { kind, length: 2.4, width: 1.2, height: 1.2 } : { kind, length: 7.5, width: 2.4, height: 3.2 },
+              ...(kind !== 'coil' && load.massMode === 'estimate' ? { massMode: 'given', massKg: loadMass(load) } : {}),
+            })
+          }
+        />
+        {s.kind === 'coil' ? (
+          <>
+            <SelectField label="Eye" value={s.eye} disabled={ro} options={[{ value: 'horizontal', label: 'Eye horizontal (on its roll)' }, { value: 'vertical', label: 'Eye vertical (on its face)' }]} onCommit={(eye) => shape({ eye })} />
+            <LengthField label="Outside diameter" value={s.outerDiameter} units={units} min={0.1} disabled={ro} onCommit={(outerDiameter) => shape({ outerDiameter })} />
+            <LengthField label="Inside diameter" value={s.innerDiameter} units={units} min={0.01} disabled={ro} onCommit={(innerDiameter) => shape({ innerDiameter })} />
+            <LengthField label="Width" value={s.width} units={units} min={0.1} disabled={ro} onCommit={(width) => shape({ width })} />
+          </>
+        ) : (
+          <>
+            <LengthField label="Length" value={s.length} units={units} min={0.1} disabled={ro} onCommit={(length) => shape({ length })} />
+            <LengthField label="Width" value={s.width} units={units} min={0.1} disabled={ro} onCommit={(width) => shape({ width })} />
+            <LengthField label="Height" value={s.height} units={units} min={0.1} disabled={ro} onCommit={(height) => shape({ height })} />
+          </>
+        )}
+      </Section>
+      <Section title="Weight">
+        <SelectField label="Weight from" value={load.massMode} disabled={ro} options={[{ value: 'given', label: 'Known weight' }, { value: 'estimate', label: 'Estimate from size' }]} onCommit={(massMode) => up({ massMode, ...(massMode === 'given' ? { massKg: Math.round(loadMass(load)) } : {}) })} />
+        {load.massMode === 'given' ? (
+          <MassField label="Weight" value={load.massKg} units={units} disabled={ro} onCommit={(massKg) => up({ massKg })} testId="field-load-mass" />
+        ) : (
+          <NumberField label="Density (kg/m³)" value={load.density} min={1} digits={0} disabled={ro} onCommit={(density) => up({ density })} />
+        )}
+        <NumberField label="Uncertainty (±%)" value={load.weightUncertainty} suffix="%" min={0} max={100} disabled={ro} onCommit={(weightUncertainty) => up({ weightUncertainty })} />
+        <div className="col-span-2 text-sm" data-testid="load-weight">
+          Planned weight <strong>{formatMass(loadMass(load), units)}</strong>
+          {load.weightUncertainty > 0 && <> · upper {formatMass(loadMass(load) * (1 + load.weightUncertainty / 100), units)}</>}
+        </div>
+      </Section>
+      <Section title="Hook and centre of gravity">
+        <LengthField label="Tip to load bottom" value={load.hang} units={units} min={0} disabled={ro} onCommit={(hang) => up({ hang })} />
+        <MassField label="Hook block" value={load.blockMassKg} units={units} disabled={ro} onCommit={(blockMassKg) => up({ blockMassKg })} />
+        <LengthField label="CG along" value={load.cg.x} units={units} disabled={ro} onCommit={(x) => up({ cg: { ...load.cg, x } })} />
+        <LengthField label="CG up from bottom" value={load.cg.z} units={units} min={0} disabled={ro} onCommit={(z) => up({ cg: { ...load.cg, z } })} />
+      </Section>
+      <RiggingPicker load={load} />
+    </>
+  );
+}

@@ -1,0 +1,67 @@
+'use client';
+import { useEditorContext, useEditorState } from '../../editor-context';
+import { setDocumentFields, setSwing } from '../../commands/truck';
+import { NumberField, SelectField } from '../fields';
+import { Section } from './section';
+import { SOIL_CHOICES } from '@/lib/lift/soil';
+import { formatPressure, inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+
+/** The swing plan, the ground and the plan's limits (nothing selected). */
+export function SceneSettings() {
+  const { store } = useEditorContext();
+  const doc = useEditorState((s) => s.document);
+  const units = useEditorState((s) => s.units);
+  const ro = useEditorState((s) => s.readOnly);
+  const run = store.getState().run;
+  const metric = units === 'metric';
+  return (
+    <div data-testid="scene-settings">
+      <p className="mb-3 text-sm text-ink-muted">Nothing selected. Press an object on the plan to see its exact values; these settings belong to the whole scene.</p>
+      <Section title="Swing plan">
+        <NumberField label="Pick at slew (°)" value={doc.swing.from} suffix="°" min={0} max={360} disabled={ro} onCommit={(from) => run(setSwing({ from }))} testId="field-pick" />
+        <NumberField label="Set at slew (°)" value={doc.swing.to} suffix="°" min={0} max={360} disabled={ro} onCommit={(to) => run(setSwing({ to }))} testId="field-set" />
+        <div className="col-span-2">
+          <SelectField
+            label="Direction"
+            value={doc.swing.direction}
+            disabled={ro}
+            testId="field-direction"
+            options={[
+              { value: 'ccw', label: 'Counter-clockwise (to the left, seen from above)' },
+              { value: 'cw', label: 'Clockwise (to the right)' },
+            ]}
+            onCommit={(direction) => run(setSwing({ direction }))}
+          />
+        </div>
+      </Section>
+      <Section title="Ground">
+        <div className="col-span-2">
+          <SelectField
+            label="Ground under the pads"
+            value={doc.soil.preset}
+            disabled={ro}
+            options={[{ value: 'custom', label: 'Entered value' }, ...SOIL_CHOICES.map((s) => ({ value: s.id, label: `${s.label} — IBC Table 1806.2, ${formatPressure(s.kPa, units)}` }))]}
+            onCommit={(preset) => {
+              const c = SOIL_CHOICES.find((s) => s.id === preset);
+              run(setDocumentFields({ soil: { preset, allowable: c ? c.kPa : doc.soil.allowable } }));
+            }}
+          />
+        </div>
+        <NumberField
+          label={`Allowable pressure (${metric ? 'kPa' : 'psf'})`}
+          value={metric ? doc.soil.allowable : kpaToPsf(doc.soil.allowable)}
+          min={1}
+          digits={0}
+          disabled={ro}
+          testId="field-allowable"
+          onCommit={(v) => run(setDocumentFields({ soil: { preset: 'custom', allowable: metric ? v : psfToKpa(v) } }))}
+        />
+      </Section>
+      <Section title="Limits of this plan">
+        <NumberField label="Percent of tipping" value={doc.limits.percentOfTipping} suffix="%" min={1} max={100} disabled={ro} onCommit={(percentOfTipping) => run(setDocumentFields({ limits: { ...doc.limits, percentOfTipping } }))} />
+        <NumberField label={`Clearance (${metric ? 'm' : 'in'})`} value={metric ? doc.limits.clearance : mToIn(doc.limits.clearance)} min={0} digits={metric ? 2 : 0} disabled={ro} onCommit={(v) => run(setDocumentFields({ limits: { ...doc.limits, clearance: metric ? v : inToM(v) } }))} />
+        <NumberField label="Percent of load chart" value={doc.limits.percentOfRated} suffix="%" min={1} max={100} disabled={ro} onCommit={(percentOfRated) => run(setDocumentFields({ limits: { ...doc.limits, percentOfRated } }))} />
+      </Section>
+    </div>
+  );
+}

@@ -1,0 +1,5 @@
+'use client';
+/** Percent of tipping at the current slew; filled in with the analysis. */
+export function LiveReadout() {
+  return null;
+}

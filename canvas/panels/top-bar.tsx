@@ -1,0 +1,61 @@
+'use client';
+import Link from 'next/link';
+import { useEditorContext, useEditorState } from '../editor-context';
+import { fitToScene, zoomBy } from '../editor/actions';
+import { zoomPercent } from '../editor/camera';
+import { ToolButton } from './button';
+
+/** Scene title and status, undo/redo, snapping and zoom. */
+export function TopBar({ scene, user }: { scene: { title: string; status: string }; user: { name: string; role: string } }) {
+  const { editor, store } = useEditorContext();
+  const canUndo = useEditorState((s) => s.undoStack.length > 0);
+  const canRedo = useEditorState((s) => s.redoStack.length > 0);
+  const snap = useEditorState((s) => s.snapToGrid);
+  const zoom = useEditorState((s) => zoomPercent(s.camera));
+  const readOnly = useEditorState((s) => s.readOnly);
+  return (
+    <header className="flex h-14 shrink-0 items-center gap-2 border-b border-paper-line bg-paper-raised px-2">
+      <Link href="/scenes" className="flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk">
+        ← Scenes
+      </Link>
+      <div className="min-w-0 flex-1">
+        <h1 className="truncate text-base font-semibold leading-tight" data-testid="scene-title">
+          {scene.title}
+        </h1>
+        <p className="truncate text-xs text-ink-muted">
+          {scene.status} · {user.name} ({user.role})
+          {readOnly && <span className="ml-2 rounded bg-signal-light px-1.5 py-0.5 font-semibold text-ink">Read-only: you can look and scrub the slew, not edit</span>}
+        </p>
+      </div>
+      <div id="arcline-save-status" className="hidden text-sm sm:block" />
+      {!readOnly && (
+        <>
+          <ToolButton title="Undo (Ctrl Z)" aria-label="Undo" disabled={!canUndo} onClick={() => store.getState().undo()}>
+            ↶
+          </ToolButton>
+          <ToolButton title="Redo (Ctrl Shift Z)" aria-label="Redo" disabled={!canRedo} onClick={() => store.getState().redo()}>
+            ↷
+          </ToolButton>
+          <ToolButton title="Snap to grid (G)" active={snap} onClick={() => store.getState().set({ snapToGrid: !snap })} className="hidden md:flex">
+            Snap
+          </ToolButton>
+        </>
+      )}
+      <ToolButton title="Zoom out (−)" aria-label="Zoom out" onClick={() => zoomBy(editor, 0.8)}>
+        −
+      </ToolButton>
+      <span className="w-14 text-center text-sm tabular-nums" data-testid="zoom" aria-label="Zoom">
+        {zoom}%
+      </span>
+      <ToolButton title="Zoom in (+)" aria-label="Zoom in" onClick={() => zoomBy(editor, 1.25)}>
+        +
+      </ToolButton>
+      <ToolButton title="Fit the scene (F)" onClick={() => fitToScene(editor)}>
+        Fit
+      </ToolButton>
+      <ToolButton title="Keyboard shortcuts (?)" aria-label="Keyboard shortcuts" onClick={() => store.getState().set({ helpOpen: true })}>
+        ?
+      </ToolButton>
+    </header>
+  );
+}

@@ -1,0 +1,86 @@
+'use client';
+import { useEffect, useMemo, useState } from 'react';
+import { createEditorStore } from './store/editor-store';
+import { Editor } from './editor/editor';
+import { EditorContext } from './editor-context';
+import { PlanView } from './view/plan-view';
+import { ToolRail } from './panels/tool-rail';
+import { TopBar } from './panels/top-bar';
+import { SidePanel } from './panels/side-panel';
+import { SlewScrubber } from './panels/slew-scrubber';
+import { ScaleBar } from './view/scale-bar';
+import { HelpSheet } from './panels/help-sheet';
+import { fitToScene } from './editor/actions';
+import type { SceneDocument } from './document/schema';
+import type { TruckProfileInput } from './truck/from-spec';
+import type { UnitSystem } from '@/lib/units';
+import type { EditorStore } from './store/editor-store';
+
+export interface SceneEditorProps {
+  scene: { id: number; title: string; status: string; revision: number; ownerName: string };
+  document: SceneDocument;
+  profiles: TruckProfileInput[];
+  readOnly: boolean;
+  units: UnitSystem;
+  user: { name: string; role: string };
+  /** Lets the page's other parts (saving, export) reach the store. */
+  onStore?: (store: EditorStore) => void;
+}
+
+declare global {
+  interface Window {
+    /** For tests and the bench: the live editor store. */
+    __arclineEditor?: { store: EditorStore; editor: Editor };
+  }
+}
+
+const typing = (t: EventTarget | null) => t instanceof HTMLElement && (t.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(t.tagName));
+
+export function SceneEditor(props: SceneEditorProps) {
+  const [ctx] = useState(() => {
+    const store = createEditorStore({ sceneId: props.scene.id, document: props.document, revision: props.scene.revision, readOnly: props.readOnly, units: props.units, profiles: props.profiles });
+    return { store, editor: new Editor(store) };
+  });
+  const value = useMemo(() => ctx, [ctx]);
+
+  useEffect(() => {
+    window.__arclineEditor = ctx;
+    props.onStore?.(ctx.store);
+    // Fit once the view has its size.
+    const t = setTimeout(() => fitToScene(ctx.editor), 30);
+    const down = (e: KeyboardEvent) => {
+      if (typing(e.target)) return;
+      if (ctx.editor.keyDown({ key: e.key, shift: e.shiftKey, alt: e.altKey, mod: e.ctrlKey || e.metaKey })) e.preventDefault();
+    };
+    const up = (e: KeyboardEvent) => {
+      if (!typing(e.target)) ctx.editor.keyUp({ key: e.key, shift: e.shiftKey, alt: e.altKey, mod: e.ctrlKey || e.metaKey });
+    };
+    window.addEventListener('keydown', down);
+    window.addEventListener('keyup', up);
+    return () => {
+      clearTimeout(t);
+      window.removeEventListener('keydown', down);
+      window.removeEventListener('keyup', up);
+    };
+  }, [ctx]); // eslint-disable-line react-hooks/exhaustive-deps
+
+  return (
+    <EditorContext.Provider value={value}>
+      <div className="flex h-full flex-col">
+        <TopBar scene={props.scene} user={props.user} />
+        <div className="flex min-h-0 flex-1">
+          <ToolRail />
+          <div className="relative flex min-w-0 flex-1 flex-col">
+            <div className="relative min-h-0 flex-1">
+              <PlanView />
+              <ScaleBar />
+            </div>
+            <SlewScrubber />
+          </div>
+          <SidePanel />
+        </div>
+        <HelpSheet />
+      </div>
+    </EditorContext.Provider>
+  );
+}
