@@ -17,7 +17,7 @@ import type { UnitSystem } from '@/lib/units';
 import type { EditorStore } from './store/editor-store';
 
 export interface SceneEditorProps {
-  scene: { id: number; title: string; status: string; revision: number; ownerName: string };
+  scene: { id: number; title: string; status: string; revision: number; ownerName: string; updatedAt: string };
   document: SceneDocument;
   profiles: TruckProfileInput[];
   readOnly: boolean;

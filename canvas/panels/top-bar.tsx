@@ -4,9 +4,11 @@ import { useEditorContext, useEditorState } from '../editor-context';
 import { fitToScene, zoomBy } from '../editor/actions';
 import { zoomPercent } from '../editor/camera';
 import { ToolButton } from './button';
+import { SceneSaveBar } from '../persistence/scene-save-bar';
+import { parseSceneDocument } from '../document/parse';
 
 /** Scene title and status, undo/redo, snapping and zoom. */
-export function TopBar({ scene, user }: { scene: { title: string; status: string }; user: { name: string; role: string } }) {
+export function TopBar({ scene, user }: { scene: { id: number; title: string; status: string; revision: number; updatedAt: string }; user: { name: string; role: string } }) {
   const { editor, store } = useEditorContext();
   const canUndo = useEditorState((s) => s.undoStack.length > 0);
   const canRedo = useEditorState((s) => s.redoStack.length > 0);
@@ -27,7 +29,16 @@ export function TopBar({ scene, user }: { scene: { title: string; status: string
           {readOnly && <span className="ml-2 rounded bg-signal-light px-1.5 py-0.5 font-semibold text-ink">Read-only: you can look and scrub the slew, not edit</span>}
         </p>
       </div>
-      <div id="arcline-save-status" className="hidden text-sm sm:block" />
+      <SceneSaveBar
+        store={store}
+        sceneId={scene.id}
+        title={scene.title}
+        server={{ revision: scene.revision, updatedAt: scene.updatedAt }}
+        canEdit={!readOnly}
+        canImport={!readOnly}
+        parseDocument={parseSceneDocument}
+        compact
+      />
       {!readOnly && (
         <>
           <ToolButton title="Undo (Ctrl Z)" aria-label="Undo" disabled={!canUndo} onClick={() => store.getState().undo()}>

@@ -9,6 +9,7 @@ import { LabelLayer } from './label-layer';
 import { PinchTracker } from './gestures';
 import { zoomAround } from '../editor/camera';
 import type { PointerInfo } from '../tools/tool-state';
+import { BackgroundImageNode } from '../background/background-image-node';
 
 /** The plan view: a true-scale Konva stage. All hit-testing is the editor's own (footprint polygons). */
 export function PlanView() {
@@ -20,6 +21,8 @@ export function PlanView() {
   const grid = useEditorState((s) => s.document.grid);
   const units = useEditorState((s) => s.units);
   const toolPath = useEditorState((s) => s.toolPath);
+  const background = useEditorState((s) => s.document.background);
+  const sceneId = useEditorState((s) => s.sceneId);
 
   useEffect(() => {
     const el = ref.current;
@@ -82,6 +85,11 @@ export function PlanView() {
       onContextMenu={(e) => e.preventDefault()}
     >
       <Stage width={viewport.width} height={viewport.height} listening={false}>
+        {background && sceneId !== null && (
+          <Layer listening={false}>
+            <BackgroundImageNode sceneId={sceneId} background={background} camera={camera} viewport={viewport} />
+          </Layer>
+        )}
         <GridLayer camera={camera} viewport={viewport} grid={grid} units={units} />
         <Layer listening={false}>
           <WorldGroup>

@@ -4,6 +4,8 @@ import { setDocumentFields, setSwing } from '../../commands/truck';
 import { NumberField, SelectField } from '../fields';
 import { Section } from './section';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
+import { BackgroundPanel } from '../../background/background-panel';
+import { screenToWorld } from '../../editor/camera';
 import { formatPressure, inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
 
 /** The swing plan, the ground and the plan's limits (nothing selected). */
@@ -13,6 +15,7 @@ export function SceneSettings() {
   const units = useEditorState((s) => s.units);
   const ro = useEditorState((s) => s.readOnly);
   const run = store.getState().run;
+  const sceneId = useEditorState((s) => s.sceneId);
   const metric = units === 'metric';
   return (
     <div data-testid="scene-settings">
@@ -62,6 +65,22 @@ export function SceneSettings() {
         <NumberField label={`Clearance (${metric ? 'm' : 'in'})`} value={metric ? doc.limits.clearance : mToIn(doc.limits.clearance)} min={0} digits={metric ? 2 : 0} disabled={ro} onCommit={(v) => run(setDocumentFields({ limits: { ...doc.limits, clearance: metric ? v : inToM(v) } }))} />
         <NumberField label="Percent of load chart" value={doc.limits.percentOfRated} suffix="%" min={1} max={100} disabled={ro} onCommit={(percentOfRated) => run(setDocumentFields({ limits: { ...doc.limits, percentOfRated } }))} />
       </Section>
+      {sceneId !== null && (
+        <section className="mb-4">
+          <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-muted">Site image</h3>
+          <BackgroundPanel
+            sceneId={sceneId}
+            background={doc.background}
+            units={units}
+            canEdit={!ro}
+            placeAt={() => {
+              const s = store.getState();
+              return screenToWorld(s.camera, s.viewport, { x: s.viewport.width / 2, y: s.viewport.height / 2 });
+            }}
+            onChange={(background) => run(setDocumentFields({ background }))}
+          />
+        </section>
+      )}
     </div>
   );
 }

@@ -41,7 +41,7 @@ export default async function SceneEditorPage({ params }: { params: Promise<{ id
   const readOnly = !(user.role === 'operator' && scene.ownerId === user.id);
   return (
     <SceneEditorLoader
-      scene={{ id: scene.id, title: scene.title, status: scene.status, revision: scene.revision, ownerName: scene.ownerName }}
+      scene={{ id: scene.id, title: scene.title, status: scene.status, revision: scene.revision, ownerName: scene.ownerName, updatedAt: scene.updatedAt }}
       document={parsed.document}
       profiles={profiles}
       readOnly={readOnly}
