@@ -1,0 +1,120 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound, redirect } from 'next/navigation';
+import { getDb } from '@/db';
+import { getScene, listRevisions } from '@/db/repositories/scenes';
+import { listSceneAudit } from '@/db/repositories/audit';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { idParams } from '@/lib/api/route';
+import { PageHeader } from '@/components/ui/page-header';
+import { Card, CardBody, CardHeader, FactList } from '@/components/ui/card';
+import { Badge, StatusPill } from '@/components/ui/badge';
+import { ButtonLink } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { LocalTime } from '@/components/local-time';
+import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
+import { describeAudit } from '@/components/scenes/audit-words';
+
+export const metadata: Metadata = { title: 'Scene details' };
+
+type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | undefined>> };
+
+export default async function SceneDetailsPage({ params, searchParams }: Props) {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  const parsed = idParams.safeParse(await params);
+  if (!parsed.success) notFound();
+  const db = getDb();
+  // getScene is scoped to the user's organisation and role: another org's id, or an operator's look at a
+  // colleague's draft, is simply not found.
+  const scene = await getScene(db, user, parsed.data.id);
+  if (!scene) notFound();
+  const [revisions, audit] = await Promise.all([listRevisions(db, scene.id), listSceneAudit(db, user.organisationId, scene.id)]);
+  const { created } = await searchParams;
+  const canRename = user.role === 'operator' && scene.ownerId === user.id;
+
+  return (
+    <>
+      <p className="mb-3">
+        <Link href="/scenes" className="inline-flex min-h-touch items-center font-semibold text-teal-dark underline-offset-4 hover:underline">
+          ← All scenes
+        </Link>
+      </p>
+      <PageHeader
+        eyebrow="Scene details"
+        title={<span data-testid="scene-title">{scene.title}</span>}
+        actions={
+          <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
+            Open in editor
+          </ButtonLink>
+        }
+      />
+      {created && (
+        <Notice tone="success" title="Scene created" className="mb-6">
+          Revision 1 is saved. Open it in the editor to sketch the truck, pads and swing.
+        </Notice>
+      )}
+      <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
+        <Card>
+          <CardHeader title="Summary" />
+          <CardBody>
+            <FactList
+              items={[
+                { label: 'Status', value: <StatusPill status={scene.status} /> },
+                { label: 'Owner', value: scene.ownerName },
+                { label: 'Revision', value: <span data-testid="scene-revision">{scene.revision}</span> },
+                { label: 'Last saved', value: <LocalTime iso={scene.updatedAt} /> },
+                { label: 'Created', value: <LocalTime iso={scene.createdAt} /> },
+                {
+                  label: 'Truck profile',
+                  value: scene.equipmentProfileId ? `Profile #${scene.equipmentProfileId}, version ${scene.equipmentProfileVersion ?? '?'}` : 'None chosen yet',
+                },
+                { label: 'Training set', value: scene.inTrainingSet ? <Badge tone="teal" glyph="check">In the training set</Badge> : 'No' },
+              ]}
+            />
+          </CardBody>
+        </Card>
+        <Card>
+          <CardHeader title="Rename" description={canRename ? undefined : `Only the owner, ${scene.ownerName}, can rename this scene.`} />
+          <CardBody>
+            {canRename ? <RenameSceneForm sceneId={scene.id} title={scene.title} revision={scene.revision} /> : <p className="text-body text-ink-muted">You can read this scene.</p>}
+          </CardBody>
+        </Card>
+        <Card>
+          <CardHeader title="Revision history" description={`${revisions.length} ${revisions.length === 1 ? 'revision' : 'revisions'}, newest first`} />
+          <ol className="divide-y divide-paper-line" data-testid="revision-history">
+            {revisions.map((r) => (
+              <li key={r.revision} className="flex flex-wrap items-center justify-between gap-2 px-5 py-3">
+                <span className="font-semibold">Revision {r.revision}</span>
+                <span className="text-ink-soft">
+                  {r.author_name} · <LocalTime iso={r.created_at} />
+                </span>
+              </li>
+            ))}
+          </ol>
+        </Card>
+        <Card>
+          <CardHeader title="Activity" description="Who did what to this scene" />
+          {audit.length === 0 ? (
+            <CardBody>
+              <p className="text-body text-ink-muted">No activity recorded yet.</p>
+            </CardBody>
+          ) : (
+            <ol className="divide-y divide-paper-line" data-testid="scene-audit">
+              {audit.map((a) => (
+                <li key={a.id} className="px-5 py-3">
+                  <p className="font-medium">
+                    <span className="font-bold">{a.user_name}</span> — {describeAudit(a.action, a.detail)}
+                  </p>
+                  <p className="text-caption text-ink-muted">
+                    <LocalTime iso={a.created_at} />
+                  </p>
+                </li>
+              ))}
+            </ol>
+          )}
+        </Card>
+      </div>
+    </>
+  );
+}
