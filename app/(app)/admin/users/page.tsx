@@ -1,0 +1,30 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { PageHeader } from '@/components/ui/page-header';
+import { Card, CardBody, CardHeader } from '@/components/ui/card';
+import { Forbidden } from '@/components/forbidden';
+import { UsersTable } from '@/components/admin/users-table';
+import { CreateUserForm } from '@/components/admin/create-user-form';
+
+export const metadata: Metadata = { title: 'Users' };
+
+export default async function UsersAdminPage() {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  if (user.role !== 'admin') return <Forbidden user={user} needs="administrators" />;
+  return (
+    <>
+      <PageHeader eyebrow={user.organisationName} title="Users" description="Everyone who can sign in to your organisation, and their role." />
+      <div className="grid items-start gap-6 xl:grid-cols-[1fr_22rem]">
+        <UsersTable />
+        <Card>
+          <CardHeader title="Add a user" as="h2" />
+          <CardBody>
+            <CreateUserForm />
+          </CardBody>
+        </Card>
+      </div>
+    </>
+  );
+}
