@@ -7,13 +7,17 @@ import { SignInForm } from '@/components/auth/sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
 
-/** Only same-site paths: an open redirect through callbackUrl would send people off-site after sign-in. */
+/**
+ * Only same-site paths: an open redirect through callbackUrl would send people off-site after sign-in.
+ * The proxy sends an absolute callbackUrl on our own origin (NEXTAUTH_URL); anything else goes to /scenes.
+ */
 function safeNext(raw: string | string[] | undefined): string {
   const v = Array.isArray(raw) ? raw[0] : raw;
   if (!v) return '/scenes';
   try {
-    const url = new URL(v, 'http://arcline.local');
-    if (url.origin !== 'http://arcline.local' || url.pathname.startsWith('/sign-in')) return '/scenes';
+    const base = new URL(process.env.NEXTAUTH_URL ?? 'http://arcline.local');
+    const url = new URL(v, base);
+    if (url.origin !== base.origin || url.pathname.startsWith('/sign-in')) return '/scenes';
     return url.pathname + url.search;
   } catch {
     return '/scenes';
