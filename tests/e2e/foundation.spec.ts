@@ -1,5 +1,11 @@
-import { expect, test } from '@playwright/test';
-import { screens, signIn } from './helpers';
+import { expect, test, type Page } from '@playwright/test';
+import { COBALT_SCENE, HARROW_SCENES, listedTitles, sceneLink, screens, signIn, whoAmI } from './helpers';
+
+const mainNav = (page: Page) => page.getByRole('navigation', { name: 'Main' });
+
+async function navLabels(page: Page) {
+  return (await mainNav(page).getByRole('link').allTextContents()).map((t) => t.trim());
+}
 
 test('landing page says what Arcline does and leads to sign-in', async ({ page }) => {
   await page.goto('/');
@@ -12,10 +18,98 @@ test('landing page says what Arcline does and leads to sign-in', async ({ page }
   await screens(page, 'sign-in');
 });
 
-test('an operator signs in and sees their scenes', async ({ page }) => {
+test('signed out, app pages send you to sign-in', async ({ page }) => {
+  await page.goto('/scenes');
+  await expect(page).toHaveURL(/\/sign-in/);
+  await page.goto('/admin/users');
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
+test('Harrow operator: own and approved scenes, New scene button, no Users nav, 403 at /admin/users', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
-  const who = page.getByTestId('who-am-i').first();
-  await expect(who).toContainText('Dana Okafor');
-  await expect(page.getByRole('link', { name: 'Coil transfer, Route 9 weigh station', exact: true })).toBeVisible();
+  await expect(whoAmI(page)).toContainText('Dana Okafor');
+  await expect(whoAmI(page)).toContainText('Operator');
+  await expect(whoAmI(page)).toContainText('Harrow Ridge Recovery');
+  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Settings']);
+  const titles = await listedTitles(page);
+  expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
+  expect(titles).not.toContain(COBALT_SCENE);
+  await expect(page.getByRole('link', { name: '+ New scene' })).toBeVisible();
   await screens(page, 'scenes-operator');
+
+  await page.goto('/admin/users');
+  await expect(page.getByText('403 · Not available for your role')).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'This page is for administrators' })).toBeVisible();
+  await expect(page.getByRole('table')).toHaveCount(0);
+  await screens(page, 'forbidden-operator', ['laptop', 'tablet-portrait']);
+});
+
+for (const who of [
+  { email: 'supervisor@harrow.example', name: 'Mitch Varga', role: 'Supervisor' },
+  { email: 'trainer@harrow.example', name: 'Priya Lindqvist', role: 'Trainer' },
+]) {
+  test(`Harrow ${who.role.toLowerCase()}: every org scene, no New scene, no Users`, async ({ page }) => {
+    await signIn(page, who.email);
+    await expect(whoAmI(page)).toContainText(who.name);
+    await expect(whoAmI(page)).toContainText(who.role);
+    expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Settings']);
+    const titles = await listedTitles(page);
+    // The draft belongs to the operator: supervisors and trainers read it, an operator colleague would not.
+    expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
+    expect(titles).not.toContain(COBALT_SCENE);
+    await expect(page.getByRole('link', { name: '+ New scene' })).toHaveCount(0);
+    await page.goto('/scenes/new');
+    await expect(page.getByRole('heading', { name: 'This page is for operators' })).toBeVisible();
+    await page.goto('/admin/users');
+    await expect(page.getByText('403 · Not available for your role')).toBeVisible();
+  });
+}
+
+test('Harrow admin: Users nav, the organisation’s users only; adds an operator who sees approved scenes but not a colleague’s draft', async ({ page, browser }) => {
+  await signIn(page, 'admin@harrow.example');
+  await expect(whoAmI(page)).toContainText('Administrator');
+  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Users', 'Settings']);
+  await expect(page.getByRole('link', { name: '+ New scene' })).toHaveCount(0);
+  await mainNav(page).getByRole('link', { name: 'Users' }).click();
+  await expect(page).toHaveURL(/\/admin\/users$/);
+  const table = page.getByRole('table', { name: 'Users in your organisation' });
+  for (const name of ['Dana Okafor', 'Mitch Varga', 'Priya Lindqvist', 'Sol Brennan']) await expect(table.getByText(name, { exact: true })).toBeVisible();
+  await expect(table.getByText('Jules Amari')).toHaveCount(0);
+
+  // The form uses the server's schema: a short password is refused before any request.
+  await page.getByLabel('Name').fill('Rey Castillo');
+  await page.getByLabel('E-mail').fill('rey@harrow.example');
+  await page.getByLabel('First password').fill('short');
+  await page.getByRole('button', { name: 'Add user' }).click();
+  await expect(page.getByText('Password needs at least 10 characters')).toBeVisible();
+  await page.getByLabel('First password').fill('rey-password-2026');
+  await page.getByRole('button', { name: 'Add user' }).click();
+  await expect(page.getByText('Rey Castillo (rey@harrow.example) can now sign in.')).toBeVisible();
+  await expect(table.getByText('Rey Castillo', { exact: true })).toBeVisible();
+  await screens(page, 'admin-users');
+
+  const ctx = await browser.newContext();
+  const rey = await ctx.newPage();
+  await signIn(rey, 'rey@harrow.example', 'rey-password-2026');
+  const titles = await listedTitles(rey);
+  expect(titles).toContain(HARROW_SCENES.reefer);
+  expect(titles).not.toContain(HARROW_SCENES.coil);
+  await ctx.close();
+});
+
+test('Cobalt operator sees only Cobalt scenes; a Harrow scene id is not found', async ({ page }) => {
+  await signIn(page, 'operator@cobalt.example');
+  await expect(whoAmI(page)).toContainText('Jules Amari');
+  await expect(whoAmI(page)).toContainText('Cobalt Flats Towing');
+  expect(await listedTitles(page)).toEqual([COBALT_SCENE]);
+  await expect(page.getByText(HARROW_SCENES.coil)).toHaveCount(0);
+
+  // Scene 1 is a Harrow scene in the seeded database.
+  const res = await page.goto('/scenes/1/details');
+  expect(res?.status()).toBe(404);
+  await expect(page.getByText(HARROW_SCENES.coil)).toHaveCount(0);
+  await page.goto('/scenes');
+  await sceneLink(page, COBALT_SCENE).waitFor();
+  await page.getByRole('link', { name: `Details of ${COBALT_SCENE}` }).click();
+  await expect(page.getByTestId('scene-title')).toHaveText(COBALT_SCENE);
 });
