@@ -6,6 +6,9 @@ import type { DocumentSource, NetworkSignal, SaveState } from './types';
 export const SAVE_DEBOUNCE_MS = 800;
 /** The local draft is written sooner, so a reload straight after an edit still finds it. */
 export const DRAFT_DEBOUNCE_MS = 150;
+/** After a failed request while the browser still claims to be online, retry after this, doubling up to a minute. */
+export const RETRY_FIRST_MS = 5000;
+const RETRY_MAX_MS = 60_000;
 
 export interface AutosaveOptions<Doc> {
   sceneId: number;
@@ -51,6 +54,7 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
   let inFlight: Promise<void> | null = null;
   let again = false;
   let stopped = false;
+  let retryMs = RETRY_FIRST_MS;
   const unsubs: (() => void)[] = [];
   // Draft writes and clears run one after another, so a late write can never undo a clear.
   let draftChain: Promise<void> = Promise.resolve();
@@ -101,8 +105,14 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
     if (stopped) return;
     if (outcome.kind === 'network') {
       writeDraftSoon();
+      // navigator.onLine can stay true through a dead connection; the 'online' event may never come.
+      if (o.network.isOnline()) {
+        scheduleSave(retryMs);
+        retryMs = Math.min(retryMs * 2, RETRY_MAX_MS);
+      }
       return set({ status: 'offline' });
     }
+    retryMs = RETRY_FIRST_MS;
     if (outcome.kind === 'conflict') return set({ status: 'conflict', serverRevision: outcome.currentRevision ?? undefined });
     if (outcome.kind === 'refused') return set({ status: 'error', message: outcome.message });
     lastSavedDoc = doc;

@@ -112,6 +112,12 @@ test('an unsaved edit survives a reload: the draft is restored and sent', async 
   await expect(status(page)).toHaveAttribute('data-save-status', 'offline');
   expect((await sceneFromApi(page.request, id)).document.grid).not.toBe(4.2);
 
+  // Reload with saves still failing: the edit comes back from the IndexedDB draft, not from the server.
+  await openEditor(page, id);
+  expect(await page.evaluate(() => window.__arclineEditor!.store.getState().document.grid)).toBe(4.2);
+  expect((await sceneFromApi(page.request, id)).document.grid).not.toBe(4.2);
+
+  // Connection back, reload once more: the restored draft is sent.
   await page.unroute(`**/api/scenes/${id}`);
   await openEditor(page, id);
   await expect(status(page)).toHaveAttribute('data-save-status', 'saved');

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { createAutosaver, SAVE_DEBOUNCE_MS } from '@/canvas/persistence/autosave';
+import { createAutosaver, RETRY_FIRST_MS, SAVE_DEBOUNCE_MS } from '@/canvas/persistence/autosave';
 import { memoryDraftStore } from '@/canvas/persistence/draft-store';
 import type { DocumentSource, NetworkSignal } from '@/canvas/persistence/types';
 
@@ -182,6 +182,12 @@ describe('autosave', () => {
     expect(saver.getState()).toMatchObject({ status: 'offline', dirty: true });
     await saver.idle();
     expect((await drafts.latest(5))?.document).toEqual({ version: 1, notes: ['x'] });
+    // The browser still says online, so no 'online' event will come: it retries by itself.
+    expect(server.fetch).toHaveBeenCalledTimes(1);
+    await vi.advanceTimersByTimeAsync(RETRY_FIRST_MS);
+    expect(server.fetch).toHaveBeenCalledTimes(2);
+    expect(server.puts()).toHaveLength(1); // the failed attempt never reached the fake server
+    expect(saver.getState()).toMatchObject({ status: 'saved', dirty: false, revision: 4 });
   });
 
   it('on load, restores a draft on the current revision and sends it', async () => {
