@@ -26,14 +26,14 @@ const ROLE_TONE = { operator: 'neutral', supervisor: 'teal', trainer: 'signal', 
 const col = createColumnHelper<UserListItem>();
 const columns = [
   col.accessor('name', { header: 'Name', cell: (c) => <span className="font-semibold">{c.getValue()}</span> }),
-  col.accessor('email', { header: 'E-mail', cell: (c) => <span className="break-all">{c.getValue()}</span> }),
+  col.accessor('email', { header: 'E-mail', cell: (c) => <span className="whitespace-nowrap">{c.getValue()}</span> }),
   col.accessor('role', { header: 'Role', cell: (c) => <Badge tone={ROLE_TONE[c.getValue()]}>{c.getValue()}</Badge> }),
   col.accessor('active', {
     header: 'Account',
     cell: (c) => (c.getValue() ? <Badge tone="within" glyph="check">Active</Badge> : <Badge tone="over" glyph="cross">Deactivated</Badge>),
     meta: { className: 'hidden lg:table-cell' },
   }),
-  col.accessor('created_at', { header: 'Added', cell: (c) => <LocalTime iso={c.getValue()} />, meta: { className: 'hidden lg:table-cell' } }),
+  col.accessor('created_at', { header: 'Added', cell: (c) => <LocalTime iso={c.getValue()} />, meta: { className: 'hidden xl:table-cell' } }),
 ];
 
 /** The organisation's users; a short list, so sorting happens in the browser. */

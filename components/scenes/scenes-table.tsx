@@ -7,7 +7,7 @@ import { useEffect, useMemo, useState } from 'react';
 import type { SceneSummary } from '@/db/repositories/scenes';
 import { SCENE_STATUSES, type SceneStatus } from '@/db/schema';
 import { StatusPill, statusLabel } from '@/components/ui/badge';
-import { ButtonLink } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { TextField } from '@/components/ui/field';
@@ -115,7 +115,22 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
 
   const filtered = Boolean(title || status);
   const empty = filtered ? (
-    <EmptyState title="No scenes match these filters">Clear the title search or pick another status.</EmptyState>
+    <EmptyState
+      title="No scenes match these filters"
+      action={
+        <Button
+          variant="secondary"
+          onClick={() => {
+            setTitleInput('');
+            setStatus('');
+          }}
+        >
+          Clear filters
+        </Button>
+      }
+    >
+      Clear the title search or pick another status.
+    </EmptyState>
   ) : (
     <EmptyState title="No scenes yet" action={canCreate ? <ButtonLink href="/scenes/new" variant="signal">New scene</ButtonLink> : undefined}>
       {canCreate ? 'Start a plan for your next lift.' : 'Scenes your organisation shares with you will show up here.'}

@@ -44,7 +44,7 @@ function WhoAmI({ user }: { user: CurrentUser }) {
 export function AppShell({ user, children }: { user: CurrentUser; children: ReactNode }) {
   const items = navItemsFor(user);
   return (
-    <div className="min-h-screen lg:grid lg:grid-cols-[15.5rem_1fr]">
+    <div className="min-h-screen lg:grid lg:grid-cols-[15.5rem_1fr] lg:bg-[linear-gradient(to_right,#15202B_15.5rem,transparent_15.5rem)]">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-signal focus:px-3 focus:py-2">
         Skip to content
       </a>

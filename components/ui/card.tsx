@@ -35,7 +35,7 @@ export function FactList({ items }: { items: { label: string; value: ReactNode }
     <dl className="grid grid-cols-[minmax(7rem,auto)_1fr] gap-x-6 gap-y-2.5">
       {items.map((i) => (
         <div key={i.label} className="contents">
-          <dt className="text-label text-ink-muted">{i.label}</dt>
+          <dt className="text-label leading-[1.625rem] text-ink-muted">{i.label}</dt>
           <dd className="text-body font-medium text-ink">{i.value}</dd>
         </div>
       ))}

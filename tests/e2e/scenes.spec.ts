@@ -22,7 +22,7 @@ test('an operator creates a scene with a truck and finds it in the list', async 
   await expect(page.getByTestId('scene-revision')).toHaveText('1');
   await expect(page.getByText('Scene created')).toBeVisible();
   await expect(page.getByTestId('scene-audit')).toContainText('Dana Okafor — Created the scene as “Jackknifed flatbed, Harlan Pass switchback”');
-  await expect(page.getByText(/Profile #\d+, version 1/)).toBeVisible();
+  await expect(page.getByText('HR-7 — 50-ton rotator (example values) · profile version 1')).toBeVisible();
   await screens(page, 'scene-details');
 
   await page.getByRole('link', { name: '← All scenes' }).click();
@@ -33,6 +33,9 @@ test('an operator creates a scene with a truck and finds it in the list', async 
   await page.getByLabel('Search titles').fill('no such scene anywhere');
   await expect(page.getByText('No scenes match these filters')).toBeVisible();
   await screens(page, 'scenes-empty-filter', ['laptop', 'tablet-portrait']);
+  await page.getByRole('button', { name: 'Clear filters' }).click();
+  await expect(page.getByLabel('Search titles')).toHaveValue('');
+  await expect.poll(async () => (await listedTitles(page)).length).toBeGreaterThan(2);
 });
 
 test('the scene list sorts, filters by status and pages on the server', async ({ page }) => {

@@ -4,6 +4,7 @@ import { notFound, redirect } from 'next/navigation';
 import { getDb } from '@/db';
 import { getScene, listRevisions } from '@/db/repositories/scenes';
 import { listSceneAudit } from '@/db/repositories/audit';
+import { findEquipmentProfile } from '@/db/repositories/equipment';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { idParams } from '@/lib/api/route';
 import { PageHeader } from '@/components/ui/page-header';
@@ -29,7 +30,11 @@ export default async function SceneDetailsPage({ params, searchParams }: Props) 
   // colleague's draft, is simply not found.
   const scene = await getScene(db, user, parsed.data.id);
   if (!scene) notFound();
-  const [revisions, audit] = await Promise.all([listRevisions(db, scene.id), listSceneAudit(db, user.organisationId, scene.id)]);
+  const [revisions, audit, truck] = await Promise.all([
+    listRevisions(db, scene.id),
+    listSceneAudit(db, user.organisationId, scene.id),
+    scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
+  ]);
   const { created } = await searchParams;
   const canRename = user.role === 'operator' && scene.ownerId === user.id;
 
@@ -67,7 +72,9 @@ export default async function SceneDetailsPage({ params, searchParams }: Props) 
                 { label: 'Created', value: <LocalTime iso={scene.createdAt} /> },
                 {
                   label: 'Truck profile',
-                  value: scene.equipmentProfileId ? `Profile #${scene.equipmentProfileId}, version ${scene.equipmentProfileVersion ?? '?'}` : 'None chosen yet',
+                  value: truck
+                    ? `${truck.unitNumber ? `${truck.unitNumber} — ` : ''}${truck.name} · profile version ${scene.equipmentProfileVersion ?? "?"}`
+                    : 'None chosen yet',
                 },
                 { label: 'Training set', value: scene.inTrainingSet ? <Badge tone="teal" glyph="check">In the training set</Badge> : 'No' },
               ]}
