@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { truckToLiftParts, TruckSetupError, boomCgFraction, padPosition } from '@/lib/equipment/to-lift-input';
 import { lookupRated, toEngineLoadChart } from '@/lib/equipment/load-chart';
 import { HR4_SPEC, HR7_SPEC } from '@/db/seed/demo-trucks';
+import { liftInputSchema, analyzeLift } from '@/lib/lift';
 
 // Hand-checked against the HR-7 example profile: slew axis 3.4 m forward of the tailboard's rear edge.
 const fullOut = { FL: { extension: 2.2 }, FR: { extension: 2.2 }, RL: { extension: 2.2 }, RR: { extension: 2.2 } };
@@ -144,8 +145,8 @@ describe('load chart lookup: no upward interpolation (common practice, no publis
     expect(lookupRated(chart, 1.0, 5.0)).toEqual({ rated: 45000, radiusUsed: 2.5, boomLengthUsed: 6.4, reason: null });
   });
   it('gives no rating beyond the chart, with the reason', () => {
-    expect(lookupRated(chart, 12.5, 14.6)).toEqual({ rated: null, radiusUsed: null, boomLengthUsed: 14.6, reason: "radius 12.50 m is beyond the chart's largest radius (12 m)" });
-    expect(lookupRated(chart, 5, 15)).toEqual({ rated: null, radiusUsed: 5, boomLengthUsed: null, reason: "boom length 15.00 m is beyond the chart's longest boom (14.6 m)" });
+    expect(lookupRated(chart, 12.5, 14.6)).toEqual({ rated: null, radiusUsed: null, boomLengthUsed: 14.6, reason: "radius 12.50 m is beyond the chart's largest radius of 12 m" });
+    expect(lookupRated(chart, 5, 15)).toEqual({ rated: null, radiusUsed: 5, boomLengthUsed: null, reason: "boom length 15.00 m is beyond the chart's longest boom of 14.6 m" });
   });
   it('gives no rating where the chart cell is empty', () => {
     expect(lookupRated(chart, 6, 6.4)).toEqual({ rated: null, radiusUsed: 6, boomLengthUsed: 6.4, reason: 'the chart gives no rating at 6 m radius with 6.4 m of boom' });
@@ -157,5 +158,26 @@ describe('load chart lookup: no upward interpolation (common practice, no publis
     expect(e.rated[1][4]).toBe(16500);
     expect(e.rated[0][4]).toBeNull();
     expect(e.rated[2][7]).toBe(5900);
+  });
+});
+
+describe('truckToLiftParts feeds the lift engine', () => {
+  it('passes liftInputSchema and the engine finds the four pads as its tipping lines', () => {
+    const parts = truckToLiftParts(HR7_SPEC, { legs: fullOut, boom: { length: 10.4, elevation: 30 } });
+    const input = liftInputSchema.parse({
+      supports: parts.supports,
+      masses: parts.masses,
+      boom: parts.boom,
+      bodies: parts.bodies,
+      load: { mass: 2000, footprint: { kind: 'rect', length: 2, width: 2 }, height: 1, hang: 3 },
+      swing: { from: 0, to: 90, direction: 'ccw' },
+      soil: { allowable: 144 },
+      loadChart: parts.loadChart,
+    });
+    const result = analyzeLift(input);
+    // Pads at (5.3, ±3.5) and (−2.0, ±3.5): four edges; the front line is 5.3 m ahead of the slew axis.
+    expect(result.tippingLines).toHaveLength(4);
+    const distances = result.tippingLines.map((l: { distanceFromAxis: number }) => +l.distanceFromAxis.toFixed(6)).sort((a: number, b: number) => a - b);
+    expect(distances).toEqual([2, 3.5, 3.5, 5.3]);
   });
 });
