@@ -93,6 +93,60 @@ export interface SceneUploadTable {
   created_at: Timestamp;
 }
 
+export interface EquipmentProfileVersionTable {
+  id: Generated<number>;
+  profile_id: number;
+  organisation_id: number;
+  version: number;
+  name: string;
+  unit_number: string | null;
+  in_service: number;
+  spec: JSONColumnType<Record<string, unknown>>;
+  /** null for versions written by the seed or the backfill. */
+  author_id: number | null;
+  created_at: Timestamp;
+}
+
+export type RiggingKind = 'round-sling' | 'web-sling' | 'wire-rope-sling' | 'chain' | 'shackle' | 'snatch-block' | 'hook' | 'recovery-strap';
+export const RIGGING_KINDS: readonly RiggingKind[] = ['round-sling', 'web-sling', 'wire-rope-sling', 'chain', 'shackle', 'snatch-block', 'hook', 'recovery-strap'] as const;
+export type RiggingStatus = 'in_service' | 'tagged_out' | 'retired';
+export const RIGGING_STATUSES: readonly RiggingStatus[] = ['in_service', 'tagged_out', 'retired'] as const;
+
+export interface RiggingItemTable {
+  id: Generated<number>;
+  organisation_id: number;
+  tag: string;
+  kind: RiggingKind;
+  size: string;
+  /** metres; null where length does not apply (shackles, hooks). */
+  length: number | null;
+  /** Rated loads per hitch, kg; null where a hitch does not apply. */
+  rating_vertical: number | null;
+  rating_choker: number | null;
+  rating_basket: number | null;
+  /** 'entered' or the id of the built-in table the ratings came from. */
+  rating_source: string;
+  status: Generated<RiggingStatus>;
+  /** Calendar dates, YYYY-MM-DD. */
+  last_inspection: string | null;
+  next_inspection_due: string | null;
+  notes: Generated<string>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface RiggingInspectionTable {
+  id: Generated<number>;
+  item_id: number;
+  organisation_id: number;
+  inspected_on: string;
+  inspector_id: number;
+  result: 'pass' | 'fail';
+  notes: Generated<string>;
+  next_due: string | null;
+  created_at: Timestamp;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -101,6 +155,9 @@ export interface Database {
   scene_revisions: SceneRevisionTable;
   audit_log: AuditLogTable;
   scene_uploads: SceneUploadTable;
+  equipment_profile_versions: EquipmentProfileVersionTable;
+  rigging_items: RiggingItemTable;
+  rigging_inspections: RiggingInspectionTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -116,3 +173,10 @@ export type SceneRevisionRow = Selectable<SceneRevisionTable>;
 export type AuditLogRow = Selectable<AuditLogTable>;
 export type SceneUploadRow = Selectable<SceneUploadTable>;
 export type NewSceneUpload = Insertable<SceneUploadTable>;
+export type EquipmentProfileVersionRow = Selectable<EquipmentProfileVersionTable>;
+export type NewEquipmentProfileVersion = Insertable<EquipmentProfileVersionTable>;
+export type RiggingItemRow = Selectable<RiggingItemTable>;
+export type NewRiggingItem = Insertable<RiggingItemTable>;
+export type RiggingItemUpdate = Updateable<RiggingItemTable>;
+export type RiggingInspectionRow = Selectable<RiggingInspectionTable>;
+export type NewRiggingInspection = Insertable<RiggingInspectionTable>;

@@ -3,6 +3,8 @@ import type { Database } from '../schema';
 import { hashPassword } from '@/lib/auth/password';
 import { DEMO_ORGS, DEMO_PASSWORD, DEMO_USERS } from './demo-users';
 import { DEMO_TRUCKS } from './demo-trucks';
+import { seedDemoRigging } from './demo-rigging';
+import { createEquipmentProfile } from '../repositories/equipment';
 import { DEMO_SCENES } from './demo-scenes';
 
 /** Inserts the invented demo scenario into an empty database, in one transaction. Returns false if data exists. */
@@ -28,21 +30,10 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
     }
     const truckIds = new Map<string, { id: number; version: number }>();
     for (const t of DEMO_TRUCKS) {
-      const row = await trx
-        .insertInto('equipment_profiles')
-        .values({
-          organisation_id: orgIds.get(t.org)!,
-          kind: 'truck',
-          name: t.name,
-          unit_number: t.unitNumber,
-          spec: JSON.stringify(t.spec),
-          created_at: now,
-          updated_at: now,
-        })
-        .returning(['id', 'version'])
-        .executeTakeFirstOrThrow();
-      truckIds.set(t.unitNumber, row);
+      const p = await createEquipmentProfile(trx, orgIds.get(t.org)!, { kind: 'truck', name: t.name, unitNumber: t.unitNumber, spec: t.spec });
+      truckIds.set(t.unitNumber, { id: p.id, version: p.version });
     }
+    await seedDemoRigging(trx, orgIds, userIds);
     for (const s of DEMO_SCENES) {
       const owner = userIds.get(s.owner)!;
       const truck = s.truck ? truckIds.get(s.truck) : undefined;

@@ -17,8 +17,8 @@ export const POST = route({ roles: ['admin'], body: equipmentProfileSchema }, as
   const profile = await getDb()
     .transaction()
     .execute(async (trx) => {
-      const p = await createEquipmentProfile(trx, user.organisationId, body);
-      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.create', detail: { id: p.id } });
+      const p = await createEquipmentProfile(trx, user.organisationId, body, user.id);
+      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.create', detail: { id: p.id, version: p.version } });
       return p;
     });
   return Response.json(profile, { status: 201 });

@@ -1,9 +1,10 @@
 import { getDb } from '@/db';
-import { findEquipmentProfile, retireEquipmentProfile, updateEquipmentProfile } from '@/db/repositories/equipment';
+import { findEquipmentProfile, updateEquipmentProfile } from '@/db/repositories/equipment';
 import { recordAudit } from '@/db/repositories/audit';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
-import { equipmentProfileSchema } from '@/lib/validations/equipment';
+import { updateEquipmentProfileSchema } from '@/lib/validations/equipment';
+import { retire } from '../retire-profile';
 
 export const runtime = 'nodejs';
 
@@ -15,23 +16,23 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
   return p;
 });
 
-export const PUT = route({ roles: ['admin'], params: idParams, body: equipmentProfileSchema }, async ({ user, params, body }) => {
+/** Saves a new version; the old one stays in the history so scenes planned with it still load it. */
+export const PUT = route({ roles: ['admin'], params: idParams, body: updateEquipmentProfileSchema }, async ({ user, params, body }) => {
   return getDb()
     .transaction()
     .execute(async (trx) => {
-      const p = await updateEquipmentProfile(trx, user.organisationId, params.id, body);
-      if (!p) throw notFound();
-      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.update', detail: { id: p.id, version: p.version } });
-      return p;
+      const out = await updateEquipmentProfile(trx, user.organisationId, params.id, body, user.id);
+      if (out.kind === 'missing') throw notFound();
+      if (out.kind === 'retired') throw new HttpError(409, 'This profile is retired; duplicate it to make changes', [{ path: 'baseVersion', message: 'Profile retired' }]);
+      if (out.kind === 'stale') {
+        throw new HttpError(409, `baseVersion: this profile is now at version ${out.current}; you edited version ${body.baseVersion}. Reload it and make your change again.`, [
+          { path: 'baseVersion', message: `Current version is ${out.current}` },
+        ]);
+      }
+      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.update', detail: { id: out.profile.id, version: out.profile.version } });
+      return out.profile;
     });
 });
 
-export const DELETE = route({ roles: ['admin'], params: idParams }, async ({ user, params }) => {
-  await getDb()
-    .transaction()
-    .execute(async (trx) => {
-      if (!(await retireEquipmentProfile(trx, user.organisationId, params.id))) throw notFound();
-      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'equipment.retire', detail: { id: params.id } });
-    });
-  return { ok: true };
-});
+/** Retires the profile (kept for the scenes that point at it). */
+export const DELETE = route({ roles: ['admin'], params: idParams }, async ({ user, params }) => retire(user, params.id));

@@ -1,0 +1,24 @@
+import { getDb } from '@/db';
+import { createRiggingItem, listRiggingItems } from '@/db/repositories/rigging';
+import { recordAudit } from '@/db/repositories/audit';
+import { route } from '@/lib/api/route';
+import { riggingItemSchema, riggingListQuery } from '@/lib/validations/rigging';
+import { RIGGING_WRITERS, resolvedOr400, tagConflict, today } from './shared';
+
+export const runtime = 'nodejs';
+
+export const GET = route({ query: riggingListQuery }, async ({ user, query }) => {
+  return { items: await listRiggingItems(getDb(), user.organisationId, { ...query, today: today() }), today: today() };
+});
+
+export const POST = route({ roles: RIGGING_WRITERS, body: riggingItemSchema }, async ({ user, body }) => {
+  const item = resolvedOr400(body);
+  const created = await getDb()
+    .transaction()
+    .execute(async (trx) => {
+      const row = await createRiggingItem(trx, user.organisationId, item).catch((e) => tagConflict(e, item.tag));
+      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'rigging.create', detail: { id: row.id, tag: row.tag } });
+      return row;
+    });
+  return Response.json(created, { status: 201 });
+});

@@ -1,0 +1,22 @@
+import { HttpError } from '@/lib/api/errors';
+import { resolveRatings } from '@/lib/equipment/rigging-item';
+import type { RiggingItemData } from '@/lib/validations/rigging';
+
+/** Operators and admins manage rigging and record inspections; everyone in the organisation reads. */
+export const RIGGING_WRITERS = ['operator', 'admin'] as const;
+
+export const today = () => new Date().toISOString().slice(0, 10);
+
+export function resolvedOr400(data: RiggingItemData) {
+  const r = resolveRatings(data);
+  if (!r.ok) throw new HttpError(400, `Invalid body: ${r.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, r.issues);
+  return r.item;
+}
+
+/** SQLite's unique constraint on (organisation, tag), turned into a 409 that names the field. */
+export function tagConflict(err: unknown, tag: string): never {
+  if (err instanceof Error && /UNIQUE constraint failed: rigging_items/.test(err.message)) {
+    throw new HttpError(409, `tag: ${tag} is already used by another item`, [{ path: 'tag', message: 'Already used' }]);
+  }
+  throw err;
+}
