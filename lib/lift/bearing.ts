@@ -20,7 +20,9 @@ export interface ReactionMaximum {
   liftsOff: boolean;
 }
 
-export function reactionMaxima(p: PreparedLift, step = 1): ReactionMaximum[] {
+export function reactionMaxima(p: PreparedLift, sweepStep = 1): ReactionMaximum[] {
+  // Reactions vary smoothly (sinusoids between lift-offs): 1° samples plus refinement are enough.
+  const step = Math.max(sweepStep, 1);
   const n = p.supportX.length;
   const state = createReactionState(n);
   const bestT = new Float64Array(n);

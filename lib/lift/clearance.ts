@@ -39,14 +39,36 @@ export function gapAt(p: PreparedLift, target: Target, deg: number): number {
   return polygonGap(buf, fp.n, target.poly, target.n);
 }
 
-/** Tolerances of the clearance walk: 2 mm, plus 0.2 % of the gap for far-away targets. */
-const WALK = { tolAbs: 0.002, tolRel: 0.002, minStep: 0.005, coarseStep: 15 };
+/**
+ * A lower bound on the gap from bounding circles: cheap, and as Lipschitz as the gap itself, so the
+ * walk can stride on it while it is well above the best gap found.
+ */
+function roughGapAt(p: PreparedLift, target: Target, deg: number): number {
+  const a = (deg * Math.PI) / 180;
+  const hx = Math.cos(a) * p.hookX0 - Math.sin(a) * p.hookY0;
+  const hy = Math.sin(a) * p.hookX0 + Math.cos(a) * p.hookY0;
+  return Math.hypot(hx - target.cx, hy - target.cy) - target.r - p.footprint.reach;
+}
+
+/** Tolerances of the clearance walk: 5 mm, plus 0.5 % of the gap for far-away targets. */
+const WALK = { tolAbs: 0.005, tolRel: 0.005, minStep: 0.005, coarseStep: 10 };
 
 export function clearanceOver(p: PreparedLift, target: Target): Clearance {
   // Outline points move at most (radius + reach) metres per radian of slew.
   const lipschitz = ((p.radius + p.footprint.reach) * Math.PI) / 180;
-  const r = lipschitzMin((t) => gapAt(p, target, slewAt(p, t)), p.span, lipschitz, WALK);
-  return describe(p, target, r.v, slewAt(p, r.t));
+  let best = Infinity;
+  const gap = (t: number) => {
+    const deg = slewAt(p, t);
+    const rough = roughGapAt(p, target, deg);
+    // Far above the best so far: the bound is enough to decide the stride.
+    if (rough > best * (1 + WALK.tolRel) + 4 * WALK.tolAbs) return rough;
+    const g = gapAt(p, target, deg);
+    if (g < best) best = g;
+    return g;
+  };
+  const r = lipschitzMin(gap, p.span, lipschitz, WALK);
+  const slew = slewAt(p, r.t);
+  return describe(p, target, gapAt(p, target, slew), slew);
 }
 
 export function clearanceAt(p: PreparedLift, target: Target, deg: number): Clearance {

@@ -76,8 +76,13 @@ export function powerLineDistanceAt(p: PreparedLift, line: PowerLine, deg: numbe
     const dv = z < p.loadBottom ? p.loadBottom - z : z > p.loadTop ? z - p.loadTop : 0;
     return Math.sqrt(dh * dh + dv * dv);
   };
-  const load = Math.min(toLoad(0), toLoad(1), goldenMin(toLoad, 0, 1, 1e-4).v);
-  const d = Math.min(boom, hoist, load);
+  let d = Math.min(boom, hoist);
+  // The load counts only when its bounding sphere comes nearer than the boom and hoist line do.
+  const zc = (p.loadBottom + p.loadTop) / 2;
+  const sphere = Math.hypot(fp.reach, (p.loadTop - p.loadBottom) / 2);
+  const toCentre = segmentSegmentDistance(hx, hy, zc, hx, hy, zc, la.x, la.y, la.z, lb.x, lb.y, lb.z);
+  const load = toCentre - sphere < d ? Math.min(toLoad(0), toLoad(1), goldenMin(toLoad, 0, 1, 1e-4).v) : Infinity;
+  d = Math.min(d, load);
   nearest = d === boom ? 'boom' : d === hoist ? 'hoist line' : 'load';
   return d;
 }
@@ -86,7 +91,7 @@ export function powerLineOver(p: PreparedLift, line: PowerLine): PowerLineCleara
   // No point of the boom, hoist line or load moves faster than (radius + load reach) m per radian.
   const lipschitz = ((Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach) * Math.PI) / 180;
   const r = lipschitzMin((t) => powerLineDistanceAt(p, line, slewAt(p, t)), p.span, lipschitz, {
-    tolAbs: 0.005, tolRel: 0.001, minStep: 0.005, coarseStep: 10,
+    tolAbs: 0.005, tolRel: 0.005, minStep: 0.005, coarseStep: 10,
   });
   return powerLineAt(p, line, slewAt(p, r.t));
 }

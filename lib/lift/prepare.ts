@@ -13,6 +13,10 @@ export interface Target {
   poly: Float64Array;
   n: number;
   top: number;
+  /** Bounding circle (centre of the vertices' box, radius), for a cheap lower bound on gaps. */
+  cx: number;
+  cy: number;
+  r: number;
 }
 
 /** Everything the per-angle evaluations need, worked out once per input. */
@@ -51,9 +55,17 @@ export interface PreparedLift {
   sign: 1 | -1;
 }
 
-function parseInput(raw: LiftInputIn | LiftInput): LiftInput {
+/** Inputs this module has validated itself, so the editor's repeated analyses skip re-parsing. */
+const validated = new WeakSet<object>();
+
+/** zod-validates an input (defaults filled in); failures become LiftError naming the field. */
+export function parseLiftInput(raw: LiftInputIn | LiftInput): LiftInput {
+  if (typeof raw === 'object' && raw !== null && validated.has(raw)) return raw as LiftInput;
   const parsed = liftInputSchema.safeParse(raw);
-  if (parsed.success) return parsed.data;
+  if (parsed.success) {
+    validated.add(parsed.data);
+    return parsed.data;
+  }
   const issue = parsed.error.issues[0];
   const field = issue.path.map(String).join('.') || 'input';
   const last = String(issue.path[issue.path.length - 1] ?? '');
@@ -94,7 +106,7 @@ export function arcOf(swing: LiftInput['swing']): { from: number; span: number; 
 
 /** Validates the input (typed errors) and precomputes what every slew evaluation shares. */
 export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
-  const input = parseInput(raw);
+  const input = parseLiftInput(raw);
   input.masses.forEach((m, i) => assertMass(m.mass, `masses.${i}.mass`, `Mass "${m.id}"`));
   assertMass(input.boom.mass, 'boom.mass', 'The boom');
   assertMass(input.load.mass, 'load.mass', 'The load');
@@ -109,12 +121,22 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
 
   const fromSite = siteObjects(input);
   const targets: Target[] = [];
+  const target = (id: string, kind: Target['kind'], poly: Float64Array, top: number): Target => {
+    let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
+    for (let i = 0; i < poly.length; i += 2) {
+      x0 = Math.min(x0, poly[i]); x1 = Math.max(x1, poly[i]); y0 = Math.min(y0, poly[i + 1]); y1 = Math.max(y1, poly[i + 1]);
+    }
+    const cx = (x0 + x1) / 2, cy = (y0 + y1) / 2;
+    let r = 0;
+    for (let i = 0; i < poly.length; i += 2) r = Math.max(r, Math.hypot(poly[i] - cx, poly[i + 1] - cy));
+    return { id, kind, poly, n: poly.length / 2, top, cx, cy, r };
+  };
   input.bodies.forEach((b, i) => {
-    targets.push({ id: b.id, kind: 'body', poly: checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), n: b.polygon.length, top: b.top });
+    targets.push(target(b.id, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
   });
   [...input.obstacles, ...fromSite.obstacles].forEach((o, i) => {
     const field = i < input.obstacles.length ? `obstacles.${i}.polygon` : `site.obstacles.${i - input.obstacles.length}.polygon`;
-    targets.push({ id: o.id, kind: 'obstacle', poly: checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), n: o.polygon.length, top: o.top });
+    targets.push(target(o.id, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
   });
   if (input.load.footprint.kind === 'polygon') checkPolygon(input.load.footprint.points, 'load.footprint.points', 'The load footprint');
 

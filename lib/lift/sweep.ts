@@ -1,6 +1,6 @@
 import { slewAt, type PreparedLift } from './prepare';
 import { goldenMax } from './search';
-import { tippingAt } from './tipping';
+import { tippingAt, tippingAtCS } from './tipping';
 
 /**
  * Percent of tipping over the planned arc. Samples at `step` (ends included), then refines each local
@@ -37,11 +37,25 @@ export function sweepTipping(p: PreparedLift, step = 1): SweepResult {
   const t = new Float64Array(n);
   const percent = new Float64Array(n);
   const line = new Int32Array(n);
+  // Step cos/sin by a fixed rotation instead of calling trig per sample; re-anchored every 64 samples.
+  const d = (p.sign * step * Math.PI) / 180;
+  const cd = Math.cos(d);
+  const sd = Math.sin(d);
+  let c = 1;
+  let s = 0;
   for (let k = 0; k < n; k++) {
     t[k] = Math.min(k * step, p.span);
-    const hit = tippingAt(p, slewAt(p, t[k]));
+    if (k % 64 === 0 || t[k] !== k * step) {
+      const a = (slewAt(p, t[k]) * Math.PI) / 180;
+      c = Math.cos(a);
+      s = Math.sin(a);
+    }
+    const hit = tippingAtCS(p, c, s);
     percent[k] = hit.percent;
     line[k] = hit.line;
+    const nc = c * cd - s * sd;
+    s = s * cd + c * sd;
+    c = nc;
   }
   let worstT = t[0];
   let worstV = percent[0];

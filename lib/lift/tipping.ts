@@ -25,8 +25,11 @@ const scratch: TippingHit = { percent: 0, line: 0, unloaded: -1 };
  */
 export function tippingAt(p: PreparedLift, deg: number, perLine?: Float64Array): TippingHit {
   const a = (deg * Math.PI) / 180;
-  const c = Math.cos(a);
-  const s = Math.sin(a);
+  return tippingAtCS(p, Math.cos(a), Math.sin(a), perLine);
+}
+
+/** tippingAt with the slew given as its cosine and sine (the sweep steps them by rotation). */
+export function tippingAtCS(p: PreparedLift, c: number, s: number, perLine?: Float64Array): TippingHit {
   const mass = p.fixedMass + p.rotMass;
   const mx = p.fixedMx + c * p.rotMx0 - s * p.rotMy0;
   const my = p.fixedMy + s * p.rotMx0 + c * p.rotMy0;
