@@ -45,18 +45,14 @@ export function BackgroundPanel({ sceneId, background, units, canEdit, placeAt, 
 
   const disabled = !canEdit || busy;
   return (
-    <section aria-labelledby="bg-heading" className="space-y-3" data-testid="background-panel">
-      <div className="flex items-center justify-between gap-2">
-        <h3 id="bg-heading" className="text-sm font-bold uppercase tracking-wide text-ink-soft">
-          Site image
-        </h3>
-        {background && (
-          <span className="text-xs font-semibold text-ink-soft">
-            {background.calibration ? '✓ scale set' : '! scale not set'}
-            {background.locked ? ' · locked' : ''}
-          </span>
-        )}
-      </div>
+    // The inspector gives this section its "Site image" heading.
+    <section aria-label="Site image" className="space-y-3" data-testid="background-panel">
+      {background && (
+        <p className="text-sm font-semibold text-ink-soft" data-testid="background-state">
+          {background.calibration ? '✓ Scale set' : '! Scale not set yet: use “Set scale…”'}
+          {background.locked ? ' · locked' : ''}
+        </p>
+      )}
       {!background && <p className="text-sm text-ink-soft">A photo or aerial image under the sketch (PNG, JPEG or WebP, up to 10 MB).</p>}
       <div className="flex flex-wrap gap-2">
         <button type="button" className={`${btn} border-teal bg-teal text-white hover:bg-teal-dark`} disabled={disabled} onClick={() => input.current?.click()}>

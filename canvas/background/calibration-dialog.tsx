@@ -2,6 +2,7 @@
 
 import { useEffect, useRef, useState } from 'react';
 import { formatLength, mToIn, type UnitSystem } from '@/lib/units';
+import { BodyPortal } from '../persistence/portal';
 import { applyCalibration, CalibrationError, parseDistance, type BackgroundPlacement, type ImagePoint } from './calibration';
 
 /** A pixel's size in units people can picture: centimetres or inches. */
@@ -58,6 +59,7 @@ export function CalibrationDialog({ imageUrl, background, units, onApply, onCanc
 
   const r = size ? Math.max(size.width, size.height) / 120 : 4;
   return (
+    <BodyPortal>
     <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/60 p-3">
       <div role="dialog" aria-modal="true" aria-labelledby="calibrate-title" className="flex max-h-full w-full max-w-4xl flex-col rounded-xl border border-paper-line bg-paper-raised shadow-2xl">
         <div className="border-b border-paper-line px-5 py-3">
@@ -131,5 +133,6 @@ export function CalibrationDialog({ imageUrl, background, units, onApply, onCanc
         </div>
       </div>
     </div>
+    </BodyPortal>
   );
 }

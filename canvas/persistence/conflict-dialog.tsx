@@ -2,6 +2,7 @@
 
 import { useEffect, useRef, useState } from 'react';
 import { copyTitle } from './scene-api';
+import { BodyPortal } from './portal';
 
 interface Props {
   title: string;
@@ -30,6 +31,7 @@ export function ConflictDialog({ title, yourRevision, serverRevision, onReloadTh
   };
 
   return (
+    <BodyPortal>
     <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/50 p-4">
       <div role="alertdialog" aria-modal="true" aria-labelledby="conflict-title" aria-describedby="conflict-body" className="w-full max-w-lg rounded-xl border border-paper-line bg-paper-raised p-6 shadow-2xl">
         <div className="flex items-start gap-3">
@@ -78,5 +80,6 @@ export function ConflictDialog({ title, yourRevision, serverRevision, onReloadTh
         )}
       </div>
     </div>
+    </BodyPortal>
   );
 }

@@ -3,7 +3,7 @@
 import type { SaveState } from './types';
 
 /** Each state has its own icon shape and words, so it reads without colour. */
-const LOOK: Record<SaveState['status'], { label: string; detail?: string; tone: string; icon: React.ReactNode }> = {
+const LOOK: Record<SaveState['status'], { label: string; detail?: string; short?: string; tone: string; icon: React.ReactNode }> = {
   saved: {
     label: 'Saved',
     tone: 'border-within/40 bg-within-light text-within',
@@ -29,6 +29,7 @@ const LOOK: Record<SaveState['status'], { label: string; detail?: string; tone: 
   offline: {
     label: 'Offline',
     detail: 'changes kept on this device',
+    short: 'kept on this device',
     tone: 'border-signal-dark/50 bg-signal-light text-ink',
     icon: (
       <g fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round">
@@ -40,6 +41,7 @@ const LOOK: Record<SaveState['status'], { label: string; detail?: string; tone: 
   conflict: {
     label: 'Conflict',
     detail: 'someone else saved; choose a version',
+    short: 'choose a version',
     tone: 'border-over/50 bg-over-light text-over',
     icon: (
       <g fill="none" stroke="currentColor" strokeWidth="2" strokeLinejoin="round" strokeLinecap="round">
@@ -76,6 +78,7 @@ export function SaveIndicator({ state, compact = false }: { state: SaveState; co
       </svg>
       <span className="whitespace-nowrap">{look.label}</span>
       {detail && !compact && <span className="hidden truncate font-normal lg:inline">— {detail}</span>}
+      {compact && look.short && <span className="hidden whitespace-nowrap font-normal xl:inline">— {look.short}</span>}
       {state.status === 'saved' && state.revision > 0 && !compact && <span className="font-normal text-within/80">rev {state.revision}</span>}
     </div>
   );

@@ -3,6 +3,7 @@
 import { useRef, useState } from 'react';
 import { buildSceneFile, parseSceneFile, sceneFileName, serializeSceneFile, type DocumentParser, type FieldIssue } from './scene-file';
 import { createScene } from './scene-api';
+import { BodyPortal } from './portal';
 
 interface Props<Doc> {
   title: string;
@@ -10,6 +11,8 @@ interface Props<Doc> {
   parseDocument: DocumentParser<Doc>;
   /** Only operators create scenes, so only they see "Import". */
   canImport: boolean;
+  /** Narrow toolbars: icons with accessible names, words from xl screens up. */
+  compact?: boolean;
   /** Where to go after an import; defaults to a full page load of the new scene. */
   onImported?(id: number): void;
 }
@@ -18,7 +21,8 @@ const buttonClass =
   'inline-flex min-h-11 items-center gap-2 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm font-semibold text-ink hover:bg-paper-sunk disabled:opacity-60';
 
 /** Export the open scene as an Arcline scene file, or import one as a new scene. */
-export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canImport, onImported }: Props<Doc>) {
+export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canImport, compact, onImported }: Props<Doc>) {
+  const word = compact ? 'hidden xl:inline' : '';
   const input = useRef<HTMLInputElement>(null);
   const [issues, setIssues] = useState<FieldIssue[] | null>(null);
   const [fileName, setFileName] = useState('');
@@ -55,19 +59,19 @@ export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canIm
 
   return (
     <>
-      <button type="button" className={buttonClass} onClick={exportFile} title="Download this scene as an Arcline scene file (.arcline.json)">
+      <button type="button" className={buttonClass} onClick={exportFile} aria-label="Export" title="Download this scene as an Arcline scene file (.arcline.json)">
         <svg viewBox="0 0 20 20" width="18" height="18" aria-hidden="true" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round">
           <path d="M10 3v10M6 9l4 4 4-4M4 16h12" />
         </svg>
-        Export
+        <span className={word}>Export</span>
       </button>
       {canImport && (
         <>
-          <button type="button" className={buttonClass} disabled={busy} onClick={() => input.current?.click()} title="Open an Arcline scene file as a new scene">
+          <button type="button" className={buttonClass} disabled={busy} onClick={() => input.current?.click()} aria-label="Import" title="Open an Arcline scene file as a new scene">
             <svg viewBox="0 0 20 20" width="18" height="18" aria-hidden="true" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round">
               <path d="M10 13V3M6 7l4-4 4 4M4 16h12" />
             </svg>
-            {busy ? 'Importing…' : 'Import'}
+            <span className={word}>{busy ? 'Importing…' : 'Import'}</span>
           </button>
           <input
             ref={input}
@@ -84,6 +88,7 @@ export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canIm
         </>
       )}
       {issues && (
+        <BodyPortal>
         <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/50 p-4">
           <div role="alertdialog" aria-modal="true" aria-labelledby="import-title" className="w-full max-w-lg rounded-xl border border-paper-line bg-paper-raised p-6 shadow-2xl">
             <h2 id="import-title" className="text-xl font-bold text-ink">
@@ -104,6 +109,7 @@ export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canIm
             </div>
           </div>
         </div>
+        </BodyPortal>
       )}
     </>
   );

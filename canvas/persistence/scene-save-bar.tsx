@@ -27,9 +27,9 @@ interface Props<Doc> {
 export function SceneSaveBar<Doc>({ store, sceneId, title, server, canEdit, canImport, parseDocument, compact }: Props<Doc>) {
   const { state, saver } = useAutosave(store, { sceneId, title, server, enabled: canEdit });
   return (
-    <div className="flex flex-wrap items-center gap-2">
+    <div className="flex shrink-0 flex-nowrap items-center gap-2">
       {canEdit && <SaveIndicator state={state} compact={compact} />}
-      <SceneFileActions title={title} getDocument={() => store.getState().document} parseDocument={parseDocument} canImport={canImport} />
+      <SceneFileActions title={title} getDocument={() => store.getState().document} parseDocument={parseDocument} canImport={canImport} compact={compact} />
       {state.status === 'conflict' && saver && (
         <ConflictDialog
           title={title}
