@@ -3,6 +3,7 @@ import type { Database, SceneRow, SceneStatus } from '../schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { canReadAllScenes } from '@/lib/auth/roles';
 import { recordAudit } from './audit';
+import { inTransaction } from '../transaction';
 
 type Db = Kysely<Database>;
 
@@ -112,9 +113,9 @@ export interface NewSceneInput {
   equipmentProfileVersion?: number | null;
 }
 
-/** Creates a scene with its first revision and an audit row, in one transaction. */
+/** Creates a scene with its first revision and an audit row, in one transaction (the caller's, if any). */
 export async function createScene(db: Db, user: CurrentUser, input: NewSceneInput): Promise<Scene> {
-  const id = await db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const now = new Date().toISOString();
     const doc = JSON.stringify(input.document);
     const row = await trx
@@ -134,9 +135,8 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
       .executeTakeFirstOrThrow();
     await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: user.id, created_at: now }).execute();
     await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: row.id, action: 'scene.create', detail: { title: input.title } });
-    return row.id;
+    return (await getScene(trx, user, row.id))!;
   });
-  return (await getScene(db, user, id))!;
 }
 
 export interface SceneChanges {
@@ -148,14 +148,15 @@ export interface SceneChanges {
   equipmentProfileVersion?: number | null;
 }
 
-export type UpdateOutcome = { kind: 'ok'; scene: Scene } | { kind: 'stale'; current: number };
+/** `missing`: no such scene in the user's organisation (or it was deleted); nothing about it is revealed. */
+export type UpdateOutcome = { kind: 'ok'; scene: Scene } | { kind: 'stale'; current: number } | { kind: 'missing' };
 
 /**
  * Saves a new revision if `changes.revision` is the current one. The revision check and the write happen
  * in the same statement, so two saves based on the same revision cannot both win.
  */
 export async function updateScene(db: Db, user: CurrentUser, id: number, changes: SceneChanges): Promise<UpdateOutcome> {
-  const outcome = await db.transaction().execute(async (trx): Promise<UpdateOutcome> => {
+  return inTransaction(db, async (trx): Promise<UpdateOutcome> => {
     const now = new Date().toISOString();
     const next = changes.revision + 1;
     const updated = await trx
@@ -176,8 +177,14 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       .returning(['document'])
       .executeTakeFirst();
     if (!updated) {
-      const cur = await trx.selectFrom('scenes').select('revision').where('id', '=', id).executeTakeFirst();
-      return { kind: 'stale', current: cur?.revision ?? -1 };
+      const cur = await trx
+        .selectFrom('scenes')
+        .select('revision')
+        .where('id', '=', id)
+        .where('organisation_id', '=', user.organisationId)
+        .where('deleted_at', 'is', null)
+        .executeTakeFirst();
+      return cur ? { kind: 'stale', current: cur.revision } : { kind: 'missing' };
     }
     await trx
       .insertInto('scene_revisions')
@@ -188,16 +195,21 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       userId: user.id,
       sceneId: id,
       action: 'scene.update',
-      detail: { revision: next, fields: Object.keys(changes).filter((k) => k !== 'revision') },
+      detail: { revision: next, fields: changedFields(changes) },
     });
-    return { kind: 'ok', scene: undefined as unknown as Scene };
+    return { kind: 'ok', scene: (await getScene(trx, user, id))! };
   });
-  if (outcome.kind === 'stale') return outcome;
-  return { kind: 'ok', scene: (await getScene(db, user, id))! };
+}
+
+/** The fields a save actually carried (keys present with `undefined` are not changes). */
+function changedFields(changes: SceneChanges): string[] {
+  return Object.entries(changes)
+    .filter(([k, v]) => k !== 'revision' && v !== undefined)
+    .map(([k]) => k);
 }
 
 export async function softDeleteScene(db: Db, user: CurrentUser, id: number): Promise<boolean> {
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const res = await trx
       .updateTable('scenes')
       .set({ deleted_at: new Date().toISOString() })
@@ -211,31 +223,39 @@ export async function softDeleteScene(db: Db, user: CurrentUser, id: number): Pr
   });
 }
 
-export function listRevisions(db: Db, sceneId: number) {
+/** A scene's saves, newest first; empty for a scene outside the organisation. */
+export function listRevisions(db: Db, organisationId: number, sceneId: number) {
   return db
     .selectFrom('scene_revisions')
+    .innerJoin('scenes', 'scenes.id', 'scene_revisions.scene_id')
     .innerJoin('users', 'users.id', 'scene_revisions.author_id')
     .select(['scene_revisions.revision', 'scene_revisions.created_at', 'users.name as author_name'])
-    .where('scene_id', '=', sceneId)
-    .orderBy('revision', 'desc')
+    .where('scene_revisions.scene_id', '=', sceneId)
+    .where('scenes.organisation_id', '=', organisationId)
+    .orderBy('scene_revisions.revision', 'desc')
     .execute();
 }
 
-/** Training-set membership is not a document change, so it does not bump the revision. */
-export async function setTrainingSet(db: Db, user: CurrentUser, id: number, inTrainingSet: boolean) {
-  await db.transaction().execute(async (trx) => {
-    await trx
+/**
+ * Training-set membership is not a document change, so it does not bump the revision.
+ * Returns false (and records nothing) when the scene is not in the user's organisation.
+ */
+export async function setTrainingSet(db: Db, user: CurrentUser, id: number, inTrainingSet: boolean): Promise<boolean> {
+  return inTransaction(db, async (trx) => {
+    const res = await trx
       .updateTable('scenes')
       .set({ in_training_set: inTrainingSet ? 1 : 0 })
       .where('id', '=', id)
       .where('organisation_id', '=', user.organisationId)
       .where('deleted_at', 'is', null)
-      .execute();
+      .executeTakeFirst();
+    if (Number(res.numUpdatedRows) === 0) return false;
     await recordAudit(trx, {
       organisationId: user.organisationId,
       userId: user.id,
       sceneId: id,
       action: inTrainingSet ? 'scene.training.add' : 'scene.training.remove',
     });
+    return true;
   });
 }

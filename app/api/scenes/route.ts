@@ -1,8 +1,8 @@
 import { getDb } from '@/db';
+import { inTransaction } from '@/db/transaction';
 import { createScene, listScenes } from '@/db/repositories/scenes';
-import { findEquipmentProfile } from '@/db/repositories/equipment';
 import { route } from '@/lib/api/route';
-import { HttpError } from '@/lib/api/errors';
+import { pinnedProfileVersion } from '@/lib/api/truck-pin';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
 import { emptySceneDocument } from '@/lib/scene-document';
 
@@ -13,18 +13,16 @@ export const GET = route({ query: listScenesQuery }, async ({ user, query }) => 
 });
 
 export const POST = route({ roles: ['operator'], body: createSceneSchema }, async ({ user, body }) => {
-  const db = getDb();
-  let version: number | null = null;
-  if (body.equipmentProfileId) {
-    const profile = await findEquipmentProfile(db, user.organisationId, body.equipmentProfileId);
-    if (!profile) throw new HttpError(400, 'equipmentProfileId: no such truck profile in your organisation', [{ path: 'equipmentProfileId', message: 'Unknown profile' }]);
-    version = profile.version;
-  }
-  const scene = await createScene(db, user, {
-    title: body.title,
-    document: body.document ?? emptySceneDocument(),
-    equipmentProfileId: body.equipmentProfileId ?? null,
-    equipmentProfileVersion: version,
+  // The profile check and the insert share a transaction, so the pinned version is the one that was checked.
+  const scene = await inTransaction(getDb(), async (trx) => {
+    const profileId = body.equipmentProfileId ?? null;
+    const version = profileId ? await pinnedProfileVersion(trx, user.organisationId, profileId) : null;
+    return createScene(trx, user, {
+      title: body.title,
+      document: body.document ?? emptySceneDocument(),
+      equipmentProfileId: profileId,
+      equipmentProfileVersion: version,
+    });
   });
   return Response.json(scene, { status: 201 });
 });

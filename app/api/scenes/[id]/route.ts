@@ -1,8 +1,9 @@
 import { getDb } from '@/db';
+import { inTransaction } from '@/db/transaction';
 import { getScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
-import { findEquipmentProfile } from '@/db/repositories/equipment';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
+import { pinnedProfileVersion } from '@/lib/api/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
 
 export const runtime = 'nodejs';
@@ -16,17 +17,20 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 });
 
 export const PUT = route({ roles: ['operator'], params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
-  const db = getDb();
-  const scene = await getScene(db, user, params.id);
-  if (!scene) throw notFound();
-  if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
-  let equipmentProfileVersion: number | null | undefined;
-  if (body.equipmentProfileId) {
-    const profile = await findEquipmentProfile(db, user.organisationId, body.equipmentProfileId);
-    if (!profile) throw new HttpError(400, 'equipmentProfileId: no such truck profile in your organisation', [{ path: 'equipmentProfileId', message: 'Unknown profile' }]);
-    equipmentProfileVersion = profile.version;
-  } else if (body.equipmentProfileId === null) equipmentProfileVersion = null;
-  const outcome = await updateScene(db, user, params.id, { ...body, equipmentProfileVersion });
+  // Read, ownership check and write in one transaction: nothing can change the scene in between.
+  const outcome = await inTransaction(getDb(), async (trx) => {
+    const scene = await getScene(trx, user, params.id);
+    if (!scene) throw notFound();
+    if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
+    let equipmentProfileVersion: number | null | undefined;
+    if (body.equipmentProfileId) {
+      equipmentProfileVersion = await pinnedProfileVersion(trx, user.organisationId, body.equipmentProfileId, {
+        allowRetired: body.equipmentProfileId === scene.equipmentProfileId,
+      });
+    } else if (body.equipmentProfileId === null) equipmentProfileVersion = null;
+    return updateScene(trx, user, params.id, { ...body, equipmentProfileVersion });
+  });
+  if (outcome.kind === 'missing') throw notFound();
   if (outcome.kind === 'stale') {
     return Response.json(
       {
@@ -41,10 +45,11 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: updateSc
 });
 
 export const DELETE = route({ roles: ['operator', 'admin'], params: idParams }, async ({ user, params }) => {
-  const db = getDb();
-  const scene = await getScene(db, user, params.id);
-  if (!scene) throw notFound();
-  if (user.role === 'operator' && scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can delete it');
-  await softDeleteScene(db, user, params.id);
+  await inTransaction(getDb(), async (trx) => {
+    const scene = await getScene(trx, user, params.id);
+    if (!scene) throw notFound();
+    if (user.role === 'operator' && scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can delete it');
+    if (!(await softDeleteScene(trx, user, params.id))) throw notFound();
+  });
   return { ok: true };
 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { getDb } from '@/db';
+import { inTransaction } from '@/db/transaction';
 import { getScene, setTrainingSet } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
@@ -10,8 +11,8 @@ const body = z.object({ inTrainingSet: z.boolean({ error: 'inTrainingSet must be
 
 /** A trainer adds a scene to, or takes it out of, the organisation's training set. */
 export const PUT = route({ roles: ['trainer'], params: idParams, body }, async ({ user, params, body }) => {
-  const db = getDb();
-  if (!(await getScene(db, user, params.id))) throw new HttpError(404, 'Scene not found');
-  await setTrainingSet(db, user, params.id, body.inTrainingSet);
-  return (await getScene(db, user, params.id))!;
+  return inTransaction(getDb(), async (trx) => {
+    if (!(await setTrainingSet(trx, user, params.id, body.inTrainingSet))) throw new HttpError(404, 'Scene not found');
+    return (await getScene(trx, user, params.id))!;
+  });
 });

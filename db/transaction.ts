@@ -1,0 +1,12 @@
+import type { Kysely, Transaction } from 'kysely';
+
+/**
+ * Runs `fn` in a transaction, joining the caller's if `db` already is one. Kysely refuses nested
+ * transactions, so repository functions use this to stay composable inside a route's own transaction.
+ * Inside `fn`, use only `trx`: the SQLite driver has one connection, and a query on the outer instance
+ * would wait for the transaction that is waiting for it.
+ */
+export function inTransaction<DB, T>(db: Kysely<DB>, fn: (trx: Transaction<DB>) => Promise<T>): Promise<T> {
+  if (db.isTransaction) return fn(db as Transaction<DB>);
+  return db.transaction().execute(fn);
+}
