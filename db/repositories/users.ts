@@ -31,7 +31,7 @@ export async function createUser(db: Db, user: Omit<NewUser, 'created_at'>) {
   return db
     .insertInto('users')
     .values({ ...user, email: user.email.trim().toLowerCase(), created_at: new Date().toISOString() })
-    .returning([...publicColumns.map((c) => c.replace('users.', '') as 'id')])
+    .returning(['id', 'organisation_id', 'email', 'name', 'role', 'units', 'active', 'created_at'])
     .executeTakeFirstOrThrow();
 }
 

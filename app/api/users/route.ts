@@ -1,4 +1,6 @@
 import { getDb } from '@/db';
+import { inTransaction } from '@/db/transaction';
+import { recordAudit } from '@/db/repositories/audit';
 import { createUser, findUserByEmail, listUsers } from '@/db/repositories/users';
 import { hashPassword } from '@/lib/auth/password';
 import { route } from '@/lib/api/route';
@@ -7,22 +9,32 @@ import { createUserSchema } from '@/lib/validations/users';
 
 export const runtime = 'nodejs';
 
+const emailTaken = () => new HttpError(409, 'email: an account with this e-mail already exists', [{ path: 'email', message: 'Already in use' }]);
+
 export const GET = route({ roles: ['admin'] }, async ({ user }) => {
   return { items: await listUsers(getDb(), user.organisationId) };
 });
 
 export const POST = route({ roles: ['admin'], body: createUserSchema }, async ({ user, body }) => {
-  const db = getDb();
-  if (await findUserByEmail(db, body.email)) {
-    throw new HttpError(409, 'email: an account with this e-mail already exists', [{ path: 'email', message: 'Already in use' }]);
-  }
+  // Hash first: bcrypt takes tens of milliseconds and must not hold the write transaction open.
   const passwordHash = await hashPassword(body.password);
-  const created = await createUser(db, {
-    organisation_id: user.organisationId,
-    email: body.email,
-    name: body.name,
-    role: body.role,
-    password_hash: passwordHash,
-  });
-  return Response.json(created, { status: 201 });
+  try {
+    const created = await inTransaction(getDb(), async (trx) => {
+      if (await findUserByEmail(trx, body.email)) throw emailTaken();
+      const row = await createUser(trx, {
+        organisation_id: user.organisationId,
+        email: body.email,
+        name: body.name,
+        role: body.role,
+        password_hash: passwordHash,
+      });
+      await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'user.create', detail: { id: row.id, role: row.role } });
+      return row;
+    });
+    return Response.json(created, { status: 201 });
+  } catch (err) {
+    // Another request may take the address between the check and the insert; the unique index decides.
+    if ((err as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE') throw emailTaken();
+    throw err;
+  }
 });
