@@ -1,0 +1,49 @@
+import type { DB } from '@/db';
+import { getDb } from '@/db';
+import { createScene, softDeleteScene } from '@/db/repositories/scenes';
+import { createUser, findUserById } from '@/db/repositories/users';
+import { createEquipmentProfile, retireEquipmentProfile } from '@/db/repositories/equipment';
+import type { CurrentUser } from '@/lib/auth/current-user';
+
+/**
+ * Test-only additions to the demo scenario, so every access rule has something to bite on: a second
+ * Harrow Ridge operator with a draft and an approved scene, a deleted scene and a retired truck.
+ */
+export const PEER_EMAIL = 'rowan.pike@harrow.example';
+export const TITLES = {
+  ownDraft: 'Coil transfer, Route 9 weigh station',
+  ownApproved: 'Overturned reefer trailer, Mill Creek on-ramp',
+  otherOrg: 'Box truck up the embankment, Quarry Road',
+  peerDraft: 'Peer draft: flatbed off the shoulder, Gorse Lane',
+  peerApproved: 'Peer approved: bus lifted clear of the ditch, Fenwick Hill',
+  deleted: 'Deleted: cement mixer at the quarry gate',
+} as const;
+export const TRUCKS = { harrow: 'HR-7', cobalt: 'CF-2', retired: 'HR-1' } as const;
+
+async function asCurrentUser(db: DB, id: number): Promise<CurrentUser> {
+  const u = (await findUserById(db, id))!;
+  return { id: u.id, organisationId: u.organisation_id, organisationName: u.organisation_name, role: u.role, name: u.name, email: u.email, units: u.units };
+}
+
+export async function addAccessFixtures(db: DB): Promise<void> {
+  const harrow = await db.selectFrom('organisations').select('id').where('slug', '=', 'harrow-ridge').executeTakeFirstOrThrow();
+  // The hash is never checked: nobody signs in as the peer through next-auth in unit tests.
+  const peerRow = await createUser(db, { organisation_id: harrow.id, email: PEER_EMAIL, name: 'Rowan Pike', role: 'operator', password_hash: 'unused' });
+  const peer = await asCurrentUser(db, peerRow.id);
+  await createScene(db, peer, { title: TITLES.peerDraft, document: { version: 1, objects: [] } });
+  const approved = await createScene(db, peer, { title: TITLES.peerApproved, document: { version: 1, objects: [] } });
+  await db.updateTable('scenes').set({ status: 'approved' }).where('id', '=', approved.id).execute();
+  const operator = await db.selectFrom('users').select('id').where('email', '=', 'operator@harrow.example').executeTakeFirstOrThrow();
+  const gone = await createScene(db, await asCurrentUser(db, operator.id), { title: TITLES.deleted, document: { version: 1, objects: [] } });
+  await softDeleteScene(db, await asCurrentUser(db, operator.id), gone.id);
+  const retired = await createEquipmentProfile(db, harrow.id, { kind: 'truck', name: '25-ton wrecker (example values, retired)', unitNumber: TRUCKS.retired, spec: { example: true } });
+  await retireEquipmentProfile(db, harrow.id, retired.id);
+}
+
+export async function sceneIdByTitle(title: string, db: DB = getDb()): Promise<number> {
+  return (await db.selectFrom('scenes').select('id').where('title', '=', title).executeTakeFirstOrThrow()).id;
+}
+
+export async function truckIdByUnit(unit: string, db: DB = getDb()): Promise<number> {
+  return (await db.selectFrom('equipment_profiles').select('id').where('unit_number', '=', unit).executeTakeFirstOrThrow()).id;
+}

@@ -1,0 +1,31 @@
+import { sql } from 'kysely';
+import { getDb, type DB } from '@/db';
+
+export type DbSnapshot = Record<string, unknown[]>;
+
+/**
+ * Every row of every application table (Kysely's migration tables and SQLite's own excluded), in rowid
+ * order. New tables are picked up without listing them, so a refused write to them is caught too.
+ */
+export async function snapshotDb(db: DB = getDb()): Promise<DbSnapshot> {
+  const tables = await sql<{ name: string }>`
+    select name from sqlite_master
+    where type = 'table' and name not like 'sqlite_%' and name not like 'kysely_%'
+    order by name`.execute(db);
+  const out: DbSnapshot = {};
+  for (const { name } of tables.rows) {
+    out[name] = (await sql`select * from ${sql.table(name)} order by rowid`.execute(db)).rows;
+  }
+  return out;
+}
+
+/** Names of the tables whose rows differ between two snapshots. */
+export function changedTables(before: DbSnapshot, after: DbSnapshot): string[] {
+  const names = new Set([...Object.keys(before), ...Object.keys(after)]);
+  return [...names].filter((t) => JSON.stringify(before[t] ?? null) !== JSON.stringify(after[t] ?? null)).sort();
+}
+
+export async function rowCount(table: string, db: DB = getDb()): Promise<number> {
+  const r = await sql<{ n: number }>`select count(*) as n from ${sql.table(table)}`.execute(db);
+  return Number(r.rows[0].n);
+}

@@ -1,0 +1,171 @@
+import { vi } from 'vitest';
+vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
+import * as scenes from '@/app/api/scenes/route';
+import * as scene from '@/app/api/scenes/[id]/route';
+import * as training from '@/app/api/scenes/[id]/training/route';
+import * as equipment from '@/app/api/equipment/route';
+import * as equipmentOne from '@/app/api/equipment/[id]/route';
+import * as users from '@/app/api/users/route';
+import * as me from '@/app/api/me/route';
+import { getDb } from '@/db';
+import { describeMatrix, type MatrixRoute, type TargetResolver } from '@/tests/setup/route-matrix';
+import { PEER_EMAIL, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';
+
+/**
+ * Who may do what, for every route. Columns, in order:
+ *   signed out | operator | supervisor | trainer | admin | other-org operator
+ * "operator" is Harrow Ridge's operator@harrow.example; "other-org" is Cobalt Flats' operator. A peer
+ * Harrow operator owns the "peer" scenes. Another organisation's ids answer 404, as unknown ids do.
+ *
+ * To add a route: import its module, add a row (its targets may be new entries in `targets`).
+ */
+
+const sceneTarget = (title: string): TargetResolver => async () => {
+  const id = await sceneIdByTitle(title);
+  const row = await getDb().selectFrom('scenes').select(['revision', 'in_training_set']).where('id', '=', id).executeTakeFirstOrThrow();
+  return { id: String(id), revision: row.revision, inTrainingSet: row.in_training_set === 1 };
+};
+const truckTarget = (unit: string): TargetResolver => async () => {
+  const id = await truckIdByUnit(unit);
+  return { id: String(id), profileId: id };
+};
+
+const targets: Record<string, TargetResolver> = {
+  '-': async () => ({}),
+  'Harrow: operator’s draft': sceneTarget(TITLES.ownDraft),
+  'Harrow: operator’s approved': sceneTarget(TITLES.ownApproved),
+  'Harrow: peer’s draft': sceneTarget(TITLES.peerDraft),
+  'Harrow: peer’s approved': sceneTarget(TITLES.peerApproved),
+  'Harrow: deleted scene': sceneTarget(TITLES.deleted),
+  'Cobalt: scene': sceneTarget(TITLES.otherOrg),
+  'unknown id': async () => ({ id: '987654', revision: 1, profileId: 987654 }),
+  'Harrow: truck': truckTarget(TRUCKS.harrow),
+  'Harrow: retired truck': truckTarget(TRUCKS.retired),
+  'Cobalt: truck': truckTarget(TRUCKS.cobalt),
+};
+
+const sceneWrites = ['scenes', 'scene_revisions', 'audit_log'];
+
+const routes: MatrixRoute[] = [
+  // ── scenes ─────────────────────────────────────────────────────────────
+  { method: 'GET', path: '/api/scenes', handler: scenes.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    method: 'POST', path: '/api/scenes', handler: scenes.POST, writes: sceneWrites,
+    body: (t) => ({ title: 'Matrix: new scene', ...(t.profileId ? { equipmentProfileId: t.profileId } : {}) }),
+    expect: {
+      '-': [401, 201, 403, 403, 403, 201],
+      'Harrow: truck': [401, 201, 403, 403, 403, 400],
+      'Harrow: retired truck': [401, 400, 403, 403, 403, 400],
+      'Cobalt: truck': [401, 400, 403, 403, 403, 201],
+      'unknown id': [401, 400, 403, 403, 403, 400],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]', handler: scene.GET,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: operator’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/scenes/[id]', handler: scene.PUT, writes: sceneWrites,
+    body: (t) => ({ revision: t.revision, title: 'Matrix: renamed' }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
+      'Harrow: operator’s approved': [401, 200, 403, 403, 403, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 200],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
+  {
+    method: 'DELETE', path: '/api/scenes/[id]', handler: scene.DELETE, writes: ['scenes', 'audit_log'],
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 403, 403, 200, 404],
+      'Harrow: operator’s approved': [401, 200, 403, 403, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 200, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 200, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 404, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 404, 200],
+      'unknown id': [401, 404, 403, 403, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/scenes/[id]/training', handler: training.PUT, writes: ['scenes', 'audit_log'],
+    body: (t) => ({ inTrainingSet: !t.inTrainingSet }),
+    expect: {
+      'Harrow: operator’s draft': [401, 403, 403, 200, 403, 403],
+      'Harrow: operator’s approved': [401, 403, 403, 200, 403, 403],
+      'Harrow: peer’s draft': [401, 403, 403, 200, 403, 403],
+      'Harrow: deleted scene': [401, 403, 403, 404, 403, 403],
+      'Cobalt: scene': [401, 403, 403, 404, 403, 403],
+      'unknown id': [401, 403, 403, 404, 403, 403],
+    },
+  },
+  // ── equipment ──────────────────────────────────────────────────────────
+  { method: 'GET', path: '/api/equipment', handler: equipment.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    method: 'POST', path: '/api/equipment', handler: equipment.POST, writes: ['equipment_profiles', 'audit_log'],
+    body: () => ({ name: 'Matrix: 30-ton rotator (example values)', unitNumber: 'MX-1', spec: { example: true } }),
+    expect: { '-': [401, 403, 403, 403, 201, 403] },
+  },
+  {
+    method: 'GET', path: '/api/equipment/[id]', handler: equipmentOne.GET,
+    expect: {
+      'Harrow: truck': [401, 200, 200, 200, 200, 404],
+      'Harrow: retired truck': [401, 200, 200, 200, 200, 404],
+      'Cobalt: truck': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/equipment/[id]', handler: equipmentOne.PUT, writes: ['equipment_profiles', 'audit_log'],
+    body: () => ({ name: 'Matrix: renamed rotator (example values)', spec: { example: true } }),
+    expect: {
+      'Harrow: truck': [401, 403, 403, 403, 200, 403],
+      'Cobalt: truck': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  {
+    method: 'DELETE', path: '/api/equipment/[id]', handler: equipmentOne.DELETE, writes: ['equipment_profiles', 'audit_log'],
+    expect: {
+      'Harrow: truck': [401, 403, 403, 403, 200, 403],
+      'Harrow: retired truck': [401, 403, 403, 403, 404, 403],
+      'Cobalt: truck': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  // ── users and the signed-in user ───────────────────────────────────────
+  { method: 'GET', path: '/api/users', handler: users.GET, expect: { '-': [401, 403, 403, 403, 200, 403] } },
+  {
+    method: 'POST', path: '/api/users', handler: users.POST, writes: ['users', 'audit_log'],
+    body: () => ({ name: 'Matrix New Hire', email: 'matrix.hire@harrow.example', role: 'operator', password: 'a-long-enough-password' }),
+    expect: { '-': [401, 403, 403, 403, 201, 403] },
+  },
+  { method: 'GET', path: '/api/me', handler: me.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    method: 'PATCH', path: '/api/me', handler: me.PATCH, writes: ['users'],
+    body: () => ({ units: 'metric' }),
+    expect: { '-': [401, 200, 200, 200, 200, 200] },
+  },
+];
+
+const harrowMarkers = [TITLES.ownDraft, TITLES.ownApproved, TITLES.peerDraft, TITLES.peerApproved, 'harrow.example', 'Harrow Ridge', TRUCKS.harrow, TRUCKS.retired];
+const cobaltMarkers = [TITLES.otherOrg, 'cobalt.example', 'Cobalt Flats', TRUCKS.cobalt];
+
+describeMatrix('authorisation matrix', routes, targets, {
+  'signed out': [...harrowMarkers, ...cobaltMarkers],
+  operator: [...cobaltMarkers, TITLES.peerDraft, TITLES.deleted, PEER_EMAIL],
+  supervisor: [...cobaltMarkers, TITLES.deleted],
+  trainer: [...cobaltMarkers, TITLES.deleted],
+  admin: [...cobaltMarkers, TITLES.deleted],
+  'other-org operator': harrowMarkers,
+});
