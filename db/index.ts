@@ -1,8 +1,9 @@
 import path from 'node:path';
 import fs from 'node:fs';
 import SQLite from 'better-sqlite3';
-import { Kysely, ParseJSONResultsPlugin, SqliteDialect } from 'kysely';
+import { Kysely, SqliteDialect } from 'kysely';
 import type { Database } from './schema';
+import { JsonColumnsPlugin } from './json-columns';
 
 export type DB = Kysely<Database>;
 
@@ -19,7 +20,7 @@ export function openDatabase(file: string = databaseFile()): DB {
   sqlite.pragma('busy_timeout = 5000');
   return new Kysely<Database>({
     dialect: new SqliteDialect({ database: sqlite }),
-    plugins: [new ParseJSONResultsPlugin()],
+    plugins: [new JsonColumnsPlugin()],
   });
 }
 

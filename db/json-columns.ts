@@ -1,0 +1,28 @@
+import type { KyselyPlugin, PluginTransformQueryArgs, PluginTransformResultArgs, QueryResult, RootOperationNode, UnknownRow } from 'kysely';
+
+/**
+ * Result columns stored as JSON text (the JSONColumnType<> columns in db/schema.ts). Add a new JSON column
+ * here; tests/unit/json-columns.test.ts fails if schema.ts has one that is missing.
+ */
+export const JSON_COLUMNS: ReadonlySet<string> = new Set(['document', 'spec', 'detail']);
+
+/**
+ * Parses exactly the JSON columns, once. Kysely's ParseJSONResultsPlugin instead parses every string that
+ * looks like JSON, at any depth: a scene titled "[1, 2]" came back as an array, and a note inside a
+ * document reading {"a":1} came back as an object, so saved data did not round-trip.
+ */
+export class JsonColumnsPlugin implements KyselyPlugin {
+  transformQuery(args: PluginTransformQueryArgs): RootOperationNode {
+    return args.node;
+  }
+
+  async transformResult(args: PluginTransformResultArgs): Promise<QueryResult<UnknownRow>> {
+    for (const row of args.result.rows) {
+      for (const key of Object.keys(row)) {
+        const v = row[key];
+        if (typeof v === 'string' && JSON_COLUMNS.has(key)) row[key] = JSON.parse(v);
+      }
+    }
+    return args.result;
+  }
+}
