@@ -16,11 +16,17 @@ export class HttpError extends Error {
   }
 }
 
+function joinPath(prefix: string | undefined, path: PropertyKey[]): string {
+  return [prefix, ...path.map(String)].filter((p) => p !== undefined && p !== '').join('.') || prefix || 'body';
+}
+
 export function zodIssues(error: z.ZodError, prefix?: string): FieldIssue[] {
-  return error.issues.map((i) => ({
-    path: [prefix, ...i.path.map(String)].filter((p) => p !== undefined && p !== '').join('.') || prefix || 'body',
-    message: i.message,
-  }));
+  return error.issues.flatMap((i) =>
+    // A strict object reports its unknown keys in one issue at the object; name each key instead.
+    i.code === 'unrecognized_keys'
+      ? i.keys.map((k) => ({ path: joinPath(prefix, [...i.path, k]), message: 'Unknown field' }))
+      : [{ path: joinPath(prefix, i.path), message: i.message }],
+  );
 }
 
 /** "title: Too small; revision: Expected number" — a one-line message that names each field. */

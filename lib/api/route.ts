@@ -6,6 +6,11 @@ import { HttpError, describeIssues, jsonError, zodIssues } from './errors';
 
 /** Bodies above this are refused before parsing (a scene document is far smaller). */
 export const MAX_JSON_BODY = 2 * 1024 * 1024;
+/**
+ * Deepest nesting accepted in a JSON body. A scene document nests about eight levels (document, objects,
+ * object, polygon, point); JSON.stringify and zod recurse, so a body thousands deep would overflow the stack.
+ */
+export const MAX_JSON_DEPTH = 64;
 
 interface RouteOptions<P extends z.ZodType, B extends z.ZodType, Q extends z.ZodType> {
   /** Roles allowed; omit to allow any signed-in user. */
@@ -40,11 +45,29 @@ async function readJson(req: Request): Promise<unknown> {
   const text = await req.text();
   if (text.length > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
   if (text.trim() === '') throw new HttpError(400, 'body: a JSON body is required', [{ path: 'body', message: 'Required' }]);
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new HttpError(400, 'body: the request body is not valid JSON', [{ path: 'body', message: 'Malformed JSON' }]);
   }
+  const deep = tooDeepAt(value);
+  if (deep !== null) {
+    throw new HttpError(400, `${deep}: nested more than ${MAX_JSON_DEPTH} levels deep`, [{ path: deep, message: 'Nested too deeply' }]);
+  }
+  return value;
+}
+
+/** The top-level field under which `value` nests deeper than MAX_JSON_DEPTH, or null. Iterative: no recursion. */
+function tooDeepAt(value: unknown): string | null {
+  const stack: { v: unknown; depth: number; top: string }[] = [{ v: value, depth: 0, top: 'body' }];
+  while (stack.length) {
+    const { v, depth, top } = stack.pop()!;
+    if (v === null || typeof v !== 'object') continue;
+    if (depth >= MAX_JSON_DEPTH) return top;
+    for (const [k, child] of Object.entries(v)) stack.push({ v: child, depth: depth + 1, top: depth === 0 ? k : top });
+  }
+  return null;
 }
 
 /**
@@ -74,5 +97,10 @@ export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = 
   };
 }
 
-/** Path id: a positive integer in the URL. */
-export const idParams = z.object({ id: z.coerce.number().int().positive() });
+/** Path id: a positive whole number written plainly ("12", not "1e1", " 12" or "0x0c"). */
+export const idParams = z.object({
+  id: z
+    .string()
+    .regex(/^[1-9][0-9]{0,14}$/, 'id must be a positive whole number')
+    .transform(Number),
+});
