@@ -4,6 +4,7 @@ import { createScene, softDeleteScene } from '@/db/repositories/scenes';
 import { createUser, findUserById } from '@/db/repositories/users';
 import { createEquipmentProfile, retireEquipmentProfile } from '@/db/repositories/equipment';
 import type { CurrentUser } from '@/lib/auth/current-user';
+import { HR4_SPEC } from '@/db/seed/demo-trucks';
 
 /**
  * Test-only additions to the demo scenario, so every access rule has something to bite on: a second
@@ -36,7 +37,7 @@ export async function addAccessFixtures(db: DB): Promise<void> {
   const operator = await db.selectFrom('users').select('id').where('email', '=', 'operator@harrow.example').executeTakeFirstOrThrow();
   const gone = await createScene(db, await asCurrentUser(db, operator.id), { title: TITLES.deleted, document: { version: 1, objects: [] } });
   await softDeleteScene(db, await asCurrentUser(db, operator.id), gone.id);
-  const retired = await createEquipmentProfile(db, harrow.id, { kind: 'truck', name: '25-ton wrecker (example values, retired)', unitNumber: TRUCKS.retired, spec: { example: true } });
+  const retired = await createEquipmentProfile(db, harrow.id, { kind: 'truck', name: '25-ton wrecker (example values, retired)', unitNumber: TRUCKS.retired, spec: HR4_SPEC });
   await retireEquipmentProfile(db, harrow.id, retired.id);
 }
 

@@ -8,6 +8,7 @@ import * as equipmentOne from '@/app/api/equipment/[id]/route';
 import * as users from '@/app/api/users/route';
 import * as me from '@/app/api/me/route';
 import { getDb } from '@/db';
+import { HR4_SPEC } from '@/db/seed/demo-trucks';
 import { describeMatrix, type MatrixRoute, type TargetResolver } from '@/tests/setup/route-matrix';
 import { PEER_EMAIL, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';
 
@@ -113,7 +114,7 @@ const routes: MatrixRoute[] = [
   { method: 'GET', path: '/api/equipment', handler: equipment.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
     method: 'POST', path: '/api/equipment', handler: equipment.POST, writes: ['equipment_profiles', 'audit_log'],
-    body: () => ({ name: 'Matrix: 30-ton rotator (example values)', unitNumber: 'MX-1', spec: { example: true } }),
+    body: () => ({ name: 'Matrix: 30-ton rotator (example values)', unitNumber: 'MX-1', spec: HR4_SPEC }),
     expect: { '-': [401, 403, 403, 403, 201, 403] },
   },
   {
@@ -127,7 +128,7 @@ const routes: MatrixRoute[] = [
   },
   {
     method: 'PUT', path: '/api/equipment/[id]', handler: equipmentOne.PUT, writes: ['equipment_profiles', 'audit_log'],
-    body: () => ({ name: 'Matrix: renamed rotator (example values)', spec: { example: true } }),
+    body: () => ({ name: 'Matrix: renamed rotator (example values)', spec: HR4_SPEC }),
     expect: {
       'Harrow: truck': [401, 403, 403, 403, 200, 403],
       'Cobalt: truck': [401, 403, 403, 403, 404, 403],

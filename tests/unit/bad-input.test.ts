@@ -14,6 +14,7 @@ import { addAccessFixtures, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from
 import { snapshotDb } from '@/tests/setup/snapshot';
 import { call, type Call } from '@/tests/setup/call';
 import type { Handler } from '@/tests/setup/route-matrix';
+import { HR4_SPEC } from '@/db/seed/demo-trucks';
 
 /**
  * Bad input, route by route. Every case must answer the expected 4xx, name the field both in
@@ -83,16 +84,16 @@ const cases: BadCase[] = [
   put(training.PUT, 'trainer@harrow.example', () => ids.draft, 'flag as a string', { inTrainingSet: 'yes' }, 'inTrainingSet'),
   put(training.PUT, 'trainer@harrow.example', () => ids.draft, 'missing flag', {}, 'inTrainingSet'),
   // POST and PUT /api/equipment
-  post(equipment.POST, admin, 'missing name', { spec: {} }, 'name'),
-  post(equipment.POST, admin, 'name of the wrong type', { name: 7, spec: {} }, 'name'),
+  post(equipment.POST, admin, 'missing name', { spec: HR4_SPEC }, 'name'),
+  post(equipment.POST, admin, 'name of the wrong type', { name: 7, spec: HR4_SPEC }, 'name'),
   post(equipment.POST, admin, 'spec as an array', { name: 'Unit 9 rotator', spec: [] }, 'spec'),
   post(equipment.POST, admin, 'missing spec', { name: 'Unit 9 rotator' }, 'spec'),
-  post(equipment.POST, admin, 'unknown kind', { name: 'Unit 9 rotator', kind: 'crane', spec: {} }, 'kind'),
-  post(equipment.POST, admin, 'unit number too long', { name: 'Unit 9 rotator', unitNumber: 'U'.repeat(21), spec: {} }, 'unitNumber'),
-  post(equipment.POST, admin, 'in-service flag as a string', { name: 'Unit 9 rotator', inService: 'yes', spec: {} }, 'inService'),
+  post(equipment.POST, admin, 'unknown kind', { name: 'Unit 9 rotator', kind: 'crane', spec: HR4_SPEC }, 'kind'),
+  post(equipment.POST, admin, 'unit number too long', { name: 'Unit 9 rotator', unitNumber: 'U'.repeat(21), spec: HR4_SPEC }, 'unitNumber'),
+  post(equipment.POST, admin, 'in-service flag as a string', { name: 'Unit 9 rotator', inService: 'yes', spec: HR4_SPEC }, 'inService'),
   post(equipment.POST, admin, 'spec nested 5,000 deep', `{"name":"Unit 9 rotator","spec":{"a":${deep(5000)}}}`, 'spec'),
-  post(equipment.POST, admin, 'a 10 MB name', { name: 'n'.repeat(10 * MB), spec: {} }, 'body', 413),
-  put(equipmentOne.PUT, admin, () => ids.truck, 'name too short', { name: 'x', spec: {} }, 'name'),
+  post(equipment.POST, admin, 'a 10 MB name', { name: 'n'.repeat(10 * MB), spec: HR4_SPEC }, 'body', 413),
+  put(equipmentOne.PUT, admin, () => ids.truck, 'name too short', { name: 'x', spec: HR4_SPEC }, 'name'),
   put(equipmentOne.PUT, admin, () => ids.truck, 'malformed JSON', '{"name":', 'body'),
   // POST /api/users and PATCH /api/me
   post(users.POST, admin, 'invalid e-mail', { name: 'New Hire', email: 'not-an-email', role: 'operator', password: 'long-enough-password' }, 'email'),
@@ -110,7 +111,7 @@ const cases: BadCase[] = [
   ...['abc', '-1', '0', '1.5', '1e0', '0x10', ' 1', '99999999999999999999'].flatMap((id): BadCase[] => [
     { name: `scene id "${id}"`, who: op, handler: scene.GET, method: 'GET', id, field: 'params.id', status: 400 },
     { name: `scene id "${id}" on delete`, who: op, handler: scene.DELETE, method: 'DELETE', id, field: 'params.id', status: 400 },
-    { name: `truck id "${id}" on update`, who: admin, handler: equipmentOne.PUT, method: 'PUT', id, body: { name: 'Unit 9 rotator', spec: {} }, field: 'params.id', status: 400 },
+    { name: `truck id "${id}" on update`, who: admin, handler: equipmentOne.PUT, method: 'PUT', id, body: { name: 'Unit 9 rotator', spec: HR4_SPEC }, field: 'params.id', status: 400 },
   ]),
 ];
 
@@ -140,7 +141,10 @@ describe('bad input is refused, names the field, and changes nothing', () => {
         body: typeof c.body === 'function' ? c.body() : c.body,
       });
       expect(res.status, res.text.slice(0, 300)).toBe(c.status);
-      expect(res.json.issues?.map((x) => x.path)).toContain(c.field);
+      const paths = res.json.issues?.map((x) => x.path) ?? [];
+      expect(paths).toContain(c.field);
+      // Only the field under test is wrong, so no other field may be blamed.
+      for (const p of paths) expect(p === c.field || p.startsWith(`${c.field}.`), `also blamed ${p}`).toBe(true);
       expect(String(res.json.error)).toContain(c.field);
       expect(await snapshotDb()).toEqual(before);
     });
