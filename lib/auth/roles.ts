@@ -19,5 +19,6 @@ export function assertRole(user: CurrentUser | null, roles?: readonly Role[]): C
   return user;
 }
 
-export const canEditScenes = (role: Role) => role === 'operator' || role === 'admin';
+/** Operators edit their own scenes; admins may delete scenes but not edit them (PUT /api/scenes/[id] agrees). */
+export const canEditScenes = (role: Role) => role === 'operator';
 export const canReadAllScenes = (role: Role) => role !== 'operator';
