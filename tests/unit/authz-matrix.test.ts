@@ -28,7 +28,8 @@ const sceneTarget = (title: string): TargetResolver => async () => {
 };
 const truckTarget = (unit: string): TargetResolver => async () => {
   const id = await truckIdByUnit(unit);
-  return { id: String(id), profileId: id };
+  const row = await getDb().selectFrom('equipment_profiles').select('version').where('id', '=', id).executeTakeFirstOrThrow();
+  return { id: String(id), profileId: id, version: row.version };
 };
 
 const targets: Record<string, TargetResolver> = {
@@ -39,13 +40,15 @@ const targets: Record<string, TargetResolver> = {
   'Harrow: peer’s approved': sceneTarget(TITLES.peerApproved),
   'Harrow: deleted scene': sceneTarget(TITLES.deleted),
   'Cobalt: scene': sceneTarget(TITLES.otherOrg),
-  'unknown id': async () => ({ id: '987654', revision: 1, profileId: 987654 }),
+  'unknown id': async () => ({ id: '987654', revision: 1, profileId: 987654, version: 1 }),
   'Harrow: truck': truckTarget(TRUCKS.harrow),
   'Harrow: retired truck': truckTarget(TRUCKS.retired),
   'Cobalt: truck': truckTarget(TRUCKS.cobalt),
 };
 
 const sceneWrites = ['scenes', 'scene_revisions', 'audit_log'];
+/** Every profile change also keeps the new version in the history. */
+const truckWrites = ['equipment_profiles', 'equipment_profile_versions', 'audit_log'];
 
 const routes: MatrixRoute[] = [
   // ── scenes ─────────────────────────────────────────────────────────────
@@ -113,7 +116,7 @@ const routes: MatrixRoute[] = [
   // ── equipment ──────────────────────────────────────────────────────────
   { method: 'GET', path: '/api/equipment', handler: equipment.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
-    method: 'POST', path: '/api/equipment', handler: equipment.POST, writes: ['equipment_profiles', 'audit_log'],
+    method: 'POST', path: '/api/equipment', handler: equipment.POST, writes: truckWrites,
     body: () => ({ name: 'Matrix: 30-ton rotator (example values)', unitNumber: 'MX-1', spec: HR4_SPEC }),
     expect: { '-': [401, 403, 403, 403, 201, 403] },
   },
@@ -127,10 +130,11 @@ const routes: MatrixRoute[] = [
     },
   },
   {
-    method: 'PUT', path: '/api/equipment/[id]', handler: equipmentOne.PUT, writes: ['equipment_profiles', 'audit_log'],
-    body: () => ({ name: 'Matrix: renamed rotator (example values)', spec: HR4_SPEC }),
+    method: 'PUT', path: '/api/equipment/[id]', handler: equipmentOne.PUT, writes: truckWrites,
+    body: (t) => ({ name: 'Matrix: renamed rotator (example values)', spec: HR4_SPEC, baseVersion: t.version }),
     expect: {
       'Harrow: truck': [401, 403, 403, 403, 200, 403],
+      'Harrow: retired truck': [401, 403, 403, 403, 409, 403],
       'Cobalt: truck': [401, 403, 403, 403, 404, 403],
       'unknown id': [401, 403, 403, 403, 404, 403],
     },
@@ -139,7 +143,7 @@ const routes: MatrixRoute[] = [
     method: 'DELETE', path: '/api/equipment/[id]', handler: equipmentOne.DELETE, writes: ['equipment_profiles', 'audit_log'],
     expect: {
       'Harrow: truck': [401, 403, 403, 403, 200, 403],
-      'Harrow: retired truck': [401, 403, 403, 403, 404, 403],
+      'Harrow: retired truck': [401, 403, 403, 403, 409, 403],
       'Cobalt: truck': [401, 403, 403, 403, 404, 403],
       'unknown id': [401, 403, 403, 403, 404, 403],
     },

@@ -93,8 +93,10 @@ const cases: BadCase[] = [
   post(equipment.POST, admin, 'in-service flag as a string', { name: 'Unit 9 rotator', inService: 'yes', spec: HR4_SPEC }, 'inService'),
   post(equipment.POST, admin, 'spec nested 5,000 deep', `{"name":"Unit 9 rotator","spec":{"a":${deep(5000)}}}`, 'spec'),
   post(equipment.POST, admin, 'a 10 MB name', { name: 'n'.repeat(10 * MB), spec: HR4_SPEC }, 'body', 413),
-  put(equipmentOne.PUT, admin, () => ids.truck, 'name too short', { name: 'x', spec: HR4_SPEC }, 'name'),
+  put(equipmentOne.PUT, admin, () => ids.truck, 'name too short', { name: 'x', spec: HR4_SPEC, baseVersion: 1 }, 'name'),
   put(equipmentOne.PUT, admin, () => ids.truck, 'malformed JSON', '{"name":', 'body'),
+  put(equipmentOne.PUT, admin, () => ids.truck, 'missing base version', { name: 'Unit 9 rotator', spec: HR4_SPEC }, 'baseVersion'),
+  put(equipmentOne.PUT, admin, () => ids.truck, 'stale base version', { name: 'Unit 9 rotator', spec: HR4_SPEC, baseVersion: 7 }, 'baseVersion', 409),
   // POST /api/users and PATCH /api/me
   post(users.POST, admin, 'invalid e-mail', { name: 'New Hire', email: 'not-an-email', role: 'operator', password: 'long-enough-password' }, 'email'),
   post(users.POST, admin, 'e-mail already in use', { name: 'New Hire', email: 'Supervisor@Harrow.example', role: 'operator', password: 'long-enough-password' }, 'email', 409),
@@ -111,7 +113,7 @@ const cases: BadCase[] = [
   ...['abc', '-1', '0', '1.5', '1e0', '0x10', ' 1', '99999999999999999999'].flatMap((id): BadCase[] => [
     { name: `scene id "${id}"`, who: op, handler: scene.GET, method: 'GET', id, field: 'params.id', status: 400 },
     { name: `scene id "${id}" on delete`, who: op, handler: scene.DELETE, method: 'DELETE', id, field: 'params.id', status: 400 },
-    { name: `truck id "${id}" on update`, who: admin, handler: equipmentOne.PUT, method: 'PUT', id, body: { name: 'Unit 9 rotator', spec: HR4_SPEC }, field: 'params.id', status: 400 },
+    { name: `truck id "${id}" on update`, who: admin, handler: equipmentOne.PUT, method: 'PUT', id, body: { name: 'Unit 9 rotator', spec: HR4_SPEC, baseVersion: 1 }, field: 'params.id', status: 400 },
   ]),
 ];
 

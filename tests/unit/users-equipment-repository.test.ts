@@ -73,23 +73,24 @@ describe('users', () => {
 describe('equipment profiles', () => {
   const input = { kind: 'truck', name: '30-ton rotator (example values)', unitNumber: 'HR-9', spec: HR4_SPEC };
 
-  it('creates at version 1 in service, and lists by name within the organisation only', async () => {
+  it('creates at version 1 in service, and lists within the organisation only', async () => {
     const p = await createEquipmentProfile(db, harrow, input);
     expect(p).toMatchObject({ name: input.name, unitNumber: 'HR-9', inService: true, version: 1, retiredAt: null });
     expect(p.spec).toEqual(HR4_SPEC);
     const names = (await listEquipmentProfiles(db, harrow)).map((x) => x.name);
-    expect(names).toEqual([...names].sort());
-    expect(names).toContain(input.name);
+    expect([...names].sort()).toEqual(['30-ton rotator (example values)', '35-ton rotator (example values)', '50-ton rotator (example values)']);
     expect((await listEquipmentProfiles(db, cobalt)).map((x) => x.unitNumber)).toEqual(['CF-2']);
     expect(await findEquipmentProfile(db, cobalt, p.id)).toBeUndefined();
   });
 
-  it('bumps the version on every update, and not across organisations', async () => {
+  it('bumps the version on every update, and not across organisations or from a stale base', async () => {
     const p = await createEquipmentProfile(db, harrow, input);
-    const u1 = await updateEquipmentProfile(db, harrow, p.id, { ...input, name: 'Renamed once' });
-    const u2 = await updateEquipmentProfile(db, harrow, p.id, { ...input, name: 'Renamed twice', inService: false });
-    expect([u1?.version, u2?.version, u2?.inService]).toEqual([2, 3, false]);
-    expect(await updateEquipmentProfile(db, cobalt, p.id, { ...input, name: 'Cross-org' })).toBeUndefined();
+    const u1 = await updateEquipmentProfile(db, harrow, p.id, { ...input, name: 'Renamed once', baseVersion: 1 });
+    const u2 = await updateEquipmentProfile(db, harrow, p.id, { ...input, name: 'Renamed twice', inService: false, baseVersion: 2 });
+    expect(u1.kind === 'ok' && u1.profile.version).toBe(2);
+    expect(u2.kind === 'ok' && [u2.profile.version, u2.profile.inService]).toEqual([3, false]);
+    expect(await updateEquipmentProfile(db, harrow, p.id, { ...input, name: 'Stale edit', baseVersion: 2 })).toEqual({ kind: 'stale', current: 3 });
+    expect(await updateEquipmentProfile(db, cobalt, p.id, { ...input, name: 'Cross-org' })).toEqual({ kind: 'missing' });
     expect((await findEquipmentProfile(db, harrow, p.id))!.name).toBe('Renamed twice');
   });
 

@@ -31,7 +31,7 @@ export default async function SceneDetailsPage({ params, searchParams }: Props) 
   const scene = await getScene(db, user, parsed.data.id);
   if (!scene) notFound();
   const [revisions, audit, truck] = await Promise.all([
-    listRevisions(db, scene.id),
+    listRevisions(db, user.organisationId, scene.id),
     listSceneAudit(db, user.organisationId, scene.id),
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
