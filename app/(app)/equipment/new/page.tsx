@@ -1,0 +1,25 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { PageHeader } from '@/components/ui/page-header';
+import { Forbidden } from '@/components/forbidden';
+import { ExampleValuesNote } from '@/components/equipment/example-note';
+import { ProfileForm } from '@/components/equipment/profile-form';
+import { starterSpec } from '@/lib/equipment/starter-spec';
+
+export const metadata: Metadata = { title: 'New truck profile' };
+
+export default async function NewProfilePage() {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  if (user.role !== 'admin') return <Forbidden user={user} needs="admins, who manage truck profiles" />;
+  return (
+    <>
+      <PageHeader eyebrow="Truck profiles" title="New truck profile" description="Start from the outline below and replace every figure with the truck’s own, from its manufacturer’s documents." />
+      <div className="mb-5">
+        <ExampleValuesNote />
+      </div>
+      <ProfileForm initial={{ kind: 'truck', name: '', unitNumber: '', inService: true, spec: starterSpec() }} units={user.units} readOnly={false} />
+    </>
+  );
+}

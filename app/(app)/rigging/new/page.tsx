@@ -1,0 +1,28 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { getCurrentUser } from '@/lib/auth/current-user';
+import { PageHeader } from '@/components/ui/page-header';
+import { Forbidden } from '@/components/forbidden';
+import { ExampleValuesNote } from '@/components/equipment/example-note';
+import { RiggingItemForm } from '@/components/rigging/rigging-item-form';
+
+export const metadata: Metadata = { title: 'New rigging item' };
+
+export default async function NewRiggingPage() {
+  const user = await getCurrentUser();
+  if (!user) redirect('/sign-in');
+  if (user.role !== 'operator' && user.role !== 'admin') return <Forbidden user={user} needs="operators and admins, who manage rigging" />;
+  return (
+    <>
+      <PageHeader eyebrow="Rigging inventory" title="New rigging item" />
+      <div className="mb-5">
+        <ExampleValuesNote />
+      </div>
+      <RiggingItemForm
+        units={user.units}
+        readOnly={false}
+        initial={{ tag: '', kind: 'round-sling', size: '', length: null, ratings: { vertical: null, choker: null, basket: null }, status: 'in_service', lastInspection: null, nextInspectionDue: null, notes: '' }}
+      />
+    </>
+  );
+}
