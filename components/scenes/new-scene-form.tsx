@@ -31,7 +31,8 @@ export function NewSceneForm() {
     mutationFn: (body: z.infer<typeof createSceneSchema>) => fetchJson<Scene>('/api/scenes', { method: 'POST', body: JSON.stringify(body) }),
     onSuccess: async (scene) => {
       await queryClient.invalidateQueries({ queryKey: ['scenes'] });
-      router.push(`/scenes/${scene.id}/details?created=1`);
+      // Straight into the editor: a new scene is made to be sketched.
+      router.push(`/scenes/${scene.id}`);
     },
     onError: (err) => {
       // Field errors from the server land on the field they name.

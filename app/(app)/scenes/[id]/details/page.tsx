@@ -11,16 +11,15 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody, CardHeader, FactList } from '@/components/ui/card';
 import { Badge, StatusPill } from '@/components/ui/badge';
 import { ButtonLink } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { describeAudit } from '@/components/scenes/audit-words';
 
 export const metadata: Metadata = { title: 'Scene details' };
 
-type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | undefined>> };
+type Props = { params: Promise<{ id: string }> };
 
-export default async function SceneDetailsPage({ params, searchParams }: Props) {
+export default async function SceneDetailsPage({ params }: Props) {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
   const parsed = idParams.safeParse(await params);
@@ -35,7 +34,6 @@ export default async function SceneDetailsPage({ params, searchParams }: Props) 
     listSceneAudit(db, user.organisationId, scene.id),
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
-  const { created } = await searchParams;
   const canRename = user.role === 'operator' && scene.ownerId === user.id;
 
   return (
@@ -54,11 +52,6 @@ export default async function SceneDetailsPage({ params, searchParams }: Props) 
           </ButtonLink>
         }
       />
-      {created && (
-        <Notice tone="success" title="Scene created" className="mb-6">
-          Revision 1 is saved. Open it in the editor to sketch the truck, pads and swing.
-        </Notice>
-      )}
       <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
         <Card>
           <CardHeader title="Summary" />
