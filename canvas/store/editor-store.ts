@@ -61,6 +61,7 @@ export function createEditorStore(opts: EditorStoreOptions = {}): EditorStore {
       gestureBase: null,
       helpOpen: false,
       scrubSlew: null,
+      analysis: null,
 
       run(command) {
         const s = get();

@@ -4,6 +4,7 @@ import type { TruckModel } from '../truck/truck-model';
 import type { TruckProfileInput } from '../truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { Command } from '../commands/command';
+import type { LiveAnalysis } from '../analysis/live-analysis';
 
 /** The world point at the centre of the view and the scale. 100 % zoom = BASE_PX_PER_M pixels per metre. */
 export interface Camera {
@@ -65,6 +66,8 @@ export interface EditorState {
   helpOpen: boolean;
   /** Read-only viewers scrub the slew here instead of in the document. */
   scrubSlew: number | null;
+  /** The engine's live view of the scene (canvas/analysis). */
+  analysis: LiveAnalysis | null;
 
   run(command: Command): void;
   cancelGesture(): void;

@@ -1,0 +1,135 @@
+import { analyzeLift, analyzeAtSlew, isLiftError, prepareLift, type LiftResult, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
+import type { SceneDocument } from '../document/schema';
+import type { TruckObject } from '../document/objects';
+import type { EditorStore } from '../store/editor-store';
+import type { TruckModel } from '../truck/truck-model';
+import { sceneToLiftInput, type SceneLift } from './scene-to-lift';
+
+/** The engine's view of the scene: prepared once per edit, a snapshot per slew, the full result when idle. */
+export interface LiveAnalysis {
+  lift: SceneLift;
+  prepared: PreparedLift | null;
+  /** analyzeLift over the planned swing; null while a drag is in progress or on an engine error. */
+  result: LiftResult | null;
+  /** The engine's typed error, in its words. */
+  error: { code: string; message: string } | null;
+  /** At the slew the view shows. */
+  snapshot: SlewSnapshot | null;
+  slew: number | null;
+}
+
+const truckOf = (d: SceneDocument) => d.objects.find((o): o is TruckObject => o.kind === 'truck');
+
+/** True when b differs from a only in the truck's current slew (the scrubber's case). */
+export function sameExceptSlew(a: SceneDocument, b: SceneDocument): boolean {
+  if (a === b) return true;
+  if (a.swing !== b.swing || a.soil !== b.soil || a.limits !== b.limits || a.objects.length !== b.objects.length) return false;
+  for (let i = 0; i < a.objects.length; i++) {
+    const x = a.objects[i];
+    const y = b.objects[i];
+    if (x === y) continue;
+    if (x.kind !== 'truck' || y.kind !== 'truck') return false;
+    const { boom: bx, ...rx } = x;
+    const { boom: by, ...ry } = y;
+    if (bx.length !== by.length || bx.elevation !== by.elevation) return false;
+    for (const k of Object.keys(rx) as (keyof typeof rx)[]) if (rx[k] !== ry[k]) return false;
+  }
+  return true;
+}
+
+function prepare(doc: SceneDocument, model: TruckModel | null): Pick<LiveAnalysis, 'lift' | 'prepared' | 'error'> {
+  const lift = sceneToLiftInput(doc, model);
+  if (!lift.ok) return { lift, prepared: null, error: null };
+  try {
+    return { lift, prepared: prepareLift(lift.input), error: null };
+  } catch (e) {
+    if (isLiftError(e)) return { lift, prepared: null, error: { code: e.code, message: e.message } };
+    throw e;
+  }
+}
+
+function fullResult(a: LiveAnalysis): Pick<LiveAnalysis, 'result' | 'error'> {
+  if (!a.lift.ok || !a.prepared) return { result: null, error: a.error };
+  try {
+    return { result: analyzeLift(a.prepared.input), error: null };
+  } catch (e) {
+    if (isLiftError(e)) return { result: null, error: { code: e.code, message: e.message } };
+    throw e;
+  }
+}
+
+function snapshotAt(prepared: PreparedLift | null, slew: number | null): SlewSnapshot | null {
+  return prepared && slew !== null ? analyzeAtSlew(prepared, slew) : null;
+}
+
+/**
+ * Keeps `analysis` in the store in step with the document. A slew-only change costs one analyzeAtSlew;
+ * any other change re-prepares at once and runs the full swing analysis when no drag is in progress
+ * (`deferFull` lets the browser paint first; tests run it at once).
+ */
+export function attachLiveAnalysis(store: EditorStore, opts: { deferFull?: (run: () => void) => void } = {}): () => void {
+  let lastDoc: SceneDocument | null = null;
+  let lastModel: TruckModel | null | undefined;
+  let lastSlew: number | null | undefined;
+  let fullPending = false;
+  let generation = 0;
+
+  const runFull = (gen: number) => {
+    fullPending = false;
+    const s = store.getState();
+    if (!s.analysis || s.gestureBase) return;
+    // The document moved on while this waited: schedule the current one instead.
+    if (gen !== generation) return step();
+    store.getState().set({ analysis: { ...s.analysis, ...fullResult(s.analysis) } });
+  };
+
+  let busy = false;
+  const update = () => {
+    // Our own set() calls notify this listener again; one pass handles everything.
+    if (busy) return;
+    busy = true;
+    try {
+      step();
+    } finally {
+      busy = false;
+    }
+  };
+  const step = () => {
+    const s = store.getState();
+    const doc = s.document;
+    const truck = truckOf(doc);
+    const slew = truck ? (s.scrubSlew ?? truck.boom.slew) : null;
+    const docChanged = doc !== lastDoc || s.truck !== lastModel;
+    if (!docChanged && slew === lastSlew && !(s.analysis && !s.analysis.result && !s.gestureBase && !fullPending && s.analysis.prepared)) return;
+    const slewOnly = !!lastDoc && s.truck === lastModel && sameExceptSlew(lastDoc, doc);
+    lastDoc = doc;
+    lastModel = s.truck;
+    lastSlew = slew;
+    if (slewOnly && s.analysis) {
+      store.getState().set({ analysis: { ...s.analysis, slew, snapshot: snapshotAt(s.analysis.prepared, slew) } });
+    } else if (docChanged) {
+      generation += 1;
+      const p = prepare(doc, s.truck);
+      store.getState().set({ analysis: { ...p, result: null, snapshot: snapshotAt(p.prepared, slew), slew } });
+    } else if (s.analysis) {
+      store.getState().set({ analysis: { ...s.analysis, slew, snapshot: snapshotAt(s.analysis.prepared, slew) } });
+    }
+    const a = store.getState().analysis;
+    if (a && a.prepared && !a.result && !store.getState().gestureBase && !fullPending) {
+      fullPending = true;
+      const gen = generation;
+      if (opts.deferFull) opts.deferFull(() => update2(gen));
+      else runFull(gen);
+    }
+  };
+  const update2 = (gen: number) => {
+    busy = true;
+    try {
+      runFull(gen);
+    } finally {
+      busy = false;
+    }
+  };
+  update();
+  return store.subscribe(update);
+}

@@ -1,0 +1,170 @@
+import type { SceneDocument } from '../document/schema';
+import type { LoadObject, TruckObject } from '../document/objects';
+import type { TruckModel } from '../truck/truck-model';
+import type { LiveAnalysis } from './live-analysis';
+import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '../geometry/vec';
+import { hookSitePoint, hookRadius } from '../shapes/truck/geometry';
+import { loadLocalOutline } from '../shapes/load/geometry';
+import { arcOf } from '@/lib/lift/prepare';
+import { closestPoints } from './closest-points';
+
+export interface TippingLineMark {
+  id: string;
+  a: Pt;
+  b: Pt;
+  percent: number;
+  /** Limit minus percent, percentage points (negative: over). */
+  margin: number;
+  governing: boolean;
+  over: boolean;
+}
+
+export interface ClearanceMark {
+  target: string;
+  name: string;
+  kind: 'body' | 'obstacle';
+  p: Pt;
+  q: Pt;
+  value: number;
+  vertical: boolean;
+  ok: boolean;
+  slew: number;
+}
+
+export interface PowerZone {
+  id: string;
+  name: string;
+  polygon: Polygon;
+  required: number | null;
+  distance: number;
+  ok: boolean;
+  at: Pt;
+}
+
+export interface OverlayGeometry {
+  axis: Pt;
+  hull: Polygon;
+  lines: TippingLineMark[];
+  /** Hook path from pick to set, and the band the load sweeps. */
+  arc: Pt[];
+  band: Polygon;
+  direction: 'ccw' | 'cw';
+  pick: Pt;
+  set: Pt;
+  worst: { slew: number; percent: number; line: string; from: Pt; to: Pt; over: boolean } | null;
+  clearances: ClearanceMark[];
+  nearestNow: ClearanceMark | null;
+  powerZones: PowerZone[];
+  loadAt(slew: number): Polygon;
+}
+
+/** How many of the tightest obstacle clearances get a mark on the plan (all failing ones always do). */
+const SHOWN_CLEARANCES = 5;
+
+const cache = new WeakMap<LiveAnalysis, OverlayGeometry | null>();
+
+/** Everything the overlays draw, in the site frame, worked out once per analysis snapshot. */
+export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, model: TruckModel | null): OverlayGeometry | null {
+  if (!a || !a.prepared || !model) return null;
+  const hit = cache.get(a);
+  if (hit !== undefined) return hit;
+  const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck');
+  const load = doc.objects.find((o): o is LoadObject => o.kind === 'load');
+  if (!truck || !load) return null;
+  const p = a.prepared;
+  const pose = { x: truck.x, y: truck.y, rotation: truck.rotation };
+  const toSite = (q: Pt) => placePoint(q, pose);
+  const limit = p.input.limits.percentOfTipping;
+  const governing = a.snapshot?.governing?.line ?? null;
+  const lines: TippingLineMark[] = p.lines.map((l, i) => {
+    const pct = a.snapshot?.lines[i]?.percentOfTipping ?? 0;
+    return { id: l.id, a: toSite({ x: l.ax, y: l.ay }), b: toSite({ x: l.bx, y: l.by }), percent: pct, margin: limit - pct, governing: l.id === governing, over: pct > limit };
+  });
+  const r = hookRadius(truck, model);
+  const { from, span, sign } = arcOf(p.input.swing);
+  const reach = p.footprint.reach;
+  const steps = Math.max(2, Math.ceil(span / 2));
+  const at = (deg: number, rad: number) => {
+    const s = (truck.rotation + deg) * DEG;
+    return { x: truck.x + rad * Math.cos(s), y: truck.y + rad * Math.sin(s) };
+  };
+  const ts = Array.from({ length: steps + 1 }, (_, i) => from + (sign * span * i) / steps);
+  const arc = ts.map((t) => hookSitePoint(truck, model, t));
+  const band = [...ts.map((t) => at(t, r + reach)), ...ts.reverse().map((t) => at(t, Math.max(0, r - reach)))];
+  const loadAt = (slew: number) => placePolygon(loadLocalOutline(load.shape), { ...hookSitePoint(truck, model, slew), rotation: load.rotation + slew - p.input.swing.from });
+
+  const res = a.result;
+  const worst = res
+    ? { slew: res.worstCase.slew, percent: res.worstCase.percentOfTipping, line: res.worstCase.line, from: { x: truck.x, y: truck.y }, to: at(res.worstCase.slew, r + reach + 2), over: res.worstCase.percentOfTipping > limit }
+    : null;
+
+  const names = a.lift.ok ? a.lift.names : {};
+  const targetPoly = (id: string): Polygon | null => {
+    const t = p.targets.find((q) => q.id === id);
+    if (!t) return null;
+    const poly: Pt[] = [];
+    for (let i = 0; i < t.n; i++) poly.push(toSite({ x: t.poly[2 * i], y: t.poly[2 * i + 1] }));
+    return poly;
+  };
+  const climit = p.input.limits.clearance;
+  const mark = (c: { target: string; kind: 'body' | 'obstacle'; horizontal: number; vertical: number; slew: number; overlapsInPlan: boolean }): ClearanceMark | null => {
+    const poly = targetPoly(c.target);
+    if (!poly) return null;
+    const [pp, qq] = closestPoints(loadAt(c.slew), poly);
+    const ok = c.horizontal >= climit || c.vertical >= climit;
+    return { target: c.target, name: names[c.target] ?? c.target, kind: c.kind, p: pp, q: qq, value: c.overlapsInPlan ? c.vertical : c.horizontal, vertical: c.overlapsInPlan, ok, slew: c.slew };
+  };
+  const clearances: ClearanceMark[] = [];
+  if (res) {
+    const sorted = [...res.clearances].sort((x, y) => (x.overlapsInPlan ? x.vertical : x.horizontal) - (y.overlapsInPlan ? y.vertical : y.horizontal));
+    const shown = sorted.filter((c, i) => c.kind === 'body' || i < SHOWN_CLEARANCES || !(c.horizontal >= climit || c.vertical >= climit));
+    for (const c of shown) {
+      const m = mark(c);
+      if (m) clearances.push(m);
+    }
+  }
+  let nearestNow: ClearanceMark | null = null;
+  if (a.snapshot && a.snapshot.clearances.length) {
+    const c = a.snapshot.clearances.reduce((x, y) => ((x.overlapsInPlan ? x.vertical : x.horizontal) <= (y.overlapsInPlan ? y.vertical : y.horizontal) ? x : y));
+    nearestNow = mark(c);
+  }
+  const powerZones: PowerZone[] = (p.input.site?.powerLines ?? []).map((l) => {
+    const over = res?.powerLines.find((q) => q.id === l.id);
+    const required = over?.required ?? null;
+    const w = required ?? 15.24;
+    const len = Math.hypot(l.b.x - l.a.x, l.b.y - l.a.y) || 1;
+    const ux = (l.b.x - l.a.x) / len;
+    const uy = (l.b.y - l.a.y) / len;
+    // Plan view of the approach zone: every point within `required` of the wire, drawn as a capsule.
+    const cap = (c: Pt, start: number) => Array.from({ length: 13 }, (_, i) => {
+      const ang = Math.atan2(uy, ux) + start + (Math.PI * i) / 12;
+      return { x: c.x + w * Math.cos(ang), y: c.y + w * Math.sin(ang) };
+    });
+    return {
+      id: l.id,
+      name: names[l.id] ?? 'power line',
+      polygon: [...cap(l.b, -Math.PI / 2), ...cap(l.a, Math.PI / 2)],
+      required,
+      distance: over?.distance ?? NaN,
+      ok: over ? required !== null && over.distance >= required : true,
+      at: { x: (l.a.x + l.b.x) / 2, y: (l.a.y + l.b.y) / 2 },
+    };
+  });
+  const g: OverlayGeometry = {
+    axis: { x: truck.x, y: truck.y },
+    hull: p.hull.map((h) => toSite(h)),
+    lines,
+    arc,
+    band,
+    direction: p.input.swing.direction,
+    pick: hookSitePoint(truck, model, p.input.swing.from),
+    set: hookSitePoint(truck, model, p.input.swing.to),
+    worst,
+    clearances,
+    nearestNow,
+    powerZones,
+    loadAt,
+  };
+  cache.set(a, g);
+  return g;
+}
