@@ -11,6 +11,7 @@ import { SlewScrubber } from './panels/slew-scrubber';
 import { ScaleBar } from './view/scale-bar';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
+import { attachLiveAnalysis } from './analysis/live-analysis';
 import type { SceneDocument } from './document/schema';
 import type { TruckProfileInput } from './truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
@@ -45,6 +46,8 @@ export function SceneEditor(props: SceneEditorProps) {
 
   useEffect(() => {
     window.__arclineEditor = ctx;
+    // The full swing analysis waits a moment so a release paints first; snapshots are immediate.
+    const detach = attachLiveAnalysis(ctx.store, { deferFull: (run) => setTimeout(run, 40) });
     props.onStore?.(ctx.store);
     // Fit once the view has its size.
     const t = setTimeout(() => fitToScene(ctx.editor), 30);
@@ -59,6 +62,7 @@ export function SceneEditor(props: SceneEditorProps) {
     window.addEventListener('keyup', up);
     return () => {
       clearTimeout(t);
+      detach();
       window.removeEventListener('keydown', down);
       window.removeEventListener('keyup', up);
     };

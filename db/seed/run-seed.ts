@@ -5,7 +5,7 @@ import { DEMO_ORGS, DEMO_PASSWORD, DEMO_USERS } from './demo-users';
 import { DEMO_TRUCKS } from './demo-trucks';
 import { seedDemoRigging } from './demo-rigging';
 import { createEquipmentProfile } from '../repositories/equipment';
-import { DEMO_SCENES } from './demo-scenes';
+import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
 
 /** Inserts the invented demo scenario into an empty database, in one transaction. Returns false if data exists. */
 export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
@@ -37,7 +37,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
     for (const s of DEMO_SCENES) {
       const owner = userIds.get(s.owner)!;
       const truck = s.truck ? truckIds.get(s.truck) : undefined;
-      const doc = JSON.stringify(s.document);
+      const doc = JSON.stringify(withTruckProfile(s.document, truck));
       const row = await trx
         .insertInto('scenes')
         .values({

@@ -1,5 +1,58 @@
 'use client';
-/** Every check with value, limit, unit and a sentence; filled in with the analysis. */
+import { useEditorState } from '../../editor-context';
+import { CautionNote } from '@/components/caution-note';
+import { TippingChart } from './tipping-chart';
+import { ChecksList } from './checks-list';
+import { PadTable } from './pad-table';
+import { formatLength, formatMass } from '@/lib/units';
+
+/** Every check with value, limit, unit and a sentence; the chart; pads; and the standing caution. */
 export function ResultsPanel() {
-  return <p className="text-sm text-ink-muted">Results appear when the truck and the load are placed.</p>;
+  const a = useEditorState((s) => s.analysis);
+  const doc = useEditorState((s) => s.document);
+  const units = useEditorState((s) => s.units);
+  const gesture = useEditorState((s) => s.gestureBase !== null);
+  const body = (() => {
+    if (!a) return <p className="text-sm text-ink-muted">Working…</p>;
+    if (!a.lift.ok) return <p className="rounded-md border border-paper-line bg-paper p-3 text-sm" data-testid="results-problem">{a.lift.problem.message}</p>;
+    if (a.error) {
+      return (
+        <p className="rounded-md border-2 border-over bg-over-light p-3 text-sm" data-testid="results-error">
+          <strong>OVER LIMIT — cannot be computed as planned:</strong> {a.error.message}
+        </p>
+      );
+    }
+    const r = a.result;
+    if (!r) return <p className="text-sm text-ink-muted">{gesture ? 'Results follow when you let go.' : 'Computing the swing…'}</p>;
+    const over = r.checks.filter((c) => !c.ok).length;
+    const limit = doc.limits.percentOfTipping;
+    return (
+      <>
+        <div className={`mb-3 rounded-md border-2 p-3 ${over ? 'border-over bg-over-light' : 'border-within bg-within-light'}`} data-testid="results-summary">
+          <p className="text-sm font-semibold">{over ? `${over} of ${r.checks.length} checks OVER LIMIT` : `All ${r.checks.length} checks within the plan’s limits`}</p>
+          <p className="mt-1 text-sm" data-testid="worst-case">
+            Worst case: <strong data-testid="worst-percent">{r.worstCase.percentOfTipping.toFixed(1)} %</strong> of tipping about line <strong data-testid="worst-line">{r.worstCase.line}</strong> at slew{' '}
+            <strong data-testid="worst-slew">{r.worstCase.slew.toFixed(1)}°</strong> (limit {limit} %).
+          </p>
+          <p className="mt-1 text-xs text-ink-soft">
+            Hook load {formatMass(r.hook.hookLoad, units)} at {formatLength(r.hook.radius, units)} radius; boom tip {formatLength(r.hook.tipHeight, units)} up.
+          </p>
+          {r.upperWeight && (
+            <p className="mt-1 text-xs text-ink-soft">
+              At the upper weight ({formatMass(r.upperWeight.loadMass, units)}): {r.upperWeight.worstCase.percentOfTipping.toFixed(1)} % about {r.upperWeight.worstCase.line}.
+            </p>
+          )}
+        </div>
+        <TippingChart result={r} limit={limit} slewNow={a.slew} from={doc.swing.from} direction={doc.swing.direction} />
+        <PadTable result={r} snapshot={a.snapshot} units={units} allowable={doc.soil.allowable} />
+        <ChecksList result={r} units={units} names={a.lift.names} />
+      </>
+    );
+  })();
+  return (
+    <div data-testid="results-panel">
+      {body}
+      <CautionNote compact className="mt-4" />
+    </div>
+  );
 }
