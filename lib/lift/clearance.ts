@@ -50,8 +50,8 @@ function roughGapAt(p: PreparedLift, target: Target, deg: number): number {
   return Math.hypot(hx - target.cx, hy - target.cy) - target.r - p.footprint.reach;
 }
 
-/** Tolerances of the clearance walk: 5 mm, plus 0.5 % of the gap for far-away targets. */
-const WALK = { tolAbs: 0.005, tolRel: 0.005, minStep: 0.005, coarseStep: 10 };
+/** Tolerances of the clearance walk: 5 mm, plus 2 % of the gap (far targets; refined by golden section after). */
+const WALK = { tolAbs: 0.005, tolRel: 0.02, minStep: 0.005, coarseStep: 30 };
 
 export function clearanceOver(p: PreparedLift, target: Target): Clearance {
   // Outline points move at most (radius + reach) metres per radian of slew.

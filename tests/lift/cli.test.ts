@@ -1,0 +1,31 @@
+import { spawnSync } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const root = path.join(__dirname, '..', '..');
+const run = (file: string) =>
+  spawnSync(process.execPath, [path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs'), 'scripts/analyze.ts', file], { cwd: root, encoding: 'utf8' });
+
+describe('npm run analyze', () => {
+  it('prints the result JSON for the README example', () => {
+    const out = run('examples/lift/coil-transfer.json');
+    expect(out.status).toBe(0);
+    const result = JSON.parse(out.stdout);
+    expect(result.checks.length).toBeGreaterThan(10);
+    // The FR leg is partly extended: the worst case lies strictly inside the 300° → 235° clockwise arc.
+    expect(result.worstCase.slew).toBeLessThan(300);
+    expect(result.worstCase.slew).toBeGreaterThan(235);
+  });
+  it('bad input: names the field on stderr, exit code 2', () => {
+    const input = JSON.parse(fs.readFileSync(path.join(root, 'examples/lift/coil-transfer.json'), 'utf8'));
+    input.boom.cgFraction = 'middle';
+    const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'arcline-cli-')), 'bad.json');
+    fs.writeFileSync(file, JSON.stringify(input));
+    const out = run(file);
+    expect(out.status).toBe(2);
+    expect(out.stderr).toMatch(/boom\.cgFraction/);
+    expect(out.stdout).toBe('');
+  });
+});
