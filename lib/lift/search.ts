@@ -73,7 +73,8 @@ export function lipschitzMin(
       best = v;
       bestT = t;
     }
-    if (best <= 0) return { t: bestT, v: 0 };
+    // Touching: the walk meets overlaps in arc order, so this is the first slew of overlap.
+    if (v <= 0) return { t, v: 0 };
     if (t >= span) break;
     const step = Math.max(opts.minStep, (v - best + opts.tolAbs + opts.tolRel * best) / L);
     if (t === bestT) stepAtBest = step;
