@@ -27,7 +27,7 @@ function StatusBadge({ status }: { status: RiggingItem['status'] }) {
 
 function DueBadge({ next, today }: { next: string | null; today: string }) {
   const s = dueState(next, today);
-  if (s === 'overdue') return <Badge tone="over" glyph="alert">Overdue since {next}</Badge>;
+  if (s === 'overdue') return <Badge tone="over" glyph="alert">Overdue {next}</Badge>;
   if (s === 'due-soon') return <Badge tone="signal" glyph="clock">Due {next}</Badge>;
   if (s === 'none') return <span className="text-ink-muted">No date</span>;
   return <span className="tabular-nums">{next}</span>;
@@ -48,13 +48,13 @@ export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: b
       col.accessor('tag', {
         header: 'Tag',
         cell: (c) => (
-          <Link href={`/rigging/${c.row.original.id}`} className="font-semibold text-ink underline decoration-teal decoration-2 underline-offset-4">
+          <Link href={`/rigging/${c.row.original.id}`} className="whitespace-nowrap font-semibold text-ink underline decoration-teal decoration-2 underline-offset-4">
             {c.getValue()}
           </Link>
         ),
       }),
       col.accessor('kind', { header: 'Kind', cell: (c) => KIND_LABEL[c.getValue()] }),
-      col.accessor('size', { header: 'Size', cell: (c) => <span className="capitalize">{c.getValue() || '—'}</span> }),
+      col.accessor('size', { header: 'Size', cell: (c) => <span>{c.getValue() || '—'}</span> }),
       col.accessor('length', { header: 'Length', cell: (c) => (c.getValue() === null ? '—' : formatLength(c.getValue()!, units)), meta: { className: 'hidden lg:table-cell' } }),
       col.accessor((r) => r.ratings.vertical, { id: 'vertical', header: 'Vertical rating', cell: (c) => (c.getValue() === null ? '—' : <span className="tabular-nums">{formatMass(c.getValue()!, units)}</span>) }),
       col.accessor('status', { header: 'Status', cell: (c) => <StatusBadge status={c.getValue()} /> }),
