@@ -5,6 +5,15 @@ import * as scene from '@/app/api/scenes/[id]/route';
 import * as training from '@/app/api/scenes/[id]/training/route';
 import * as equipment from '@/app/api/equipment/route';
 import * as equipmentOne from '@/app/api/equipment/[id]/route';
+import * as duplicate from '@/app/api/equipment/[id]/duplicate/route';
+import * as retire from '@/app/api/equipment/[id]/retire/route';
+import * as versions from '@/app/api/equipment/[id]/versions/route';
+import * as version from '@/app/api/equipment/[id]/versions/[version]/route';
+import * as rigging from '@/app/api/rigging/route';
+import * as riggingOne from '@/app/api/rigging/[id]/route';
+import * as inspections from '@/app/api/rigging/[id]/inspections/route';
+import * as riggingExport from '@/app/api/rigging/export/route';
+import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
 import * as me from '@/app/api/me/route';
 import { getDb } from '@/db';
@@ -32,6 +41,12 @@ const truckTarget = (unit: string): TargetResolver => async () => {
   return { id: String(id), profileId: id, version: row.version };
 };
 
+const slingTarget = (tag: string): TargetResolver => async () => {
+  const row = await getDb().selectFrom('rigging_items').select('id').where('tag', '=', tag).executeTakeFirstOrThrow();
+  return { id: String(row.id) };
+};
+const today = () => new Date().toISOString().slice(0, 10);
+
 const targets: Record<string, TargetResolver> = {
   '-': async () => ({}),
   'Harrow: operator’s draft': sceneTarget(TITLES.ownDraft),
@@ -44,6 +59,8 @@ const targets: Record<string, TargetResolver> = {
   'Harrow: truck': truckTarget(TRUCKS.harrow),
   'Harrow: retired truck': truckTarget(TRUCKS.retired),
   'Cobalt: truck': truckTarget(TRUCKS.cobalt),
+  'Harrow: sling': slingTarget('HR-RS-01'),
+  'Cobalt: sling': slingTarget('CF-RS-01'),
 };
 
 const sceneWrites = ['scenes', 'scene_revisions', 'audit_log'];
@@ -146,6 +163,88 @@ const routes: MatrixRoute[] = [
       'Harrow: retired truck': [401, 403, 403, 403, 409, 403],
       'Cobalt: truck': [401, 403, 403, 403, 404, 403],
       'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  {
+    method: 'POST', path: '/api/equipment/[id]/duplicate', handler: duplicate.POST, writes: truckWrites,
+    body: () => ({ name: 'Matrix: copy (example values)', unitNumber: 'MX-2' }),
+    expect: {
+      'Harrow: truck': [401, 403, 403, 403, 201, 403],
+      'Cobalt: truck': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  {
+    method: 'POST', path: '/api/equipment/[id]/retire', handler: retire.POST, writes: ['equipment_profiles', 'audit_log'],
+    expect: {
+      'Harrow: truck': [401, 403, 403, 403, 200, 403],
+      'Harrow: retired truck': [401, 403, 403, 403, 409, 403],
+      'Cobalt: truck': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  {
+    method: 'GET', path: '/api/equipment/[id]/versions', handler: versions.GET, checkId: false,
+    expect: {
+      'Harrow: truck': [401, 200, 200, 200, 200, 404],
+      'Cobalt: truck': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/equipment/[id]/versions/1', handler: version.GET, checkId: false,
+    params: (t) => ({ id: t.id!, version: '1' }),
+    expect: {
+      'Harrow: truck': [401, 200, 200, 200, 200, 404],
+      'Cobalt: truck': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  // ── rigging inventory (operators and admins keep it) ───────────────────
+  { method: 'GET', path: '/api/rigging', handler: rigging.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  { method: 'GET', path: '/api/rigging/export', handler: riggingExport.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    method: 'POST', path: '/api/rigging', handler: rigging.POST, writes: ['rigging_items', 'audit_log'],
+    body: () => ({ tag: 'MX-RS-01', kind: 'round-sling', size: 'purple', length: 3.05 }),
+    expect: { '-': [401, 201, 403, 403, 201, 201] },
+  },
+  {
+    method: 'POST', path: '/api/rigging/import', handler: riggingImport.POST, writes: ['rigging_items', 'audit_log'],
+    body: () => ({ csv: 'tag,kind,size,length_m\nMX-SH-01,shackle,3/4,\n' }),
+    expect: { '-': [401, 201, 403, 403, 201, 201] },
+  },
+  {
+    method: 'GET', path: '/api/rigging/[id]', handler: riggingOne.GET,
+    expect: {
+      'Harrow: sling': [401, 200, 200, 200, 200, 404],
+      'Cobalt: sling': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/rigging/[id]', handler: riggingOne.PUT, writes: ['rigging_items', 'audit_log'],
+    body: () => ({ tag: 'MX-RS-09', kind: 'round-sling', size: 'purple', length: 3.05, notes: 'Matrix edit' }),
+    expect: {
+      'Harrow: sling': [401, 200, 403, 403, 200, 404],
+      'Cobalt: sling': [401, 404, 403, 403, 404, 200],
+      'unknown id': [401, 404, 403, 403, 404, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/rigging/[id]/inspections', handler: inspections.GET, checkId: false,
+    expect: {
+      'Harrow: sling': [401, 200, 200, 200, 200, 404],
+      'Cobalt: sling': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'POST', path: '/api/rigging/[id]/inspections', handler: inspections.POST, writes: ['rigging_items', 'rigging_inspections', 'audit_log'],
+    body: () => ({ inspectedOn: today(), result: 'pass' }),
+    expect: {
+      'Harrow: sling': [401, 201, 403, 403, 201, 404],
+      'Cobalt: sling': [401, 404, 403, 403, 404, 201],
+      'unknown id': [401, 404, 403, 403, 404, 404],
     },
   },
   // ── users and the signed-in user ───────────────────────────────────────
