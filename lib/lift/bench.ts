@@ -114,8 +114,7 @@ function main() {
   time(() => analyzeLift(input, { step: 0.1 }), 30);
   const fast = time(() => analyzeLift(input, { step: 0.1 }), 300);
   const zod = time(() => parseLiftInput(structuredClone(raw)), 100);
-  time(() => naiveAnalysis(input), 1);
-  const naive = time(() => naiveAnalysis(input), 5);
+  const naive = time(() => naiveAnalysis(input), 3);
   const fastMed = pct(fast, 0.5);
   const naiveMed = pct(naive, 0.5);
   const a = analyzeLift(input, { step: 0.1 });
