@@ -1,10 +1,11 @@
 import { assertMass, LiftError } from './errors';
-import { signedArea2, toFlat } from './geometry';
 import { validateLoadChart } from './load-chart';
-import { liftInputSchema, type LiftInput, type LiftInputIn, type PowerLine, type Prism } from './schema';
-import { siteToTruck, type SitePose } from './types';
+import type { LiftInput, LiftInputIn, PowerLine } from './schema';
+import { checkPolygon, parseLiftInput, siteObjects } from './validate';
 import { supportPolygon, type SupportPoint, type TippingLineGeom } from './support-polygon';
 import { footprintLocal, type FootprintLocal } from './footprint';
+
+export { parseLiftInput } from './validate';
 
 /** A body part or obstacle as the clearance sweep sees it: a flat polygon in the truck frame. */
 export interface Target {
@@ -53,47 +54,6 @@ export interface PreparedLift {
   from: number;
   span: number;
   sign: 1 | -1;
-}
-
-/** Inputs this module has validated itself, so the editor's repeated analyses skip re-parsing. */
-const validated = new WeakSet<object>();
-
-/** zod-validates an input (defaults filled in); failures become LiftError naming the field. */
-export function parseLiftInput(raw: LiftInputIn | LiftInput): LiftInput {
-  if (typeof raw === 'object' && raw !== null && validated.has(raw)) return raw as LiftInput;
-  const parsed = liftInputSchema.safeParse(raw);
-  if (parsed.success) {
-    validated.add(parsed.data);
-    return parsed.data;
-  }
-  const issue = parsed.error.issues[0];
-  const field = issue.path.map(String).join('.') || 'input';
-  const last = String(issue.path[issue.path.length - 1] ?? '');
-  const code = /mass$/i.test(last) ? 'invalid-mass' : 'invalid-input';
-  throw new LiftError(code, `${field}: ${issue.message}`, field);
-}
-
-function checkPolygon(points: readonly { x: number; y: number }[], field: string, what: string): Float64Array {
-  const flat = toFlat(points);
-  const distinct = new Set(points.map((p) => `${p.x},${p.y}`)).size;
-  if (distinct < 3 || Math.abs(signedArea2(flat, points.length)) < 1e-9) {
-    throw new LiftError('degenerate-polygon', `${what} has no area: its outline needs three or more points not on one line.`, field);
-  }
-  return flat;
-}
-
-function siteObjects(input: LiftInput): { obstacles: Prism[]; powerLines: PowerLine[] } {
-  const site = input.site;
-  if (!site) return { obstacles: [], powerLines: [] };
-  const pose: SitePose = { x: site.x, y: site.y, heading: site.heading };
-  return {
-    obstacles: site.obstacles.map((o) => ({ ...o, polygon: o.polygon.map((p) => siteToTruck(p, pose)) })),
-    powerLines: site.powerLines.map((l) => ({
-      ...l,
-      a: { ...siteToTruck(l.a, pose), z: l.a.z },
-      b: { ...siteToTruck(l.b, pose), z: l.b.z },
-    })),
-  };
 }
 
 /** Arc from `from` to `to` in `direction`; a span of exactly 360 is kept as a full turn. */
