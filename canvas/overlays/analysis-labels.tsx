@@ -35,6 +35,8 @@ export function AnalysisLabels() {
         return <Pill key={z.id} x={p.x + 6} y={p.y + 6} tone={z.ok ? 'plain' : 'over'} text={`${z.name}: keep ${req} away${z.ok ? '' : ` — OVER LIMIT, ${formatLength(z.distance, units)}`}`} />;
       })}
       {g.lines.map((l) => {
+        // Lines the load cannot tip the truck about (0 %) stay unlabelled, to keep the plan readable.
+        if (!l.governing && !l.over && l.percent <= 0) return null;
         const p = at({ x: (l.a.x + l.b.x) / 2, y: (l.a.y + l.b.y) / 2 });
         const text = l.over ? `${l.id} OVER by ${(-l.margin).toFixed(1)} pts` : `${l.id} margin ${l.margin.toFixed(1)} pts`;
         return <Pill key={l.id} x={p.x - 40} y={p.y - 10} tone={l.over ? 'over' : l.governing ? 'ok' : 'plain'} text={text} />;

@@ -62,7 +62,11 @@ export function PlanView() {
       className="relative h-full w-full touch-none select-none overflow-hidden bg-paper"
       style={{ cursor }}
       onPointerDown={(e) => {
-        ref.current!.setPointerCapture(e.pointerId);
+        try {
+          ref.current!.setPointerCapture(e.pointerId);
+        } catch {
+          // A pointer the browser no longer tracks (or a synthetic one) cannot be captured; carry on.
+        }
         const i = info(e);
         if (e.pointerType === 'touch' && pinch.current.down(editor, e.pointerId, i.screen)) return;
         editor.pointerDown(i);
