@@ -39,7 +39,7 @@ export function SidePanel() {
       </button>
       <aside
         aria-label="Details and results"
-        className={`${open ? 'flex' : 'hidden'} absolute inset-y-14 right-0 z-30 w-[min(380px,92vw)] flex-col border-l border-paper-line bg-paper-raised shadow-xl lg:static lg:flex lg:w-[360px] lg:shadow-none xl:w-[400px]`}
+        className={`${open ? 'flex' : 'hidden'} absolute inset-y-0 right-0 z-30 w-[min(380px,92vw)] flex-col border-l border-paper-line bg-paper-raised shadow-xl lg:static lg:flex lg:w-[360px] lg:shadow-none xl:w-[400px]`}
       >
         {tabs}
         <div className="min-h-0 flex-1 overflow-y-auto p-3">{tab === 'inspector' ? <Inspector /> : <ResultsPanel />}</div>

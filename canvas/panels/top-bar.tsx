@@ -16,11 +16,11 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
   const zoom = useEditorState((s) => zoomPercent(s.camera));
   const readOnly = useEditorState((s) => s.readOnly);
   return (
-    <header className="flex h-14 shrink-0 items-center gap-2 border-b border-paper-line bg-paper-raised px-2">
+    <header className="flex min-h-14 shrink-0 flex-wrap items-center gap-x-2 gap-y-1 border-b border-paper-line bg-paper-raised px-2 py-1">
       <Link href="/scenes" className="flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk">
         ← Scenes
       </Link>
-      <div className="min-w-0 flex-1">
+      <div className="min-w-[14rem] flex-1">
         <h1 className="truncate text-base font-semibold leading-tight" data-testid="scene-title">
           {scene.title}
         </h1>
