@@ -77,7 +77,7 @@ test('sketch a lift from scratch, read the results, and find the same scene afte
 
   // Wait for the autosave to hold what the store holds.
   const local = await storeDoc(page);
-  await expect.poll(async () => JSON.stringify((await savedDoc(page, id)).document), { timeout: 15_000 }).toBe(JSON.stringify(local));
+  await expect.poll(async () => (await savedDoc(page, id)).document, { timeout: 15_000 }).toEqual(local);
 
   const worstText = (await page.getByTestId('worst-percent').textContent())!;
   const obstacleId = local.objects.find((o: { kind: string }) => o.kind === 'obstacle').id as string;
@@ -109,12 +109,13 @@ test('sketch a lift from scratch, read the results, and find the same scene afte
   await page.keyboard.press('Shift+ArrowLeft');
   await expect(page.getByTestId('slew-value')).not.toHaveText(before!);
   await expect(page.getByTestId('live-readout')).toContainText('% of tipping about');
-  await expect.poll(async () => JSON.stringify((await savedDoc(page, id)).document), { timeout: 15_000 }).toBe(JSON.stringify(await storeDoc(page)));
+  const scrubbed = await storeDoc(page);
+  await expect.poll(async () => (await savedDoc(page, id)).document, { timeout: 15_000 }).toEqual(scrubbed);
 
   const beforeReload = await storeDoc(page);
   await page.reload();
   await expect(page.getByTestId('plan-view')).toBeVisible();
-  await expect.poll(async () => JSON.stringify(await storeDoc(page))).toBe(JSON.stringify(beforeReload));
+  await expect.poll(async () => await storeDoc(page)).toEqual(beforeReload);
   await page.getByTestId('tab-results').click();
   await expect(page.getByTestId('worst-percent')).toHaveText(worstText);
 
@@ -124,7 +125,7 @@ test('sketch a lift from scratch, read the results, and find the same scene afte
   await page.keyboard.press('Escape');
 });
 
-test('the demo coil transfer opens with its swing check drawn, and a supervisor sees it read-only', async ({ page }) => {
+test('the demo coil transfer opens with its swing check drawn, and a supervisor sees it read-only', async ({ page, browser }) => {
   await signIn(page, 'operator@harrow.example');
   const list = await (await page.request.get('/api/scenes?title=Coil')).json();
   const id = list.items[0].id as number;
@@ -136,6 +137,20 @@ test('the demo coil transfer opens with its swing check drawn, and a supervisor 
   await clickSite(page, 0, 0.5);
   await expect(page.getByTestId('inspector-truck')).toBeVisible();
   await screens(page, 'editor-truck-selected');
+
+  const sup = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+  const other = await sup.newPage();
+  await signIn(other, 'supervisor@harrow.example');
+  await other.goto(`/scenes/${id}`);
+  await expect(other.getByText('Read-only: you can look and scrub the slew, not edit')).toBeVisible();
+  await expect(other.locator('[data-tool="truck"]')).toHaveCount(0);
+  const doc0 = JSON.stringify(await storeDoc(other));
+  await other.getByTestId('plan-view').click({ position: { x: 5, y: 5 } });
+  await other.keyboard.press('Shift+ArrowLeft');
+  await other.keyboard.press('Delete');
+  expect(JSON.stringify(await storeDoc(other))).toBe(doc0);
+  await screens(other, 'editor-read-only', ['laptop', 'tablet-portrait']);
+  await sup.close();
 });
 
 test('tablet with touch: tap to place, drag with a finger, pinch to zoom', async ({ browser }) => {
