@@ -64,7 +64,10 @@ export function nudgeSlew(ed: Editor, by: number) {
 
 export function fitToScene(ed: Editor) {
   const ctx = ed.geometry();
-  const pts = ed.state.document.objects.flatMap((o) => footprintsOf(o, ctx).flat());
+  // Long lanes and wire spans would shrink the lift to a speck: with a truck, fit what is near the swing.
+  const hasTruck = ed.state.document.objects.some((o) => o.kind === 'truck');
+  const wide = (o: (typeof ed.state.document.objects)[number]) => o.kind === 'obstacle' && (o.obstacleKind === 'traffic-lane' || o.obstacleKind === 'power-line');
+  const pts = ed.state.document.objects.filter((o) => !(hasTruck && wide(o))).flatMap((o) => footprintsOf(o, ctx).flat());
   const truck = ed.state.document.objects.find((o): o is TruckObject => o.kind === 'truck');
   if (truck && ctx.truck) {
     // Keep the whole boom circle in view, so the swing is visible wherever it goes.
