@@ -55,7 +55,7 @@ export function RiggingImport({ onImported }: { onImported: () => void }) {
       {result && !result.ok && (
         <div className="mt-3 space-y-2">
           <Notice tone="error" title="Nothing was imported">
-            {result.error}
+            {result.error.replace(/^Nothing was imported: /, '')}
           </Notice>
           {result.rows.length > 0 && (
             <table className="w-full border-collapse text-left text-body" aria-label="Import problems">
