@@ -5,6 +5,9 @@ import { createUser, findUserById } from '@/db/repositories/users';
 import { createEquipmentProfile, retireEquipmentProfile } from '@/db/repositories/equipment';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
+import { storeSceneUpload } from '@/lib/background/store-scene-upload';
+import { sniffImage } from '@/lib/image-sniff';
+import { makePng } from '@/tests/fixtures/images';
 
 /**
  * Test-only additions to the demo scenario, so every access rule has something to bite on: a second
@@ -39,6 +42,12 @@ export async function addAccessFixtures(db: DB): Promise<void> {
   await softDeleteScene(db, await asCurrentUser(db, operator.id), gone.id);
   const retired = await createEquipmentProfile(db, harrow.id, { kind: 'truck', name: '25-ton wrecker (example values, retired)', unitNumber: TRUCKS.retired, spec: HR4_SPEC });
   await retireEquipmentProfile(db, harrow.id, retired.id);
+  // A site background image on the operator's draft and on the other organisation's scene.
+  const png = makePng(4, 3);
+  for (const title of [TITLES.ownDraft, TITLES.otherOrg]) {
+    const scene = await db.selectFrom('scenes').select(['id', 'organisation_id', 'owner_id']).where('title', '=', title).executeTakeFirstOrThrow();
+    await storeSceneUpload(db, { organisationId: scene.organisation_id, sceneId: scene.id, uploaderId: scene.owner_id, bytes: png, image: sniffImage(png)! });
+  }
 }
 
 export async function sceneIdByTitle(title: string, db: DB = getDb()): Promise<number> {

@@ -40,6 +40,8 @@ export interface MatrixRoute {
   writes?: readonly string[];
   body?: (t: Target) => unknown;
   query?: string;
+  /** Builds the request body and headers itself (multipart uploads); overrides `body`. */
+  init?: (t: Target) => RequestInit;
   /** Path params, when the route has more than [id]. */
   params?: (t: Target) => Record<string, string>;
   /** A successful GET on an [id] route answers that object, with its id; false for lists under an id. */
@@ -57,6 +59,7 @@ export type LeakMarkers = Record<Actor, readonly string[]>;
 function request(route: MatrixRoute, target: Target): Request {
   const path = route.path.replace('[id]', target.id ?? 'missing-target-id');
   const url = `http://arcline.test${path}${route.query ? `?${route.query}` : ''}`;
+  if (route.init) return new Request(url, { ...route.init(target), method: route.method });
   const init: RequestInit = { method: route.method };
   if (route.body) {
     init.body = JSON.stringify(route.body(target));

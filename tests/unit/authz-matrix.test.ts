@@ -15,6 +15,11 @@ import * as inspections from '@/app/api/rigging/[id]/inspections/route';
 import * as riggingExport from '@/app/api/rigging/export/route';
 import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
+import * as analyze from '@/app/api/analyze/route';
+import * as background from '@/app/api/scenes/[id]/background/route';
+import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
+import { makePng } from '@/tests/fixtures/images';
+import { squareOfPads } from '@/tests/lift/scenarios';
 import * as me from '@/app/api/me/route';
 import { getDb } from '@/db';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
@@ -45,6 +50,16 @@ const slingTarget = (tag: string): TargetResolver => async () => {
   const row = await getDb().selectFrom('rigging_items').select('id').where('tag', '=', tag).executeTakeFirstOrThrow();
   return { id: String(row.id) };
 };
+const imageTarget = (title: string): TargetResolver => async () => {
+  const id = await sceneIdByTitle(title);
+  const upload = await getDb().selectFrom('scene_uploads').select('id').where('scene_id', '=', id).executeTakeFirstOrThrow();
+  return { id: String(id), uploadId: String(upload.id) };
+};
+const pngForm = () => {
+  const form = new FormData();
+  form.append('file', new Blob([makePng(8, 6)], { type: 'image/png' }), 'site.png');
+  return { body: form };
+};
 const today = () => new Date().toISOString().slice(0, 10);
 
 const targets: Record<string, TargetResolver> = {
@@ -60,6 +75,8 @@ const targets: Record<string, TargetResolver> = {
   'Harrow: retired truck': truckTarget(TRUCKS.retired),
   'Cobalt: truck': truckTarget(TRUCKS.cobalt),
   'Harrow: sling': slingTarget('HR-RS-01'),
+  'Harrow: draft’s image': imageTarget(TITLES.ownDraft),
+  'Cobalt: scene’s image': imageTarget(TITLES.otherOrg),
   'Cobalt: sling': slingTarget('CF-RS-01'),
 };
 
@@ -130,6 +147,26 @@ const routes: MatrixRoute[] = [
       'unknown id': [401, 403, 403, 404, 403, 403],
     },
   },
+  {
+    method: 'POST', path: '/api/scenes/[id]/background', handler: background.POST, writes: ['scene_uploads', 'audit_log'], init: pngForm,
+    expect: {
+      'Harrow: operator’s draft': [401, 201, 403, 403, 403, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 201],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/background/[uploadId]', handler: backgroundImage.GET, checkId: false,
+    params: (t) => ({ id: t.id!, uploadId: String(t.uploadId) }),
+    expect: {
+      'Harrow: draft’s image': [401, 200, 200, 200, 200, 404],
+      'Cobalt: scene’s image': [401, 404, 404, 404, 404, 200],
+    },
+  },
+  { method: 'POST', path: '/api/analyze', handler: analyze.POST, body: () => squareOfPads(), expect: { '-': [401, 200, 200, 200, 200, 200] } },
   // ── equipment ──────────────────────────────────────────────────────────
   { method: 'GET', path: '/api/equipment', handler: equipment.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
