@@ -43,6 +43,18 @@ export function BackgroundPanel({ sceneId, background, units, canEdit, placeAt, 
     }
   };
 
+  /** Moves the image so its centre sits in the middle of the view, keeping its scale. */
+  const centreInView = async () => {
+    if (!background) return;
+    try {
+      const size = await imageSize(backgroundUrl(sceneId, background.uploadId));
+      const c = placeAt();
+      onChange({ ...background, x: c.x - (size.width / 2) * background.metresPerPixel, y: c.y + (size.height / 2) * background.metresPerPixel });
+    } catch (e) {
+      setError((e as Error).message);
+    }
+  };
+
   const disabled = !canEdit || busy;
   return (
     // The inspector gives this section its "Site image" heading.
@@ -55,7 +67,7 @@ export function BackgroundPanel({ sceneId, background, units, canEdit, placeAt, 
       )}
       {!background && <p className="text-sm text-ink-soft">A photo or aerial image under the sketch (PNG, JPEG or WebP, up to 10 MB).</p>}
       <div className="flex flex-wrap gap-2">
-        <button type="button" className={`${btn} border-teal bg-teal text-white hover:bg-teal-dark`} disabled={disabled} onClick={() => input.current?.click()}>
+        <button type="button" className={`${btn} border-teal bg-teal text-white hover:bg-teal-dark`} disabled={disabled || !!background?.locked} onClick={() => input.current?.click()}>
           {busy ? 'Uploading…' : background ? 'Replace image' : 'Add site image'}
         </button>
         <input
@@ -73,6 +85,11 @@ export function BackgroundPanel({ sceneId, background, units, canEdit, placeAt, 
         {background && (
           <button type="button" className={`${btn} border-ink bg-paper-raised text-ink hover:bg-paper-sunk`} disabled={!canEdit || background.locked} onClick={() => setCalibrating(true)}>
             Set scale…
+          </button>
+        )}
+        {background && (
+          <button type="button" className={`${btn} border-paper-line bg-paper-raised text-ink hover:bg-paper-sunk`} disabled={!canEdit || background.locked} onClick={() => void centreInView()}>
+            Centre in view
           </button>
         )}
       </div>
