@@ -33,7 +33,7 @@ export default defineConfig({
   webServer: {
     command: 'bash scripts/e2e-server.sh',
     url: `${baseURL}/sign-in`,
-    timeout: 240_000,
+    timeout: 900_000,
     reuseExistingServer: false,
     stdout: 'pipe',
     env: {
