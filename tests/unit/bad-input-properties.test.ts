@@ -124,7 +124,12 @@ describe('PUT /api/scenes/[id] with generated bodies', () => {
     const created = await call({ handler: scenes.POST, method: 'POST', body: { title: 'Property target' } });
     const id = String(created.json.id);
     const body = fc.record(
-      { revision: fc.oneof(fc.constant('current'), fc.integer({ min: -2, max: 5 }), fc.double(), fc.string({ maxLength: 2 }), fc.constant(null)), title: anyTitle, document: anyDocument },
+      {
+        // The current revision is drawn often enough that the save branch is exercised on every run.
+        revision: fc.oneof({ arbitrary: fc.constant('current'), weight: 6 }, fc.integer({ min: -2, max: 5 }), fc.double(), fc.string({ maxLength: 2 }), fc.constant(null)),
+        title: anyTitle,
+        document: anyDocument,
+      },
       { requiredKeys: [] },
     );
     let saved = 0;
