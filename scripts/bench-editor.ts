@@ -3,11 +3,16 @@
  * database, opens a scene with 300 obstacles in Chromium, scrubs the slew through 360° one degree per
  * frame and measures frame intervals with requestAnimationFrame in the page. Prints the median and the
  * 95th percentile, and the compressed JS bytes the editor page loads. Needs `next build` first.
+ *
+ * Two passes. The paced pass runs Chromium as a user has it: frames come at the display's 60 Hz, so an
+ * interval can never be shorter than 16.7 ms and the question is whether frames are dropped. The unpaced
+ * pass turns the frame-rate limit off, so each interval is what one frame really costs (script, layout,
+ * Konva drawing); its p95 against 16.7 ms is the verdict.
  */
 import { spawn, execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium } from 'playwright-core';
+import { chromium, type Page } from 'playwright-core';
 import { DEMO_SCENES } from '@/db/seed/demo-scenes';
 
 const root = process.cwd();
@@ -65,66 +70,93 @@ function benchDocument(profileId: number, version: number) {
 
 const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))];
 
-try {
-  await waitForServer();
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'] });
-  const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const UNPACED = ['--disable-gpu-vsync', '--disable-frame-rate-limit'];
+
+interface Pass {
+  frames: number[];
+  work: number[];
+  idle: number[];
+  jsBytes: number;
+}
+
+async function signIn(page: Page) {
   await page.goto(`${base}/sign-in`);
   await page.getByLabel('E-mail').fill('operator@harrow.example');
   await page.getByLabel('Password').fill('arcline-demo-2026');
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL(/\/scenes$/);
+}
+
+async function createBenchScene(page: Page): Promise<number> {
   const trucks = (await (await page.request.get(`${base}/api/equipment`)).json()) as { items?: { id: number; unitNumber: string; version: number }[] } | { id: number; unitNumber: string; version: number }[];
   const list = Array.isArray(trucks) ? trucks : (trucks.items ?? []);
   const hr7 = list.find((t) => t.unitNumber === 'HR-7')!;
   const created = await page.request.post(`${base}/api/scenes`, { data: { title: 'Bench: 300 obstacles', document: benchDocument(hr7.id, hr7.version), equipmentProfileId: hr7.id } });
   if (created.status() !== 201) throw new Error(`create failed: ${created.status()} ${await created.text()}`);
-  const id = (await created.json()).id as number;
+  return (await created.json()).id as number;
+}
 
-  let jsBytes = 0;
-  page.on('requestfinished', async (req) => {
-    if (req.resourceType() !== 'script') return;
-    const sizes = await req.sizes();
-    jsBytes += sizes.responseBodySize + sizes.responseHeadersSize;
-  });
-  await page.goto(`${base}/scenes/${id}`, { waitUntil: 'networkidle' });
-  await page.waitForFunction('!!window.__arclineEditor?.store.getState().analysis?.result', null, { timeout: 60_000 });
-
-  // Baseline: the same page with nothing changing, so the machine's own frame pacing is visible.
-  const idle = (await page.evaluate(`new Promise((resolve) => {
-    const t = []; let last = performance.now(); let n = 0;
-    const f = (now) => { t.push(now - last); last = now; if (n++ >= 120) return resolve(t.slice(1)); requestAnimationFrame(f); };
-    requestAnimationFrame(f);
-  })`)) as number[];
-  // A string, not a function: tsx would wrap a function with helpers that do not exist in the page.
-  const frames = (await page.evaluate(`new Promise((resolve) => {
-    const store = window.__arclineEditor.store;
-    const truck = store.getState().document.objects.find((o) => o.kind === 'truck');
-    const start = truck.boom.slew;
-    const times = [];
-    const work = [];
-    let i = 0;
-    let last = performance.now();
-    const frame = (now) => {
-      times.push(now - last);
-      last = now;
-      if (i++ >= 360) return resolve({ frames: times.slice(1), work });
-      const slew = (start + i) % 360;
-      const t0 = performance.now();
-      store.getState().run((doc) => ({ document: { ...doc, objects: doc.objects.map((o) => (o.kind === 'truck' ? { ...o, boom: { ...o.boom, slew } } : o)) }, capture: 'gesture' }));
-      work.push(performance.now() - t0);
+async function pass(extraArgs: string[], sceneId: number | null): Promise<Pass & { sceneId: number }> {
+  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...ARGS, ...extraArgs] });
+  try {
+    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    await signIn(page);
+    const id = sceneId ?? (await createBenchScene(page));
+    let jsBytes = 0;
+    page.on('requestfinished', async (req) => {
+      if (req.resourceType() !== 'script') return;
+      const sizes = await req.sizes();
+      jsBytes += sizes.responseBodySize + sizes.responseHeadersSize;
+    });
+    await page.goto(`${base}/scenes/${id}`, { waitUntil: 'networkidle' });
+    await page.waitForFunction('!!window.__arclineEditor?.store.getState().analysis?.result', null, { timeout: 60_000 });
+    // Baseline: the same page with nothing changing, so the machine's own frame pacing is visible.
+    const idle = (await page.evaluate(`new Promise((resolve) => {
+      const t = []; let last = performance.now(); let n = 0;
+      const f = (now) => { t.push(now - last); last = now; if (n++ >= 120) return resolve(t.slice(1)); requestAnimationFrame(f); };
+      requestAnimationFrame(f);
+    })`)) as number[];
+    // A string, not a function: tsx would wrap a function with helpers that do not exist in the page.
+    const run = (await page.evaluate(`new Promise((resolve) => {
+      const store = window.__arclineEditor.store;
+      const truck = store.getState().document.objects.find((o) => o.kind === 'truck');
+      const start = truck.boom.slew;
+      const times = [];
+      const work = [];
+      let i = 0;
+      let last = performance.now();
+      const frame = (now) => {
+        times.push(now - last);
+        last = now;
+        if (i++ >= 360) return resolve({ frames: times.slice(1), work });
+        const slew = (start + i) % 360;
+        const t0 = performance.now();
+        store.getState().run((doc) => ({ document: { ...doc, objects: doc.objects.map((o) => (o.kind === 'truck' ? { ...o, boom: { ...o.boom, slew } } : o)) }, capture: 'gesture' }));
+        work.push(performance.now() - t0);
+        requestAnimationFrame(frame);
+      };
       requestAnimationFrame(frame);
-    };
-    requestAnimationFrame(frame);
-  })`)) as { frames: number[]; work: number[] };
-  const median = pct(frames.frames, 50);
-  const p95 = pct(frames.frames, 95);
-  console.log(`Editor slew scrub, 300 obstacles, ${frames.frames.length} frames (1° per frame through 360°):`);
-  console.log(`  frame time median ${median.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms (target p95 < 16.7 ms) ${p95 < 16.7 ? 'within target' : 'OVER target'}`);
-  console.log(`  idle page (nothing changing), same machine: median ${pct(idle, 50).toFixed(2)} ms, p95 ${pct(idle, 95).toFixed(2)} ms`);
-  console.log(`  script work per frame (store update + React render, synchronous): median ${pct(frames.work, 50).toFixed(2)} ms, p95 ${pct(frames.work, 95).toFixed(2)} ms`);
-  console.log(`  JS loaded by the editor page, compressed on the wire: ${(jsBytes / 1024).toFixed(1)} KiB (${jsBytes} bytes)`);
-  await browser.close();
+    })`)) as { frames: number[]; work: number[] };
+    return { ...run, idle, jsBytes, sceneId: id };
+  } finally {
+    await browser.close();
+  }
+}
+
+const ms = (x: number) => `${x.toFixed(2)} ms`;
+
+try {
+  await waitForServer();
+  const paced = await pass([], null);
+  const unpaced = await pass(UNPACED, paced.sceneId);
+  const dropped = paced.frames.filter((f) => f > 1.5 * pct(paced.idle, 50)).length;
+  const p95 = pct(unpaced.frames, 95);
+  console.log(`Editor slew scrub, 300 obstacles, ${paced.frames.length} frames (1° per frame through 360°), Chromium 1366×900:`);
+  console.log(`  paced (60 Hz display): frame interval median ${ms(pct(paced.frames, 50))}, p95 ${ms(pct(paced.frames, 95))}; idle page median ${ms(pct(paced.idle, 50))}, p95 ${ms(pct(paced.idle, 95))}; frames over 1.5× the idle interval: ${dropped} of ${paced.frames.length}`);
+  console.log(`  unpaced (frame-rate limit off): frame time median ${ms(pct(unpaced.frames, 50))}, p95 ${ms(p95)}; idle page median ${ms(pct(unpaced.idle, 50))} (target p95 < 16.7 ms: ${p95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / p95).toFixed(1)}× headroom)`);
+  console.log(`  script work per frame (store update + analysis snapshot + React render, synchronous): median ${ms(pct(paced.work, 50))}, p95 ${ms(pct(paced.work, 95))}`);
+  console.log(`  JS loaded by the editor page, compressed on the wire: ${(paced.jsBytes / 1024).toFixed(1)} KiB (${paced.jsBytes} bytes)`);
 } finally {
   if (server.pid) process.kill(-server.pid, 'SIGTERM');
 }

@@ -13,7 +13,7 @@ function Pill({ x, y, text, tone, testId }: { x: number; y: number; text: string
   const ink = tone === 'plain' || tone === 'live' ? PAL.ink : '#FFFFFF';
   return (
     <Label x={x} y={y} name={testId}>
-      <Tag fill={fill} stroke={PAL.ink} strokeWidth={tone === 'plain' ? 1 : 0} cornerRadius={3} opacity={0.95} />
+      <Tag fill={fill} stroke={PAL.ink} strokeWidth={tone === 'plain' ? 1 : 0} cornerRadius={3} perfectDrawEnabled={false} opacity={0.95} />
       <Text text={text} fontSize={12} fontStyle="600" fontFamily="Inter Tight" fill={ink} padding={4} />
     </Label>
   );

@@ -20,9 +20,9 @@ export function AnalysisOverlays() {
   return (
     <>
       {g.powerZones.map((z) => (
-        <Line key={z.id} points={flat(z.polygon)} closed fill={PAL.overLight} opacity={0.55} stroke={PAL.over} strokeWidth={2} dash={DASH_OVER} strokeScaleEnabled={false} />
+        <Line key={z.id} points={flat(z.polygon)} closed fill={PAL.overLight} perfectDrawEnabled={false} opacity={0.55} stroke={PAL.over} strokeWidth={2} dash={DASH_OVER} strokeScaleEnabled={false} />
       ))}
-      <Line points={flat(g.band)} closed fill={PAL.amber} opacity={0.14} stroke={PAL.amberDark} strokeWidth={1} dash={DASH_PLAN} strokeScaleEnabled={false} />
+      <Line points={flat(g.band)} closed fill={PAL.amber} perfectDrawEnabled={false} opacity={0.14} stroke={PAL.amberDark} strokeWidth={1} dash={DASH_PLAN} strokeScaleEnabled={false} />
       <Arrow
         points={flat([...g.arc.slice(0, -1), prev, last])}
         stroke={PAL.amberDark}
@@ -34,7 +34,7 @@ export function AnalysisOverlays() {
       />
       <Circle x={g.pick.x} y={g.pick.y} radius={6 / pxPerM} fill={PAL.paper} stroke={PAL.amberDark} strokeWidth={2.5} strokeScaleEnabled={false} />
       <Circle x={g.set.x} y={g.set.y} radius={6 / pxPerM} fill={PAL.amberDark} />
-      <Line points={flat(g.hull)} closed fill={PAL.tealLight} opacity={0.35} />
+      <Line points={flat(g.hull)} closed fill={PAL.tealLight} perfectDrawEnabled={false} opacity={0.35} />
       {g.lines.map((l) => (
         <Line
           key={l.id}
@@ -52,7 +52,7 @@ export function AnalysisOverlays() {
         <Line key={`c-${c.target}`} points={[c.p.x, c.p.y, c.q.x, c.q.y]} stroke={c.ok ? PAL.teal : PAL.over} strokeWidth={2} dash={c.ok ? undefined : DASH_OVER} strokeScaleEnabled={false} />
       ))}
       {g.clearances.map((c) => (
-        <Line key={`o-${c.target}`} points={flat(g.loadAt(c.slew))} closed stroke={c.ok ? PAL.teal : PAL.over} strokeWidth={1} dash={[3, 4]} opacity={0.7} strokeScaleEnabled={false} />
+        <Line key={`o-${c.target}`} points={flat(g.loadAt(c.slew))} closed stroke={c.ok ? PAL.teal : PAL.over} strokeWidth={1} dash={[3, 4]} perfectDrawEnabled={false} opacity={0.7} strokeScaleEnabled={false} />
       ))}
       {g.nearestNow && <Line points={[g.nearestNow.p.x, g.nearestNow.p.y, g.nearestNow.q.x, g.nearestNow.q.y]} stroke={PAL.amberDark} strokeWidth={2} strokeScaleEnabled={false} />}
     </>

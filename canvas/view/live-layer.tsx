@@ -50,7 +50,7 @@ export function LiveLayer() {
             stroke={h.kind === 'boom-tip' ? PAL.ink : PAL.teal}
             strokeWidth={2.5}
             strokeScaleEnabled={false}
-            opacity={h.kind === 'boom-tip' ? 0.95 : 1}
+            perfectDrawEnabled={false} opacity={h.kind === 'boom-tip' ? 0.95 : 1}
           />
           {h.kind === 'rotate' && <Circle x={h.at.x} y={h.at.y} radius={4 / pxPerM} fill={PAL.teal} />}
         </Group>
@@ -69,7 +69,7 @@ export function LiveLayer() {
           strokeWidth={1.5}
           dash={[5, 4]}
           fill={PAL.tealLight}
-          opacity={0.5}
+          perfectDrawEnabled={false} opacity={0.5}
           strokeScaleEnabled={false}
         />
       )}

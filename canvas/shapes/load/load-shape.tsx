@@ -14,7 +14,7 @@ export const LoadRestShape = memo(function LoadRestShape({ load }: { load: LoadO
   const s = load.shape;
   return (
     <Group listening={false}>
-      <Line points={flat(outline)} closed fill={PAL.loadFill} opacity={0.25} stroke={PAL.amberDark} strokeWidth={2} dash={DASH_PLAN} strokeScaleEnabled={false} />
+      <Line points={flat(outline)} closed fill={PAL.loadFill} perfectDrawEnabled={false} opacity={0.25} stroke={PAL.amberDark} strokeWidth={2} dash={DASH_PLAN} strokeScaleEnabled={false} />
       {s.kind === 'coil' && s.eye === 'vertical' && <Circle x={load.x} y={load.y} radius={s.innerDiameter / 2} stroke={PAL.amberDark} strokeWidth={1.5} strokeScaleEnabled={false} />}
     </Group>
   );
@@ -27,7 +27,7 @@ export function LoadHangingShape({ load, at, rotation }: { load: LoadObject; at:
   const s = load.shape;
   return (
     <Group listening={false}>
-      <Line points={flat(outline)} closed fill={PAL.loadFill} opacity={0.9} stroke={PAL.ink} strokeWidth={1.5} strokeScaleEnabled={false} />
+      <Line points={flat(outline)} closed fill={PAL.loadFill} perfectDrawEnabled={false} opacity={0.9} stroke={PAL.ink} strokeWidth={1.5} strokeScaleEnabled={false} />
       {s.kind === 'coil' && s.eye === 'vertical' && <Circle x={at.x} y={at.y} radius={s.innerDiameter / 2} fill={PAL.paper} stroke={PAL.ink} strokeWidth={1} strokeScaleEnabled={false} />}
       {s.kind === 'coil' && s.eye === 'horizontal' && (
         <Line points={flat(placePolygon([{ x: -s.width / 2, y: 0 }, { x: s.width / 2, y: 0 }], pose))} stroke={PAL.ink} strokeWidth={1} dash={[4, 3]} strokeScaleEnabled={false} />

@@ -22,7 +22,7 @@ export const ObstacleShape = memo(function ObstacleShape({ obstacle }: { obstacl
         points={flat(poly)}
         closed
         fill={colour}
-        opacity={lane ? 0.45 : obstacle.obstacleKind === 'tree' ? 0.55 : 0.75}
+        perfectDrawEnabled={false} opacity={lane ? 0.45 : obstacle.obstacleKind === 'tree' ? 0.55 : 0.75}
         stroke={PAL.ink}
         strokeWidth={1}
         dash={lane ? [12, 8] : undefined}

@@ -15,7 +15,7 @@ export const TrailerShape = memo(function TrailerShape({ trailer }: { trailer: T
   return (
     <Group listening={false}>
       <Line points={flat(deck)} closed fill={PAL.trailerFill} stroke={PAL.ink} strokeWidth={1.5} strokeScaleEnabled={false} />
-      <Line points={flat(nose)} closed fill={PAL.inkSoft} opacity={0.6} />
+      <Line points={flat(nose)} closed fill={PAL.inkSoft} perfectDrawEnabled={false} opacity={0.6} />
     </Group>
   );
 });

@@ -11,7 +11,7 @@ export function BoomShape({ truck, model, slew, pxPerM }: { truck: TruckObject; 
   const b = hookSitePoint(truck, model, slew);
   return (
     <Group listening={false}>
-      <Line points={[a.x, a.y, b.x, b.y]} stroke={PAL.ink} strokeWidth={Math.max(6, 0.45 * pxPerM)} lineCap="round" strokeScaleEnabled={false} opacity={0.9} />
+      <Line points={[a.x, a.y, b.x, b.y]} stroke={PAL.ink} strokeWidth={Math.max(6, 0.45 * pxPerM)} lineCap="round" strokeScaleEnabled={false} perfectDrawEnabled={false} opacity={0.9} />
       <Line points={[a.x, a.y, b.x, b.y]} stroke={PAL.amber} strokeWidth={Math.max(2, 0.15 * pxPerM)} lineCap="round" strokeScaleEnabled={false} />
       <Circle x={b.x} y={b.y} radius={7 / pxPerM} fill={PAL.amber} stroke={PAL.ink} strokeWidth={2} strokeScaleEnabled={false} />
     </Group>

@@ -31,7 +31,7 @@ function TruckShapeInner({ truck, model }: { truck: TruckObject; model: TruckMod
       {pads.map((p) => (
         <Group key={`pad-${p.leg.id}`}>
           {p.cribbing && <Line points={flat(p.cribbing)} closed fill={PAL.cribFill} stroke={PAL.ink} strokeWidth={1} strokeScaleEnabled={false} />}
-          <Line points={flat(p.pad)} closed fill={PAL.padFill} opacity={0.85} />
+          <Line points={flat(p.pad)} closed fill={PAL.padFill} perfectDrawEnabled={false} opacity={0.85} />
         </Group>
       ))}
       <Circle x={truck.x} y={truck.y} radius={0.35} stroke={PAL.ink} strokeWidth={2} strokeScaleEnabled={false} fill={PAL.paper} />
