@@ -9,7 +9,7 @@ const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y
 /**
  * The swing check on the plan (world group, metres): approach zones, the swept band and planned arc, the
  * support polygon with each tipping line, the worst-case ray and the clearance marks. A failed item is
- * red, dashed and labelled (see ./analysis-labels), so colour is never the only sign.
+ * red, dashed and labelled (see ./analysis-labels and ./label-placement), so colour is never the only sign.
  */
 export function AnalysisOverlays() {
   const g = useOverlayGeometry();

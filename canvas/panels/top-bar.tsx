@@ -20,7 +20,7 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
       <Link href="/scenes" className="flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk">
         ← Scenes
       </Link>
-      <div className="min-w-[14rem] flex-1">
+      <div className="min-w-[7rem] flex-1 lg:min-w-[14rem]">
         <h1 className="truncate text-base font-semibold leading-tight" data-testid="scene-title">
           {scene.title}
         </h1>
@@ -55,7 +55,7 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
       <ToolButton title="Zoom out (−)" aria-label="Zoom out" onClick={() => zoomBy(editor, 0.8)}>
         −
       </ToolButton>
-      <span className="w-14 text-center text-sm tabular-nums" data-testid="zoom" aria-label="Zoom">
+      <span className="hidden w-14 text-center text-sm tabular-nums lg:inline" data-testid="zoom" aria-label="Zoom">
         {zoom}%
       </span>
       <ToolButton title="Zoom in (+)" aria-label="Zoom in" onClick={() => zoomBy(editor, 1.25)}>

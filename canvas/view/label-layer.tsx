@@ -1,46 +1,82 @@
 'use client';
+import { useRef, type ReactElement } from 'react';
 import { Layer, Label, Tag, Text } from 'react-konva';
 import { useEditorState } from '../editor-context';
 import { worldToScreen } from '../editor/camera';
 import { formatLength } from '@/lib/units';
 import { tapeLength } from '../shapes/tape/geometry';
 import { PAL } from './palette';
-import { AnalysisLabels } from '../overlays/analysis-labels';
+import { analysisPillItems, Pill, PILL_FONT, PILL_PAD, type PillItem } from '../overlays/analysis-labels';
+import { useOverlayGeometry } from '../overlays/use-overlay';
+import { placeLabels, type LabelRequest } from '../overlays/label-placement';
+import { textWidth } from '../overlays/measure-text';
 
-/** Text at a fixed pixel size, placed from site positions: notes, tape lengths and object labels. */
+const NOTE_FONT = 14;
+const NOTE_PAD = 6;
+const TAPE_FONT = 13;
+
+/**
+ * Text at a fixed pixel size, placed from site positions: notes, tape lengths, object labels and the swing
+ * check's pills. Notes and tape lengths stay where they are; the rest are spread so none covers another.
+ */
 export function LabelLayer() {
   const objects = useEditorState((s) => s.document.objects);
   const camera = useEditorState((s) => s.camera);
   const vp = useEditorState((s) => s.viewport);
   const units = useEditorState((s) => s.units);
   const model = useEditorState((s) => s.truck);
-  const at = (x: number, y: number) => worldToScreen(camera, vp, { x, y });
+  const g = useOverlayGeometry();
+  const lastChoice = useRef<Map<string, number>>(new Map());
+  const at = (p: { x: number; y: number }) => worldToScreen(camera, vp, p);
+
+  const fixed: ReactElement[] = [];
+  const requests: LabelRequest[] = [];
+  const items = new Map<string, PillItem>();
+  const want = (it: PillItem) => {
+    items.set(it.key, it);
+    requests.push({ key: it.key, anchor: it.anchor, w: textWidth(it.text, PILL_FONT) + 2 * PILL_PAD, h: PILL_FONT + 2 * PILL_PAD, priority: it.priority });
+  };
+
+  for (const o of objects) {
+    if (o.kind === 'note') {
+      const p = at(o);
+      const lines = o.text.split('\n');
+      const w = Math.max(...lines.map((l) => textWidth(l, NOTE_FONT, 'normal'))) + 2 * NOTE_PAD;
+      requests.push({ key: o.id, anchor: p, w, h: lines.length * NOTE_FONT * 1.2 + 2 * NOTE_PAD, priority: 0, fixed: { x: p.x, y: p.y, w, h: lines.length * NOTE_FONT * 1.2 + 2 * NOTE_PAD } });
+      fixed.push(
+        <Label key={o.id} x={p.x} y={p.y}>
+          <Tag fill="#FFF8DC" stroke={PAL.amberDark} strokeWidth={1} cornerRadius={3} />
+          <Text text={o.text} fontSize={NOTE_FONT} fontFamily="Inter Tight" fill={PAL.ink} padding={NOTE_PAD} lineHeight={1.2} />
+        </Label>,
+      );
+    } else if (o.kind === 'tape') {
+      const p = at({ x: (o.x + o.x2) / 2, y: (o.y + o.y2) / 2 });
+      const text = formatLength(tapeLength(o), units);
+      const w = textWidth(text, TAPE_FONT) + 8;
+      requests.push({ key: o.id, anchor: p, w, h: TAPE_FONT + 8, priority: 0, fixed: { x: p.x - w / 2, y: p.y - 14 - TAPE_FONT - 8, w, h: TAPE_FONT + 13 } });
+      fixed.push(
+        <Label key={o.id} x={p.x} y={p.y - 14}>
+          <Tag fill={PAL.teal} cornerRadius={3} pointerDirection="down" pointerWidth={8} pointerHeight={5} />
+          <Text text={text} fontSize={TAPE_FONT} fontStyle="600" fontFamily="Inter Tight" fill="#fff" padding={4} />
+        </Label>,
+      );
+    } else if (o.label || o.kind === 'truck') {
+      const text = o.kind === 'truck' ? `${model?.unitNumber ?? 'Truck'}${model?.exampleOutline ? ' · example outline' : ''}` : o.label;
+      if (text) want({ key: o.id, anchor: at(o), text, tone: 'text', priority: 5 });
+    }
+  }
+  if (g) for (const it of analysisPillItems(g, at, units)) want(it);
+
+  const { placed, choice } = placeLabels(requests, vp, lastChoice.current);
+  lastChoice.current = choice;
+
   return (
     <Layer listening={false}>
-      <AnalysisLabels />
-      {objects.map((o) => {
-        if (o.kind === 'note') {
-          const p = at(o.x, o.y);
-          return (
-            <Label key={o.id} x={p.x} y={p.y}>
-              <Tag fill="#FFF8DC" stroke={PAL.amberDark} strokeWidth={1} cornerRadius={3} />
-              <Text text={o.text} fontSize={14} fontFamily="Inter Tight" fill={PAL.ink} padding={6} lineHeight={1.2} />
-            </Label>
-          );
-        }
-        if (o.kind === 'tape') {
-          const p = at((o.x + o.x2) / 2, (o.y + o.y2) / 2);
-          return (
-            <Label key={o.id} x={p.x} y={p.y - 14}>
-              <Tag fill={PAL.teal} cornerRadius={3} pointerDirection="down" pointerWidth={8} pointerHeight={5} />
-              <Text text={formatLength(tapeLength(o), units)} fontSize={13} fontStyle="600" fontFamily="Inter Tight" fill="#fff" padding={4} />
-            </Label>
-          );
-        }
-        if (!o.label && o.kind !== 'truck') return null;
-        const p = at(o.x, o.y);
-        const text = o.kind === 'truck' ? `${model?.unitNumber ?? 'Truck'}${model?.exampleOutline ? ' · example outline' : ''}` : o.label;
-        return <Text key={o.id} x={p.x + 8} y={p.y + 8} text={text} fontSize={12} fontStyle="600" fontFamily="Inter Tight" fill={PAL.ink} />;
+      {fixed}
+      {placed.map((p) => {
+        const it = items.get(p.key);
+        if (!it) return null;
+        return <Pill key={p.key} box={p.box} text={it.text} tone={it.tone} leaderFrom={p.leader ? { from: it.anchor, to: p.leader } : null} />;
       })}
     </Layer>
   );

@@ -42,8 +42,8 @@ export function TippingChart({ result, limit, slewNow, from, direction }: { resu
             </text>
           </g>
         ))}
-        {ticks.map((t) => (
-          <text key={t} x={x(t)} y={H - 10} fontSize="10" textAnchor="middle" fill="#5F6E7C">
+        {ticks.map((t, i) => (
+          <text key={t} x={x(t)} y={H - 10} fontSize="10" textAnchor={i === ticks.length - 1 ? 'end' : 'middle'} fill="#5F6E7C">
             {slewLabel(t)}°
           </text>
         ))}
