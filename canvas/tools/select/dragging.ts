@@ -4,6 +4,7 @@ import { aimBoom } from '../../commands/aim';
 import type { SceneDocument } from '../../document/schema';
 import type { Editor } from '../../editor/editor';
 import type { PointerInfo, ToolState } from '../tool-state';
+import { gestureHandlers } from './gesture';
 
 interface Drag {
   base: SceneDocument;
@@ -39,17 +40,7 @@ export const selectDragging: ToolState = {
     const primary = base.objects.find((o) => o.id === objectId) ?? base.objects.find((o) => ids.includes(o.id));
     ed.memo = { base, from, ids, anchor: primary ? { x: primary.x, y: primary.y } : from.world } satisfies Drag;
   },
-  pointerMove(ed, e) {
-    apply(ed, e, 'gesture');
-  },
-  pointerUp(ed, e) {
-    apply(ed, e, 'commit');
-    ed.transition('select.idle');
-  },
-  cancel(ed) {
-    ed.state.cancelGesture();
-    ed.transition('select.idle');
-  },
+  ...gestureHandlers(apply),
   keyDown(ed, e) {
     if (e.key !== 'Escape') return;
     selectDragging.cancel!(ed);

@@ -5,6 +5,7 @@ import type { Editor } from '../../editor/editor';
 import { DEG, rotate } from '../../geometry/vec';
 import { maxExtension } from '../../truck/truck-model';
 import type { PointerInfo, ToolState } from '../tool-state';
+import { gestureHandlers } from './gesture';
 
 /** Within this many metres of a stage mark, the pad settles on the stage. */
 const STAGE_SNAP_M = 0.15;
@@ -29,15 +30,5 @@ export const selectExtending: ToolState = {
   enter(ed, info) {
     ed.memo = info as Record<string, unknown>;
   },
-  pointerMove(ed, e) {
-    apply(ed, e, 'gesture');
-  },
-  pointerUp(ed, e) {
-    apply(ed, e, 'commit');
-    ed.transition('select.idle');
-  },
-  cancel(ed) {
-    ed.state.cancelGesture();
-    ed.transition('select.idle');
-  },
+  ...gestureHandlers(apply),
 };

@@ -4,6 +4,7 @@ import type { SceneDocument } from '../../document/schema';
 import type { Editor } from '../../editor/editor';
 import { bearing, wrap180 } from '../../geometry/vec';
 import type { PointerInfo, ToolState } from '../tool-state';
+import { gestureHandlers } from './gesture';
 
 interface Turn {
   base: SceneDocument;
@@ -28,15 +29,5 @@ export const selectRotating: ToolState = {
     const o = base.objects.find((q) => q.id === objectId)!;
     ed.memo = { base, id: objectId, centre: { x: o.x, y: o.y }, startBearing: bearing(o, from.world), startRotation: o.rotation } satisfies Turn;
   },
-  pointerMove(ed, e) {
-    apply(ed, e, 'gesture');
-  },
-  pointerUp(ed, e) {
-    apply(ed, e, 'commit');
-    ed.transition('select.idle');
-  },
-  cancel(ed) {
-    ed.state.cancelGesture();
-    ed.transition('select.idle');
-  },
+  ...gestureHandlers(apply),
 };

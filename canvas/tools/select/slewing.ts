@@ -4,6 +4,7 @@ import { slewToward } from '../../commands/aim';
 import type { TruckObject } from '../../document/objects';
 import type { Editor } from '../../editor/editor';
 import type { PointerInfo, ToolState } from '../tool-state';
+import { gestureHandlers } from './gesture';
 
 /** Whole degrees while dragging (Shift: tenths), so the readouts settle on round angles. */
 function apply(ed: Editor, e: PointerInfo, capture: Capture) {
@@ -18,15 +19,5 @@ function apply(ed: Editor, e: PointerInfo, capture: Capture) {
 /** Dragging the boom tip round: the load turns with it and every readout follows. */
 export const selectSlewing: ToolState = {
   id: 'select.slewing',
-  pointerMove(ed, e) {
-    apply(ed, e, 'gesture');
-  },
-  pointerUp(ed, e) {
-    apply(ed, e, 'commit');
-    ed.transition('select.idle');
-  },
-  cancel(ed) {
-    ed.state.cancelGesture();
-    ed.transition('select.idle');
-  },
+  ...gestureHandlers(apply),
 };
