@@ -18,9 +18,12 @@ export class StorageKeyError extends Error {
   }
 }
 
-/** Read at call time, so tests and the e2e server can point it at their own folder. */
+/**
+ * Read at call time, so tests and the e2e server can point it at their own folder. The build is told not
+ * to trace these paths: uploads are data, not part of the server bundle.
+ */
 export function storageRoot(): string {
-  return path.resolve(process.env.UPLOAD_DIR ?? path.join('data', 'uploads'));
+  return path.resolve(/*turbopackIgnore: true*/ process.env.UPLOAD_DIR ?? path.join('data', 'uploads'));
 }
 
 export function isStorageKey(key: string): boolean {
@@ -31,7 +34,7 @@ function fileFor(key: string): string {
   if (!isStorageKey(key)) throw new StorageKeyError(key);
   const root = storageRoot();
   // Two-character fan-out keeps any one folder small.
-  const file = path.join(root, key.slice(0, 2), key);
+  const file = path.join(/*turbopackIgnore: true*/ root, key.slice(0, 2), key);
   // Belt and braces: the pattern already rules this out.
   if (path.relative(root, file).startsWith('..')) throw new StorageKeyError(key);
   return file;
