@@ -3,6 +3,7 @@
  */
 import { execSync, spawn } from 'node:child_process';
 import crypto from 'node:crypto';
+import { DEMO_ORGS, DEMO_PASSWORD, DEMO_USERS } from '@/db/seed/demo-users';
 
 const port = process.env.PORT ?? '3000';
 const env = {
@@ -16,6 +17,8 @@ const run = (cmd: string) => execSync(cmd, { stdio: 'inherit', env });
 run('npx tsx db/migrate.ts');
 run('npx tsx db/seed.ts');
 run('npx next build');
-console.log(`\nArcline demo on http://localhost:${port}. Demo sign-ins are listed in README.md.\n`);
+console.log(`\nArcline demo on http://localhost:${port}. Demo sign-ins (password ${DEMO_PASSWORD} for all):`);
+for (const u of DEMO_USERS) console.log(`  ${u.email.padEnd(28)} ${u.role.padEnd(11)} ${DEMO_ORGS.find((o) => o.slug === u.org)?.name ?? u.org}`);
+console.log('');
 const child = spawn('npx', ['next', 'start', '-p', port], { stdio: 'inherit', env });
 child.on('exit', (code) => process.exit(code ?? 0));
