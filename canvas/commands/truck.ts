@@ -1,6 +1,7 @@
 import type { SceneDocument, Swing } from '../document/schema';
 import type { TruckObject } from '../document/objects';
 import type { Capture, Command } from './command';
+import { maxExtension, type TruckModel } from '../truck/truck-model';
 
 const mapTruck = (doc: SceneDocument, f: (t: TruckObject) => TruckObject): SceneDocument => ({
   ...doc,
@@ -38,3 +39,25 @@ export const setSwing =
 export const setDocumentFields =
   (patch: Partial<Pick<SceneDocument, 'soil' | 'limits' | 'grid' | 'unitsHint' | 'background'>>): Command =>
   (doc) => ({ document: { ...doc, ...patch }, capture: 'commit' });
+
+/**
+ * Moves the plan's truck to another version of its profile (one undo step). Leg settings carry over for
+ * legs the version still has, clamped to their new reach; new legs start fully out without cribbing; the
+ * boom is kept within the version's length and elevation ranges.
+ */
+export const moveTruckToProfileVersion =
+  (model: TruckModel): Command =>
+  (doc) => ({
+    document: mapTruck(doc, (t) => {
+      const legs = Object.fromEntries(
+        model.legs.map((l) => {
+          const old = t.legs[l.id];
+          return [l.id, old ? { extension: Math.min(old.extension, maxExtension(l)), cribbing: old.cribbing } : { extension: maxExtension(l), cribbing: null }];
+        }),
+      );
+      const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
+      const boom = { ...t.boom, length: clamp(t.boom.length, model.boom.minLength, model.boom.maxLength), elevation: clamp(t.boom.elevation, model.boom.minElevation, model.boom.maxElevation) };
+      return { ...t, profileId: model.profileId, profileVersion: model.profileVersion, legs, boom };
+    }),
+    capture: 'commit',
+  });

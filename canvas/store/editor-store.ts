@@ -28,8 +28,9 @@ export function resolveTruck(doc: SceneDocument, profiles: TruckProfileInput[], 
   const t = doc.objects.find((o) => o.kind === 'truck');
   if (!t || t.kind !== 'truck') return null;
   if (prev && prev.profileId === t.profileId && prev.profileVersion === t.profileVersion) return prev;
-  const p = profiles.find((q) => q.id === t.profileId && q.version === t.profileVersion) ?? profiles.find((q) => q.id === t.profileId);
-  return p ? truckModelFromProfile({ ...p, version: t.profileVersion }) : null;
+  // Exactly the version the plan was made with: another version's figures would silently change the plan.
+  const p = profiles.find((q) => q.id === t.profileId && q.version === t.profileVersion);
+  return p ? truckModelFromProfile(p) : null;
 }
 
 export function createEditorStore(opts: EditorStoreOptions = {}): EditorStore {

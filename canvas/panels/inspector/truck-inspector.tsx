@@ -1,13 +1,14 @@
 'use client';
 import type { TruckObject } from '../../document/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
-import { setBoom, setLegCribbing, setLegExtension } from '../../commands/truck';
+import { moveTruckToProfileVersion, setBoom, setLegCribbing, setLegExtension } from '../../commands/truck';
 import { updateObject } from '../../commands/objects';
 import { maxExtension } from '../../truck/truck-model';
 import { LengthField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
 import { formatLength, ft2ToM2, kgToLb, lbToKg, m2ToFt2 } from '@/lib/units';
 import { truckModelFromProfile } from '../../truck/from-spec';
+import { currentProfile, currentProfiles } from '../../truck/profile-versions';
 
 /** Profile, boom and each leg's extension and cribbing. */
 export function TruckInspector({ truck }: { truck: TruckObject }) {
@@ -18,6 +19,8 @@ export function TruckInspector({ truck }: { truck: TruckObject }) {
   const ro = useEditorState((s) => s.readOnly) || truck.locked;
   const run = store.getState().run;
   const metric = units === 'metric';
+  const options = currentProfiles(profiles);
+  const current = currentProfile(profiles, truck.profileId);
   return (
     <>
       <Section title="Profile">
@@ -26,9 +29,10 @@ export function TruckInspector({ truck }: { truck: TruckObject }) {
             label="Truck"
             value={String(truck.profileId)}
             disabled={ro}
-            options={profiles.map((p) => ({ value: String(p.id), label: `${p.unitNumber ?? ''} ${p.name} (v${p.version})` }))}
+            options={options.map((p) => ({ value: String(p.id), label: `${p.unitNumber ?? ''} ${p.name} (v${p.id === truck.profileId ? truck.profileVersion : p.version})` }))}
             onCommit={(v) => {
-              const p = profiles.find((q) => q.id === Number(v));
+              if (Number(v) === truck.profileId) return;
+              const p = currentProfile(profiles, Number(v));
               if (!p) return;
               const m = truckModelFromProfile(p);
               const legs = Object.fromEntries(m.legs.map((l) => [l.id, { extension: maxExtension(l), cribbing: null }]));
@@ -36,6 +40,26 @@ export function TruckInspector({ truck }: { truck: TruckObject }) {
               run(updateObject(truck.id, { profileId: p.id, profileVersion: p.version, legs, boom: { ...truck.boom, length } } as Partial<TruckObject>));
             }}
           />
+          {current && current.version !== truck.profileVersion && (
+            <div className="mt-2 rounded-md border border-signal-dark bg-signal-light p-2 text-sm" role="status" data-testid="profile-version-notice">
+              <p>
+                {model
+                  ? `Planned with version ${truck.profileVersion}; the profile is now at version ${current.version}.`
+                  : `Version ${truck.profileVersion} of this profile could not be found; the profile is now at version ${current.version}.`}{' '}
+                The plan keeps the figures it was made with until you move it.
+              </p>
+              {!ro && (
+                <button
+                  type="button"
+                  className="mt-2 min-h-11 rounded-md border border-teal bg-paper-raised px-3 text-sm font-semibold text-teal hover:bg-teal-light"
+                  onClick={() => run(moveTruckToProfileVersion(truckModelFromProfile(current)))}
+                >
+                  Use version {current.version}
+                </button>
+              )}
+            </div>
+          )}
+          {!model && !current && <p className="mt-1 text-xs text-over">This truck’s profile is not available to this scene; no analysis runs.</p>}
           {model?.exampleOutline && <p className="mt-1 text-xs text-over">This profile has no usable geometry; the outline shown is a generic example and no analysis runs.</p>}
         </div>
       </Section>
