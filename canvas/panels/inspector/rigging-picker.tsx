@@ -1,45 +1,84 @@
 'use client';
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LoadObject, RiggingPick } from '../../document/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { formatMass } from '@/lib/units';
+import { fetchJson } from '@/lib/client/fetch-json';
 import { NumberField, SelectField } from '../fields';
+import { addVerdict, firstRating, isOverdue, pickNotices, type InventoryStatus, type RiggingNotice } from './rigging-status';
 
-interface InventoryItem {
-  id: number;
-  tag: string;
+interface InventoryItem extends InventoryStatus {
   kind: string;
   size?: string | null;
-  ratings: { vertical?: number | null; choker?: number | null; basket?: number | null };
-  nextInspectionDue?: string | null;
-  status: string;
 }
 
-/** Rigging from the inventory (in-service items only); ratings are copied into the plan. */
+const INVENTORY_KEY = ['rigging', 'editor-inventory'] as const;
+
+function Notice({ notice, testId }: { notice: RiggingNotice; testId?: string }) {
+  const stop = notice.tone === 'stop';
+  return (
+    <p data-testid={testId} role={stop ? 'alert' : 'status'} className={`mt-1 rounded border-l-4 px-2 py-1 text-xs font-medium ${stop ? 'border-over bg-over-light text-over' : 'border-signal-dark bg-signal-light text-ink'}`}>
+      {notice.text.split(/(\d{4}-\d{2}-\d{2})/).map((part, i) => (i % 2 ? <span key={i} className="whitespace-nowrap">{part}</span> : part))}
+    </p>
+  );
+}
+
+/**
+ * Rigging from the inventory; ratings are copied into the plan. Only in-service items are offered, each is
+ * checked again against the inventory when added, and rows already in the plan say when an item has since
+ * been tagged out, retired or gone past its inspection date.
+ */
 export function RiggingPicker({ load }: { load: LoadObject }) {
   const { store } = useEditorContext();
+  const qc = useQueryClient();
   const units = useEditorState((s) => s.units);
   const ro = useEditorState((s) => s.readOnly) || load.locked;
-  const [items, setItems] = useState<InventoryItem[] | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const [pick, setPick] = useState('');
-  useEffect(() => {
-    if (ro) return;
-    fetch('/api/rigging?status=in_service')
-      .then(async (r) => (r.ok ? r.json() : Promise.reject(new Error(`${r.status}`))))
-      .then((d: { items?: InventoryItem[] } | InventoryItem[]) => setItems(Array.isArray(d) ? d : (d.items ?? [])))
-      .catch(() => setError('The rigging inventory could not be loaded.'));
-  }, [ro]);
+  const [addNotice, setAddNotice] = useState<RiggingNotice | null>(null);
+  const [adding, setAdding] = useState(false);
+  // Every status, so rows in the plan can say what became of their item.
+  const inventory = useQuery({ queryKey: INVENTORY_KEY, queryFn: () => fetchJson<{ items: InventoryItem[]; today: string }>('/api/rigging') });
+  const items = inventory.data?.items ?? null;
+  const today = inventory.data?.today ?? new Date().toISOString().slice(0, 10);
+  const byId = new Map((items ?? []).map((it) => [it.id, it]));
+  const offered = (items ?? []).filter((it) => it.status === 'in_service');
   const set = (rigging: RiggingPick[]) => store.getState().run(updateObject(load.id, { rigging }));
-  const today = new Date().toISOString().slice(0, 10);
+
+  async function add() {
+    const id = Number(pick);
+    setAddNotice(null);
+    setAdding(true);
+    try {
+      // The list may be minutes old: the item's own record decides.
+      const it = await qc.fetchQuery({ queryKey: ['rigging', 'item', id], queryFn: () => fetchJson<InventoryItem>(`/api/rigging/${id}`), staleTime: 0 });
+      const verdict = addVerdict(it, today);
+      if (!verdict.ok) {
+        setAddNotice({ tone: 'stop', text: verdict.reason });
+        void qc.invalidateQueries({ queryKey: INVENTORY_KEY });
+        return;
+      }
+      const rating = firstRating(it)!;
+      const rigging = store.getState().document.objects.find((o) => o.id === load.id);
+      const current = rigging && rigging.kind === 'load' ? rigging.rigging : load.rigging;
+      set([...current, { itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: rating, ratings: { vertical: it.ratings.vertical ?? null, choker: it.ratings.choker ?? null, basket: it.ratings.basket ?? null }, massKg: 0 }]);
+      setAddNotice(verdict.warning ? { tone: 'warn', text: verdict.warning } : null);
+      setPick('');
+    } catch {
+      setAddNotice({ tone: 'stop', text: 'The item could not be checked against the inventory, so it was not added. Try again.' });
+    } finally {
+      setAdding(false);
+    }
+  }
+
   return (
     <section className="mb-4">
       <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-muted">Rigging</h3>
       {load.rigging.length === 0 && <p className="mb-2 text-sm text-ink-muted">No rigging picked yet.</p>}
       <ul className="space-y-2">
         {load.rigging.map((r, i) => (
-          <li key={i} className="rounded-md border border-paper-line p-2 text-sm">
+          <li key={i} className="rounded-md border border-paper-line p-2 text-sm" data-testid={`rigging-row-${r.tag}`}>
             <div className="flex items-center justify-between">
               <span className="font-semibold">
                 {r.tag} · {r.kind}
@@ -50,7 +89,8 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
                 </button>
               )}
             </div>
-            <div className="grid grid-cols-3 gap-2">
+            {items && pickNotices(r, r.itemId === null ? undefined : byId.get(r.itemId), today).map((n) => <Notice key={n.text} notice={n} />)}
+            <div className="mt-1 grid grid-cols-3 gap-2">
               <SelectField label="Hitch" value={r.hitch} disabled={ro} options={[{ value: 'vertical', label: 'Vertical' }, { value: 'choker', label: 'Choker' }, { value: 'basket', label: 'Basket' }]} onCommit={(hitch) => set(load.rigging.map((q, j) => (j === i ? { ...q, hitch, ratingKg: q.ratings?.[hitch] ?? q.ratingKg } : q)))} />
               <NumberField label="Legs" value={r.legs} min={1} max={8} digits={0} disabled={ro} onCommit={(legs) => set(load.rigging.map((q, j) => (j === i ? { ...q, legs: Math.round(legs) } : q)))} />
               <NumberField label="Angle (° up)" value={r.angleFromHorizontal} min={1} max={90} disabled={ro} onCommit={(a) => set(load.rigging.map((q, j) => (j === i ? { ...q, angleFromHorizontal: a } : q)))} />
@@ -59,42 +99,33 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
           </li>
         ))}
       </ul>
-      {!ro && (
-        <div className="mt-2 flex items-end gap-2">
-          {error && <p className="text-sm text-over">{error}</p>}
-          {items && (
-            <>
-              <div className="flex-1">
-                <SelectField
-                  label="Add from the inventory"
-                  value={pick}
-                  onCommit={setPick}
-                  options={[
-                    { value: '', label: items.length ? 'Choose an item…' : 'No in-service items' },
-                    ...items.map((it) => ({
-                      value: String(it.id),
-                      label: `${it.tag} · ${it.kind}${it.size ? ` ${it.size}` : ''}${it.nextInspectionDue && it.nextInspectionDue < today ? ' · INSPECTION OVERDUE' : ''}`,
-                    })),
-                  ]}
-                />
-              </div>
-              <button
-                type="button"
-                disabled={!pick}
-                className="min-h-11 rounded-md bg-teal px-3 text-sm font-semibold text-white disabled:opacity-40"
-                onClick={() => {
-                  const it = items.find((q) => String(q.id) === pick);
-                  if (!it || it.status !== 'in_service') return;
-                  const rating = it.ratings.vertical ?? it.ratings.basket ?? it.ratings.choker ?? 0;
-                  if (!(rating > 0)) return;
-                  set([...load.rigging, { itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: rating, ratings: { vertical: it.ratings.vertical ?? null, choker: it.ratings.choker ?? null, basket: it.ratings.basket ?? null }, massKg: 0 }]);
-                  setPick('');
+      {inventory.isError && <p className="mt-2 text-sm text-over">The rigging inventory could not be loaded, so the items’ current status cannot be shown.</p>}
+      {!ro && items && (
+        <div className="mt-2">
+          <div className="flex items-end gap-2">
+            <div className="min-w-0 flex-1">
+              <SelectField
+                label="Add from the inventory (in service)"
+                value={pick}
+                testId="rigging-add-select"
+                onCommit={(v) => {
+                  setPick(v);
+                  setAddNotice(null);
                 }}
-              >
-                Add
-              </button>
-            </>
-          )}
+                options={[
+                  { value: '', label: offered.length ? 'Choose an item…' : 'No in-service items' },
+                  ...offered.map((it) => ({
+                    value: String(it.id),
+                    label: `${it.tag} · ${it.kind}${it.size ? ` ${it.size}` : ''}${isOverdue(it, today) ? ` · inspection overdue since ${it.nextInspectionDue}` : ''}`,
+                  })),
+                ]}
+              />
+            </div>
+            <button type="button" disabled={!pick || adding} className="min-h-11 rounded-md bg-teal px-3 text-sm font-semibold text-white disabled:opacity-40" onClick={() => void add()}>
+              Add
+            </button>
+          </div>
+          {addNotice && <Notice notice={addNotice} testId="rigging-add-notice" />}
         </div>
       )}
     </section>

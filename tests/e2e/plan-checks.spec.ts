@@ -1,0 +1,80 @@
+import { expect, test, type Page } from '@playwright/test';
+import { screens, signIn } from './helpers';
+
+interface Item {
+  id: number;
+  tag: string;
+  kind: string;
+  size: string;
+  length: number | null;
+  ratings: { vertical: number | null; choker: number | null; basket: number | null };
+  status: string;
+  lastInspection: string | null;
+  nextInspectionDue: string | null;
+  notes: string;
+}
+
+const pickOf = (it: Item) => ({ itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: it.ratings.vertical ?? it.ratings.basket ?? it.ratings.choker, ratings: it.ratings, massKg: 0 });
+
+/** A copy of the demo coil transfer whose coil is rigged with the given picks, opened in the editor with the coil selected. */
+async function openCoilCopy(page: Page, title: string, rigging: unknown[]) {
+  const list = await (await page.request.get('/api/scenes?title=Coil')).json();
+  const coil = await (await page.request.get(`/api/scenes/${list.items[0].id}`)).json();
+  const document = { ...coil.document, objects: coil.document.objects.map((o: { kind: string }) => (o.kind === 'load' ? { ...o, rigging } : o)) };
+  const res = await page.request.post('/api/scenes', { data: { title, document, equipmentProfileId: coil.equipmentProfileId } });
+  expect(res.status()).toBe(201);
+  const id = (await res.json()).id as number;
+  await page.goto(`/scenes/${id}`);
+  await expect(page.getByTestId('plan-view')).toBeVisible();
+  await page.evaluate(() => window.__arclineEditor!.store.getState().set({ selection: ['coil'] }));
+  await expect(page.getByTestId('inspector-load')).toBeVisible();
+  return id;
+}
+
+test('rigging picker: in-service items only, overdue inspections and tagged-out items said in words, a tagged-out item refused', async ({ page }) => {
+  await signIn(page, 'operator@harrow.example');
+  const inventory = (await (await page.request.get('/api/rigging')).json()) as { items: Item[]; today: string };
+  const byTag = (tag: string) => inventory.items.find((i) => i.tag === tag)!;
+  const overdue = byTag('HR-RS-05');
+  const taggedOut = byTag('HR-CH-02');
+  expect(overdue.nextInspectionDue! < inventory.today).toBe(true);
+  expect(taggedOut.status).toBe('tagged_out');
+
+  await openCoilCopy(page, 'Rigging check: coil on an overdue sling and a tagged-out chain', [pickOf(overdue), pickOf(taggedOut)]);
+  await expect(page.getByTestId('rigging-row-HR-RS-05')).toContainText(`Inspection overdue since ${overdue.nextInspectionDue}`);
+  await expect(page.getByTestId('rigging-row-HR-CH-02')).toContainText('Tagged out: remove it from the plan');
+  await expect(page.getByTestId('rigging-row-HR-RS-05')).not.toContainText('Tagged out');
+
+  // Only in-service items are offered; the overdue one is offered with its date.
+  const select = page.getByTestId('rigging-add-select');
+  const options = await select.locator('option').allTextContents();
+  expect(options.some((o) => o.startsWith('HR-CH-02'))).toBe(false);
+  expect(options).toContain(`HR-RS-05 · round-sling blue · inspection overdue since ${overdue.nextInspectionDue}`);
+  expect(options.length - 1).toBe(inventory.items.filter((i) => i.status === 'in_service').length);
+
+  // An overdue item goes in, with the warning in view.
+  await select.selectOption({ label: options.find((o) => o.startsWith('HR-RS-05'))! });
+  await page.getByRole('button', { name: 'Add', exact: true }).click();
+  await expect(page.getByTestId('rigging-add-notice')).toHaveText(`HR-RS-05 added, but its inspection has been overdue since ${overdue.nextInspectionDue}: have it inspected before the lift.`);
+  await expect(page.locator('[data-testid="rigging-row-HR-RS-05"]')).toHaveCount(2);
+  await screens(page, 'editor-load-rigging', ['laptop', 'tablet-portrait']);
+
+  // An item tagged out after the list was loaded is refused when added, with the reason.
+  const strap = byTag('HR-ST-01');
+  const { id: _id, ...body } = strap;
+  await select.selectOption({ label: options.find((o) => o.startsWith('HR-ST-01'))! });
+  const put = await page.request.put(`/api/rigging/${strap.id}`, { data: { ...body, status: 'tagged_out' } });
+  expect(put.ok()).toBe(true);
+  try {
+    await page.getByRole('button', { name: 'Add', exact: true }).click();
+    await expect(page.getByTestId('rigging-add-notice')).toHaveText('HR-ST-01 is tagged out and cannot be added to a plan.');
+    await expect(page.getByTestId('rigging-row-HR-ST-01')).toHaveCount(0);
+    const doc = await page.evaluate(() => window.__arclineEditor!.store.getState().document.objects.find((o) => o.kind === 'load'));
+    expect((doc as { rigging: { tag: string }[] }).rigging.map((r) => r.tag)).toEqual(['HR-RS-05', 'HR-CH-02', 'HR-RS-05']);
+    // The list is refreshed: the strap is no longer offered.
+    await expect(select.locator('option', { hasText: 'HR-ST-01' })).toHaveCount(0);
+  } finally {
+    const back = await page.request.put(`/api/rigging/${strap.id}`, { data: body });
+    expect(back.ok()).toBe(true);
+  }
+});
