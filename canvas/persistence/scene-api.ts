@@ -51,13 +51,32 @@ export async function getScene(fetchFn: Fetch, sceneId: number): Promise<SavedSc
   return (await res.json()) as SavedScene;
 }
 
-/** POST /api/scenes: a new scene owned by the signed-in operator. */
+/** The truck profile a scene document's truck is drawn from; null when the sketch has no truck. */
+export function truckProfileIdOf(document: unknown): number | null {
+  const objects = document && typeof document === 'object' ? (document as { objects?: unknown }).objects : undefined;
+  if (!Array.isArray(objects)) return null;
+  const truck = objects.find((o): o is { kind: 'truck'; profileId?: unknown } => !!o && typeof o === 'object' && (o as { kind?: unknown }).kind === 'truck');
+  const id = truck?.profileId;
+  return typeof id === 'number' && Number.isInteger(id) && id > 0 ? id : null;
+}
+
+async function refusesProfile(res: Response): Promise<boolean> {
+  if (res.status !== 400) return false;
+  const body = (await res.clone().json().catch(() => null)) as { issues?: { path?: unknown }[] } | null;
+  return !!body?.issues?.some((i) => i.path === 'equipmentProfileId');
+}
+
+/**
+ * POST /api/scenes: a new scene owned by the signed-in operator. A sketch with a truck records the truck's
+ * profile on the scene, like the scene it was copied from. When the server will not take that profile (a
+ * file from another organisation, a truck retired since), the scene is made without it rather than not at
+ * all: the truck stays in the sketch.
+ */
 export async function createScene(fetchFn: Fetch, title: string, document: unknown): Promise<SavedScene> {
-  const res = await fetchFn('/api/scenes', {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ title, document }),
-  });
+  const post = (body: Record<string, unknown>) => fetchFn('/api/scenes', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
+  const equipmentProfileId = truckProfileIdOf(document);
+  let res = await post(equipmentProfileId === null ? { title, document } : { title, document, equipmentProfileId });
+  if (equipmentProfileId !== null && (await refusesProfile(res))) res = await post({ title, document });
   if (!res.ok) throw new Error(await errorMessage(res));
   return (await res.json()) as SavedScene;
 }
