@@ -4,5 +4,7 @@ const nextConfig = {
   // better-sqlite3 is native; concaveman (inside @turf/convex) breaks when bundled into route handlers.
   serverExternalPackages: ['better-sqlite3', 'concaveman'],
   poweredByHeader: false,
+  // forbidden() and forbidden.tsx: pages a role may not see answer 403, not 200.
+  experimental: { authInterrupts: true },
 };
 export default nextConfig;

@@ -1,6 +1,6 @@
 import { ButtonLink } from '@/components/ui/button';
 import { roleLabel } from '@/components/shell/app-shell';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 
 /** The 403 page body: says what is missing and who can help, instead of an unexplained blank. */
 export function Forbidden({ user, needs }: { user: CurrentUser; needs: string }) {
@@ -17,4 +17,21 @@ export function Forbidden({ user, needs }: { user: CurrentUser; needs: string })
       </ButtonLink>
     </div>
   );
+}
+
+/**
+ * For a route's forbidden.tsx (which gets no props): the page called forbidden(), so Next answers 403 and
+ * renders this inside the signed-in shell.
+ */
+export async function ForbiddenForRole({ needs }: { needs: string }) {
+  const user = await getCurrentUser();
+  if (!user) {
+    return (
+      <div className="mx-auto mt-8 max-w-xl rounded-plate border-2 border-ink bg-paper-raised p-8 shadow-plate">
+        <p className="text-caption font-bold uppercase tracking-[0.14em] text-over">403 · Not available</p>
+        <h1 className="mt-2 text-title text-ink">This page is for {needs}</h1>
+      </div>
+    );
+  }
+  return <Forbidden user={user} needs={needs} />;
 }

@@ -3,6 +3,7 @@ import type { Role } from '@/db/schema';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 import { AccessError, assertRole } from '@/lib/auth/roles';
 import { HttpError, describeIssues, jsonError, zodIssues } from './errors';
+import { pathId } from '@/lib/validations/path-id';
 
 /** Bodies above this are refused before parsing (a scene document is far smaller). */
 export const MAX_JSON_BODY = 2 * 1024 * 1024;
@@ -42,7 +43,13 @@ function parseWith<T extends z.ZodType>(schema: T, value: unknown, where: string
 async function readJson(req: Request): Promise<unknown> {
   const declared = Number(req.headers.get('content-length') ?? '0');
   if (declared > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
-  const text = await req.text();
+  let text: string;
+  try {
+    text = await req.text();
+  } catch {
+    // The client went away mid-body (a closed tab, a dropped connection): its fault, not the server's.
+    throw new HttpError(400, 'body: could not be read; the connection closed before the whole body arrived', [{ path: 'body', message: 'Could not be read' }]);
+  }
   if (text.length > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
   if (text.trim() === '') throw new HttpError(400, 'body: a JSON body is required', [{ path: 'body', message: 'Required' }]);
   let value: unknown;
@@ -98,9 +105,4 @@ export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = 
 }
 
 /** Path id: a positive whole number written plainly ("12", not "1e1", " 12" or "0x0c"). */
-export const idParams = z.object({
-  id: z
-    .string()
-    .regex(/^[1-9][0-9]{0,14}$/, 'id must be a positive whole number')
-    .transform(Number),
-});
+export const idParams = z.object({ id: pathId('id') });

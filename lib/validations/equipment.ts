@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pathId } from './path-id';
 import { truckSpecSchema } from '@/lib/equipment/truck-spec';
 
 /** A truck profile as the API and the profile form take it: identity fields plus the validated spec. */
@@ -21,7 +22,4 @@ export const duplicateProfileSchema = z.object({
   unitNumber: z.string().trim().max(20).nullable().optional(),
 });
 
-export const versionParams = z.object({
-  id: z.coerce.number().int().positive(),
-  version: z.coerce.number().int().positive(),
-});
+export const versionParams = z.object({ id: pathId('id'), version: pathId('version') });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pathId } from './path-id';
 
 /** Largest background image accepted: 10 MB (binary megabytes, as file browsers show sizes). */
 export const MAX_BACKGROUND_BYTES = 10 * 1024 * 1024;
@@ -10,7 +11,4 @@ export const backgroundUploadForm = z.object({
   file: z.custom<Blob>((v) => typeof Blob !== 'undefined' && v instanceof Blob, { error: 'Attach the image as a file in the "file" field' }),
 });
 
-export const uploadParams = z.object({
-  id: z.coerce.number().int().positive(),
-  uploadId: z.coerce.number().int().positive(),
-});
+export const uploadParams = z.object({ id: pathId('id'), uploadId: pathId('uploadId') });

@@ -77,7 +77,7 @@ test('an operator reads a profile but cannot edit it', async ({ page }) => {
   const current = await (await page.request.get(`/api/equipment/${id}`)).json();
   const res = await page.request.put(`/api/equipment/${id}`, { data: { name: current.name, spec: current.spec, baseVersion: current.version } });
   expect(res.status()).toBe(403);
-  await page.goto('/equipment/new');
+  expect((await page.goto('/equipment/new'))?.status()).toBe(403);
   await expect(page.getByText('403 · Not available for your role')).toBeVisible();
 });
 

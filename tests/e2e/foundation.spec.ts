@@ -37,9 +37,13 @@ test('Harrow operator: own and approved scenes, New scene button, no Users nav, 
   await expect(page.getByRole('link', { name: '+ New scene' })).toBeVisible();
   await screens(page, 'scenes-operator');
 
-  await page.goto('/admin/users');
+  const res = await page.goto('/admin/users');
+  expect(res?.status()).toBe(403);
   await expect(page.getByText('403 · Not available for your role')).toBeVisible();
   await expect(page.getByRole('heading', { name: 'This page is for administrators' })).toBeVisible();
+  // Inside the signed-in shell, with the way back.
+  await expect(whoAmI(page)).toContainText('Dana Okafor');
+  await expect(page.getByRole('link', { name: 'Back to scenes' })).toBeVisible();
   await expect(page.getByRole('table')).toHaveCount(0);
   await screens(page, 'forbidden-operator', ['laptop', 'tablet-portrait']);
 });
@@ -58,10 +62,12 @@ for (const who of [
     expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
     expect(titles).not.toContain(COBALT_SCENE);
     await expect(page.getByRole('link', { name: '+ New scene' })).toHaveCount(0);
-    await page.goto('/scenes/new');
+    expect((await page.goto('/scenes/new'))?.status()).toBe(403);
     await expect(page.getByRole('heading', { name: 'This page is for operators' })).toBeVisible();
-    await page.goto('/admin/users');
+    expect((await page.goto('/admin/users'))?.status()).toBe(403);
     await expect(page.getByText('403 · Not available for your role')).toBeVisible();
+    // A page the role may see still answers 200.
+    expect((await page.goto('/rigging'))?.status()).toBe(200);
   });
 }
 

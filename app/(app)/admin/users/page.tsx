@@ -1,9 +1,8 @@
 import type { Metadata } from 'next';
-import { redirect } from 'next/navigation';
+import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
-import { Forbidden } from '@/components/forbidden';
 import { UsersTable } from '@/components/admin/users-table';
 import { CreateUserForm } from '@/components/admin/create-user-form';
 
@@ -12,7 +11,7 @@ export const metadata: Metadata = { title: 'Users' };
 export default async function UsersAdminPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (user.role !== 'admin') return <Forbidden user={user} needs="administrators" />;
+  if (user.role !== 'admin') forbidden();
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Users" description="Everyone who can sign in to your organisation, and their role." />

@@ -1,8 +1,7 @@
 import type { Metadata } from 'next';
-import { redirect } from 'next/navigation';
+import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
-import { Forbidden } from '@/components/forbidden';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { ProfileForm } from '@/components/equipment/profile-form';
 import { starterSpec } from '@/lib/equipment/starter-spec';
@@ -12,7 +11,7 @@ export const metadata: Metadata = { title: 'New truck profile' };
 export default async function NewProfilePage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (user.role !== 'admin') return <Forbidden user={user} needs="admins, who manage truck profiles" />;
+  if (user.role !== 'admin') forbidden();
   return (
     <>
       <PageHeader eyebrow="Truck profiles" title="New truck profile" description="Start from the outline below and replace every figure with the truck’s own, from its manufacturer’s documents." />

@@ -1,8 +1,7 @@
 import type { Metadata } from 'next';
-import { redirect } from 'next/navigation';
+import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
-import { Forbidden } from '@/components/forbidden';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { RiggingItemForm } from '@/components/rigging/rigging-item-form';
 
@@ -11,7 +10,7 @@ export const metadata: Metadata = { title: 'New rigging item' };
 export default async function NewRiggingPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (user.role !== 'operator' && user.role !== 'admin') return <Forbidden user={user} needs="operators and admins, who manage rigging" />;
+  if (user.role !== 'operator' && user.role !== 'admin') forbidden();
   return (
     <>
       <PageHeader eyebrow="Rigging inventory" title="New rigging item" />

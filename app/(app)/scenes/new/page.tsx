@@ -1,9 +1,8 @@
 import type { Metadata } from 'next';
-import { redirect } from 'next/navigation';
+import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody } from '@/components/ui/card';
-import { Forbidden } from '@/components/forbidden';
 import { NewSceneForm } from '@/components/scenes/new-scene-form';
 
 export const metadata: Metadata = { title: 'New scene' };
@@ -12,7 +11,7 @@ export default async function NewScenePage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
   // Only operators create scenes (POST /api/scenes enforces the same).
-  if (user.role !== 'operator') return <Forbidden user={user} needs="operators" />;
+  if (user.role !== 'operator') forbidden();
   return (
     <>
       <PageHeader eyebrow="Scenes" title="New scene" description="Name the job and, if you know it, the truck. The sketch itself is drawn in the editor." />
