@@ -78,3 +78,23 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
     expect(back.ok()).toBe(true);
   }
 });
+
+test('results panel: in the imperial view every check sentence is in feet-inches, pounds and psf', async ({ page }) => {
+  await signIn(page, 'operator@harrow.example');
+  const list = await (await page.request.get('/api/scenes?title=Coil')).json();
+  await page.goto(`/scenes/${list.items[0].id}`);
+  await page.getByTestId('tab-results').click();
+  await expect(page.getByTestId('results-summary')).toBeVisible();
+  const sentences = page.locator('[data-testid^="check-sentence-"]');
+  await expect(sentences.first()).toBeVisible();
+  const texts = await sentences.allTextContents();
+  expect(texts.length).toBeGreaterThan(5);
+  for (const t of texts) expect(t).not.toMatch(/\d (m|kg|kPa|kN)(?![\p{L}\p{N}])/u);
+  const bearing = texts.find((t) => t.startsWith('Support '));
+  expect(bearing).toMatch(/presses [\d,]+ psf on the ground .* allowable [\d,]+ psf/);
+  // The sentence agrees with its own value column.
+  const bearingRow = page.locator('[data-testid^="check-bearing:"]').first();
+  const value = (await bearingRow.locator('span.tabular-nums > span.font-semibold').textContent())!;
+  await expect(bearingRow.locator('[data-testid^="check-sentence-"]')).toContainText(`presses ${value}`);
+  await screens(page, 'editor-results-imperial', ['laptop', 'tablet-portrait']);
+});

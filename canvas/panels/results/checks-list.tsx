@@ -1,6 +1,7 @@
 'use client';
 import type { Check, LiftResult } from '@/lib/lift';
 import { formatLength, formatMass, formatPressure, type UnitSystem } from '@/lib/units';
+import { checkSentence } from './check-sentence';
 
 const GROUPS: { title: string; test: (id: string) => boolean }[] = [
   { title: 'Stability', test: (id) => id.startsWith('stability') || id.startsWith('tipping') },
@@ -19,7 +20,7 @@ function show(v: number | null, unit: Check['unit'], units: UnitSystem): string 
   return `${v.toFixed(1)} %`;
 }
 
-/** Every check, grouped, each with value, limit, unit and the engine's sentence. */
+/** Every check, grouped, each with value, limit, unit and the engine's sentence in the user's units. */
 export function ChecksList({ result, units, names }: { result: LiftResult; units: UnitSystem; names: Record<string, string> }) {
   const used = new Set<string>();
   const sections = GROUPS.map((g) => {
@@ -52,7 +53,7 @@ export function ChecksList({ result, units, names }: { result: LiftResult; units
                       <span className={`font-bold ${c.ok ? 'text-within' : 'text-over'}`}>{c.ok ? 'within limit' : 'OVER LIMIT'}</span>
                     </span>
                   </div>
-                  <p className="mt-0.5 text-xs text-ink-soft">{c.reason}</p>
+                  <p className="mt-0.5 text-xs text-ink-soft" data-testid={`check-sentence-${c.id}`}>{checkSentence(c, units)}</p>
                 </li>
               ))}
             </ul>
