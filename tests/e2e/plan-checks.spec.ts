@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { screens, signIn } from './helpers';
+import { HARROW_SCENES, screens, signIn } from './helpers';
 
 interface Item {
   id: number;
@@ -16,10 +16,15 @@ interface Item {
 
 const pickOf = (it: Item) => ({ itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: it.ratings.vertical ?? it.ratings.basket ?? it.ratings.choker, ratings: it.ratings, massKg: 0 });
 
+/** The demo coil transfer's id (other specs add scenes with "coil" in their titles). */
+async function demoCoilId(page: Page): Promise<number> {
+  const list = (await (await page.request.get(`/api/scenes?title=${encodeURIComponent(HARROW_SCENES.coil)}`)).json()) as { items: { id: number; title: string }[] };
+  return list.items.find((s) => s.title === HARROW_SCENES.coil)!.id;
+}
+
 /** A copy of the demo coil transfer whose coil is rigged with the given picks, opened in the editor with the coil selected. */
 async function openCoilCopy(page: Page, title: string, rigging: unknown[]) {
-  const list = await (await page.request.get('/api/scenes?title=Coil')).json();
-  const coil = await (await page.request.get(`/api/scenes/${list.items[0].id}`)).json();
+  const coil = await (await page.request.get(`/api/scenes/${await demoCoilId(page)}`)).json();
   const document = { ...coil.document, objects: coil.document.objects.map((o: { kind: string }) => (o.kind === 'load' ? { ...o, rigging } : o)) };
   const res = await page.request.post('/api/scenes', { data: { title, document, equipmentProfileId: coil.equipmentProfileId } });
   expect(res.status()).toBe(201);
@@ -81,8 +86,7 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
 
 test('results panel: in the imperial view every check sentence is in feet-inches, pounds and psf', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
-  const list = await (await page.request.get('/api/scenes?title=Coil')).json();
-  await page.goto(`/scenes/${list.items[0].id}`);
+  await page.goto(`/scenes/${await demoCoilId(page)}`);
   await page.getByTestId('tab-results').click();
   await expect(page.getByTestId('results-summary')).toBeVisible();
   const sentences = page.locator('[data-testid^="check-sentence-"]');
