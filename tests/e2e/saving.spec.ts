@@ -16,7 +16,7 @@ async function newScene(request: APIRequestContext, title: string): Promise<numb
 async function sceneFromApi(request: APIRequestContext, id: number) {
   const res = await request.get(`/api/scenes/${id}`);
   expect(res.status()).toBe(200);
-  return (await res.json()) as { id: number; title: string; revision: number; document: Record<string, any> };
+  return (await res.json()) as { id: number; title: string; revision: number; equipmentProfileId: number | null; document: Record<string, any> };
 }
 
 async function openEditor(page: Page, id: number) {
@@ -45,6 +45,10 @@ test('a save that lost the race shows the choice; both choices do what they say'
   await signIn(page, OPERATOR);
   const id = await newScene(page.request, 'Conflict check, Dock 4');
   await openEditor(page, id);
+  // A truck on the plan, so the copy has a profile to keep.
+  await page.locator('[data-tool="truck"]').click();
+  await page.getByTestId('plan-view').click();
+  await expect.poll(async () => (await sceneFromApi(page.request, id)).document.objects.some((o: { kind: string }) => o.kind === 'truck')).toBe(true);
   await expect(status(page)).toHaveAttribute('data-save-status', 'saved');
 
   // Someone else (a second browser context) saves first.
@@ -77,6 +81,9 @@ test('a save that lost the race shows the choice; both choices do what they say'
   const copy = await sceneFromApi(page.request, copyId);
   expect(copy.title).toBe('Conflict check, Dock 4 (my copy)');
   expect(copy.document.grid).toBe(0.75);
+  // The copy records the truck's profile, like the original.
+  const truck = copy.document.objects.find((o: { kind: string }) => o.kind === 'truck');
+  expect(copy.equipmentProfileId).toBe(truck.profileId);
   expect((await sceneFromApi(page.request, id)).document.grid).toBe(9.144);
   await other.context.close();
 });
