@@ -113,7 +113,25 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
       return set({ status: 'offline' });
     }
     retryMs = RETRY_FIRST_MS;
-    if (outcome.kind === 'conflict') return set({ status: 'conflict', serverRevision: outcome.currentRevision ?? undefined });
+    if (outcome.kind === 'conflict') {
+      // The server may already hold exactly this document: a save sent as the previous page closed can land
+      // after this page read the scene. Then there is nothing to choose between; take its revision.
+      const theirs = await getScene(o.fetch, o.sceneId).catch(() => null);
+      if (stopped) return;
+      if (theirs && sameDocument(theirs.document, doc)) {
+        lastSavedDoc = doc;
+        if (o.source.getDocument() === doc) {
+          clearTimeout(draftTimer);
+          void queueDraft(() => o.drafts.clear(o.sceneId));
+          return set({ status: 'saved', dirty: false, revision: theirs.revision, lastSavedAt: now() });
+        }
+        set({ revision: theirs.revision, status: 'pending' });
+        writeDraftSoon();
+        again = true;
+        return;
+      }
+      return set({ status: 'conflict', serverRevision: theirs?.revision ?? outcome.currentRevision ?? undefined });
+    }
     if (outcome.kind === 'refused') return set({ status: 'error', message: outcome.message });
     lastSavedDoc = doc;
     const revision = outcome.scene.revision;
@@ -215,4 +233,19 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
     },
     idle: () => draftChain,
   };
+}
+
+/** Key order aside, the same JSON value: what the server stored and what this page would send. */
+export function sameDocument(a: unknown, b: unknown): boolean {
+  return stableJson(a) === stableJson(b);
+}
+
+function stableJson(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(stableJson).join(',')}]`;
+  if (v && typeof v === 'object') {
+    const entries = Object.entries(v as Record<string, unknown>).filter(([, x]) => x !== undefined);
+    entries.sort(([x], [y]) => (x < y ? -1 : x > y ? 1 : 0));
+    return `{${entries.map(([k, x]) => `${JSON.stringify(k)}:${stableJson(x)}`).join(',')}}`;
+  }
+  return JSON.stringify(v) ?? 'null';
 }

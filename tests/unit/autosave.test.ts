@@ -126,6 +126,35 @@ describe('autosave', () => {
     expect((await drafts.latest(5))?.document).toEqual({ version: 1, notes: ['mine', 'more'] });
   });
 
+  it('a 409 where the server already holds exactly this document is no conflict: it takes the server revision', async () => {
+    const { server, source, saver, drafts } = setup();
+    await saver.start();
+    // The previous page's closing save landed after this page read revision 3, with the same edit.
+    server.scene.revision = 4;
+    server.scene.document = { notes: ['mine'], version: 1 } as Doc; // other key order, same value
+    source.edit('mine');
+    await vi.advanceTimersByTimeAsync(SAVE_DEBOUNCE_MS);
+    expect(saver.getState()).toMatchObject({ status: 'saved', revision: 4, dirty: false });
+    expect(server.puts()).toHaveLength(1);
+    await saver.idle();
+    expect(await drafts.latest(5)).toBeUndefined();
+    // The next edit is sent on revision 4 and saves.
+    source.edit('next');
+    await vi.advanceTimersByTimeAsync(SAVE_DEBOUNCE_MS);
+    expect(server.puts()[1].body.revision).toBe(4);
+    expect(saver.getState()).toMatchObject({ status: 'saved', revision: 5 });
+  });
+
+  it('a 409 with a different server document is a conflict', async () => {
+    const { server, source, saver } = setup();
+    await saver.start();
+    server.scene.revision = 4;
+    server.scene.document = { version: 1, notes: ['theirs'] };
+    source.edit('mine');
+    await vi.advanceTimersByTimeAsync(SAVE_DEBOUNCE_MS);
+    expect(saver.getState()).toMatchObject({ status: 'conflict', serverRevision: 4 });
+  });
+
   it('"reload theirs" replaces the document with the server copy and clears the draft', async () => {
     const { server, source, saver, drafts } = setup();
     await saver.start();
