@@ -16,6 +16,12 @@ export function textWidth(text: string, fontSize: number, fontStyle = '600', fon
     w = text.length * fontSize * 0.58;
   }
   if (cache.size > 2000) cache.clear();
-  cache.set(key, w);
+  // Until the web font is in, widths are the fallback face's: measure again once it has loaded.
+  if (typeof document === 'undefined' || !document.fonts || document.fonts.status === 'loaded') cache.set(key, w);
   return w;
+}
+
+/** Forget measured widths (the web font has just loaded). */
+export function clearTextWidths(): void {
+  cache.clear();
 }

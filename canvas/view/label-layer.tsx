@@ -1,6 +1,6 @@
 'use client';
 import { useRef, type ReactElement } from 'react';
-import { Layer, Label, Tag, Text } from 'react-konva';
+import { Label, Tag, Text } from 'react-konva';
 import { useEditorState } from '../editor-context';
 import { worldToScreen } from '../editor/camera';
 import { formatLength } from '@/lib/units';
@@ -11,6 +11,7 @@ import { useOverlayGeometry } from '../overlays/use-overlay';
 import { placeLabels, type LabelRequest } from '../overlays/label-placement';
 import { textWidth } from '../overlays/measure-text';
 
+
 const NOTE_FONT = 14;
 const NOTE_PAD = 6;
 const TAPE_FONT = 13;
@@ -18,6 +19,7 @@ const TAPE_FONT = 13;
 /**
  * Text at a fixed pixel size, placed from site positions: notes, tape lengths, object labels and the swing
  * check's pills. Notes and tape lengths stay where they are; the rest are spread so none covers another.
+ * Drawn in screen pixels on the live layer, after the world group: one canvas for all that moves.
  */
 export function LabelLayer() {
   const objects = useEditorState((s) => s.document.objects);
@@ -71,13 +73,13 @@ export function LabelLayer() {
   lastChoice.current = choice;
 
   return (
-    <Layer listening={false}>
+    <>
       {fixed}
       {placed.map((p) => {
         const it = items.get(p.key);
         if (!it) return null;
         return <Pill key={p.key} box={p.box} text={it.text} tone={it.tone} leaderFrom={p.leader ? { from: it.anchor, to: p.leader } : null} />;
       })}
-    </Layer>
+    </>
   );
 }

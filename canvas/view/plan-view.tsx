@@ -10,6 +10,7 @@ import { PinchTracker } from './gestures';
 import { zoomAround } from '../editor/camera';
 import type { PointerInfo } from '../tools/tool-state';
 import { BackgroundImageNode } from '../background/background-image-node';
+import { useFontGeneration } from './use-font-generation';
 
 /** The plan view: a true-scale Konva stage. All hit-testing is the editor's own (footprint polygons). */
 export function PlanView() {
@@ -23,6 +24,7 @@ export function PlanView() {
   const toolPath = useEditorState((s) => s.toolPath);
   const background = useEditorState((s) => s.document.background);
   const sceneId = useEditorState((s) => s.sceneId);
+  const fonts = useFontGeneration();
 
   useEffect(() => {
     const el = ref.current;
@@ -55,11 +57,13 @@ export function PlanView() {
 
   const cursor = toolPath.startsWith('hand') ? (toolPath === 'hand.panning' ? 'grabbing' : 'grab') : toolPath.startsWith('place') || toolPath.startsWith('tape') ? 'crosshair' : 'default';
 
+  // Canvases in the page take the page's font features (tabular figures); Konva measures text on a canvas
+  // outside the page, without them. The plan view turns them off so a label's box fits the text drawn.
   return (
     <div
       ref={ref}
       data-testid="plan-view"
-      className="relative h-full w-full touch-none select-none overflow-hidden bg-paper"
+      className="relative h-full w-full touch-none select-none overflow-hidden bg-paper [font-feature-settings:normal]"
       style={{ cursor }}
       onPointerDown={(e) => {
         try {
@@ -94,18 +98,19 @@ export function PlanView() {
             <BackgroundImageNode sceneId={sceneId} background={background} camera={camera} viewport={viewport} />
           </Layer>
         )}
-        <GridLayer camera={camera} viewport={viewport} grid={grid} units={units} />
+        <GridLayer key={`grid-${fonts}`} camera={camera} viewport={viewport} grid={grid} units={units} />
         <Layer listening={false}>
           <WorldGroup>
             <SceneLayer />
           </WorldGroup>
         </Layer>
-        <Layer listening={false}>
+        {/* What changes with the slew, and the labels, share one canvas: one less full-view composite a frame. */}
+        <Layer key={`live-${fonts}`} listening={false}>
           <WorldGroup>
             <LiveLayer />
           </WorldGroup>
+          <LabelLayer />
         </Layer>
-        <LabelLayer />
       </Stage>
     </div>
   );
