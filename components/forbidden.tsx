@@ -1,6 +1,7 @@
 import { ButtonLink } from '@/components/ui/button';
 import { roleLabel } from '@/components/shell/app-shell';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
+import { redirect } from 'next/navigation';
 
 /** The 403 page body: says what is missing and who can help, instead of an unexplained blank. */
 export function Forbidden({ user, needs }: { user: CurrentUser; needs: string }) {
@@ -25,13 +26,7 @@ export function Forbidden({ user, needs }: { user: CurrentUser; needs: string })
  */
 export async function ForbiddenForRole({ needs }: { needs: string }) {
   const user = await getCurrentUser();
-  if (!user) {
-    return (
-      <div className="mx-auto mt-8 max-w-xl rounded-plate border-2 border-ink bg-paper-raised p-8 shadow-plate">
-        <p className="text-caption font-bold uppercase tracking-[0.14em] text-over">403 · Not available</p>
-        <h1 className="mt-2 text-title text-ink">This page is for {needs}</h1>
-      </div>
-    );
-  }
+  // The signed-in shell has already sent anyone signed out to sign in.
+  if (!user) redirect('/sign-in');
   return <Forbidden user={user} needs={needs} />;
 }

@@ -1,4 +1,4 @@
-import { analyzeLift, analyzeAtSlew, isLiftError, prepareLift, type LiftResult, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
+import { analyzePrepared, analyzeAtSlew, isLiftError, prepareLift, type LiftResult, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
 import type { SceneDocument } from '../document/schema';
 import type { TruckObject } from '../document/objects';
 import type { EditorStore } from '../store/editor-store';
@@ -51,7 +51,7 @@ function prepare(doc: SceneDocument, model: TruckModel | null): Pick<LiveAnalysi
 function fullResult(a: LiveAnalysis): Pick<LiveAnalysis, 'result' | 'error'> {
   if (!a.lift.ok || !a.prepared) return { result: null, error: a.error };
   try {
-    return { result: analyzeLift(a.prepared.input), error: null };
+    return { result: analyzePrepared(a.prepared), error: null };
   } catch (e) {
     if (isLiftError(e)) return { result: null, error: { code: e.code, message: e.message } };
     throw e;
@@ -84,16 +84,17 @@ export function attachLiveAnalysis(store: EditorStore, opts: { deferFull?: (run:
   };
 
   let busy = false;
-  const update = () => {
-    // Our own set() calls notify this listener again; one pass handles everything.
+  /** Our own set() calls notify this listener again; one pass at a time handles everything. */
+  const guarded = (fn: () => void) => {
     if (busy) return;
     busy = true;
     try {
-      step();
+      fn();
     } finally {
       busy = false;
     }
   };
+  const update = () => guarded(step);
   const step = () => {
     const s = store.getState();
     const doc = s.document;
@@ -118,16 +119,8 @@ export function attachLiveAnalysis(store: EditorStore, opts: { deferFull?: (run:
     if (a && a.prepared && !a.result && !store.getState().gestureBase && !fullPending) {
       fullPending = true;
       const gen = generation;
-      if (opts.deferFull) opts.deferFull(() => update2(gen));
+      if (opts.deferFull) opts.deferFull(() => guarded(() => runFull(gen)));
       else runFull(gen);
-    }
-  };
-  const update2 = (gen: number) => {
-    busy = true;
-    try {
-      runFull(gen);
-    } finally {
-      busy = false;
     }
   };
   update();

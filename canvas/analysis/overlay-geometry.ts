@@ -2,6 +2,7 @@ import type { SceneDocument } from '../document/schema';
 import type { LoadObject, TruckObject } from '../document/objects';
 import type { TruckModel } from '../truck/truck-model';
 import type { LiveAnalysis } from './live-analysis';
+import type { LiftResult, PreparedLift } from '@/lib/lift';
 import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '../geometry/vec';
 import { hookSitePoint, hookRadius } from '../shapes/truck/geometry';
 import { loadLocalOutline } from '../shapes/load/geometry';
@@ -61,25 +62,59 @@ export interface OverlayGeometry {
 /** How many of the tightest obstacle clearances get a mark on the plan (all failing ones always do). */
 const SHOWN_CLEARANCES = 5;
 
+type ClearanceLike = { target: string; kind: 'body' | 'obstacle'; horizontal: number; vertical: number; slew: number; overlapsInPlan: boolean };
+
+/** The slew-independent part of the overlays, with what the per-slew part needs to finish the job. */
+interface SwingGeometry {
+  shared: Omit<OverlayGeometry, 'lines' | 'nearestNow'>;
+  /** Each tipping line's ends in the site frame, in the order of the prepared lift's lines. */
+  lineEnds: { a: Pt; b: Pt }[];
+  mark(c: ClearanceLike): ClearanceMark | null;
+}
+
+/** Per analysis object: a slew step makes a new one, so this holds one frame's answer. */
 const cache = new WeakMap<LiveAnalysis, OverlayGeometry | null>();
+/**
+ * What does not move with the slew (arc, band, worst-case ray, clearance marks, approach zones), per
+ * prepared lift and full result: a slew step keeps both, so scrubbing only redoes the tipping lines' figures
+ * and the nearest clearance now.
+ */
+const swingCache = new WeakMap<PreparedLift, { result: LiftResult | null; model: TruckModel; g: SwingGeometry }>();
 
 /** Everything the overlays draw, in the site frame, worked out once per analysis snapshot. */
 export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, model: TruckModel | null): OverlayGeometry | null {
   if (!a || !a.prepared || !model) return null;
   const hit = cache.get(a);
   if (hit !== undefined) return hit;
-  const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck');
-  const load = doc.objects.find((o): o is LoadObject => o.kind === 'load');
-  if (!truck || !load) return null;
+  const s = swingGeometryOf(a, doc, model);
+  if (!s) return null;
   const p = a.prepared;
-  const pose = { x: truck.x, y: truck.y, rotation: truck.rotation };
-  const toSite = (q: Pt) => placePoint(q, pose);
   const limit = p.input.limits.percentOfTipping;
   const governing = a.snapshot?.governing?.line ?? null;
   const lines: TippingLineMark[] = p.lines.map((l, i) => {
     const pct = a.snapshot?.lines[i]?.percentOfTipping ?? 0;
-    return { id: l.id, a: toSite({ x: l.ax, y: l.ay }), b: toSite({ x: l.bx, y: l.by }), percent: pct, margin: limit - pct, governing: l.id === governing, over: pct > limit };
+    return { id: l.id, ...s.lineEnds[i], percent: pct, margin: limit - pct, governing: l.id === governing, over: pct > limit };
   });
+  let nearestNow: ClearanceMark | null = null;
+  if (a.snapshot && a.snapshot.clearances.length) {
+    const c = a.snapshot.clearances.reduce((x, y) => ((x.overlapsInPlan ? x.vertical : x.horizontal) <= (y.overlapsInPlan ? y.vertical : y.horizontal) ? x : y));
+    nearestNow = s.mark(c);
+  }
+  const g: OverlayGeometry = { ...s.shared, lines, nearestNow };
+  cache.set(a, g);
+  return g;
+}
+
+function swingGeometryOf(a: LiveAnalysis, doc: SceneDocument, model: TruckModel): SwingGeometry | null {
+  const p = a.prepared!;
+  const hit = swingCache.get(p);
+  if (hit && hit.result === a.result && hit.model === model) return hit.g;
+  const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck');
+  const load = doc.objects.find((o): o is LoadObject => o.kind === 'load');
+  if (!truck || !load) return null;
+  const pose = { x: truck.x, y: truck.y, rotation: truck.rotation };
+  const toSite = (q: Pt) => placePoint(q, pose);
+  const limit = p.input.limits.percentOfTipping;
   const r = hookRadius(truck, model);
   const { from, span, sign } = arcOf(p.input.swing);
   const reach = p.footprint.reach;
@@ -107,7 +142,7 @@ export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, mode
     return poly;
   };
   const climit = p.input.limits.clearance;
-  const mark = (c: { target: string; kind: 'body' | 'obstacle'; horizontal: number; vertical: number; slew: number; overlapsInPlan: boolean }): ClearanceMark | null => {
+  const mark = (c: ClearanceLike): ClearanceMark | null => {
     const poly = targetPoly(c.target);
     if (!poly) return null;
     const [pp, qq] = closestPoints(loadAt(c.slew), poly);
@@ -122,11 +157,6 @@ export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, mode
       const m = mark(c);
       if (m) clearances.push(m);
     }
-  }
-  let nearestNow: ClearanceMark | null = null;
-  if (a.snapshot && a.snapshot.clearances.length) {
-    const c = a.snapshot.clearances.reduce((x, y) => ((x.overlapsInPlan ? x.vertical : x.horizontal) <= (y.overlapsInPlan ? y.vertical : y.horizontal) ? x : y));
-    nearestNow = mark(c);
   }
   const powerZones: PowerZone[] = (p.input.site?.powerLines ?? []).map((l) => {
     const over = res?.powerLines.find((q) => q.id === l.id);
@@ -150,10 +180,9 @@ export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, mode
       at: { x: (l.a.x + l.b.x) / 2, y: (l.a.y + l.b.y) / 2 },
     };
   });
-  const g: OverlayGeometry = {
+  const shared: SwingGeometry['shared'] = {
     axis: { x: truck.x, y: truck.y },
     hull: p.hull.map((h) => toSite(h)),
-    lines,
     arc,
     band,
     direction: p.input.swing.direction,
@@ -161,10 +190,10 @@ export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, mode
     set: hookSitePoint(truck, model, p.input.swing.to),
     worst,
     clearances,
-    nearestNow,
     powerZones,
     loadAt,
   };
-  cache.set(a, g);
+  const g: SwingGeometry = { shared, lineEnds: p.lines.map((l) => ({ a: toSite({ x: l.ax, y: l.ay }), b: toSite({ x: l.bx, y: l.by }) })), mark };
+  swingCache.set(p, { result: a.result, model, g });
   return g;
 }

@@ -118,23 +118,16 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
       // after this page read the scene. Then there is nothing to choose between; take its revision.
       const theirs = await getScene(o.fetch, o.sceneId).catch(() => null);
       if (stopped) return;
-      if (theirs && sameDocument(theirs.document, doc)) {
-        lastSavedDoc = doc;
-        if (o.source.getDocument() === doc) {
-          clearTimeout(draftTimer);
-          void queueDraft(() => o.drafts.clear(o.sceneId));
-          return set({ status: 'saved', dirty: false, revision: theirs.revision, lastSavedAt: now() });
-        }
-        set({ revision: theirs.revision, status: 'pending' });
-        writeDraftSoon();
-        again = true;
-        return;
-      }
+      if (theirs && sameDocument(theirs.document, doc)) return accepted(doc, theirs.revision);
       return set({ status: 'conflict', serverRevision: theirs?.revision ?? outcome.currentRevision ?? undefined });
     }
     if (outcome.kind === 'refused') return set({ status: 'error', message: outcome.message });
+    accepted(doc, outcome.scene.revision);
+  }
+
+  /** The server holds `doc` at `revision`: saved, unless the user edited on while it was on its way. */
+  function accepted(doc: Doc, revision: number) {
     lastSavedDoc = doc;
-    const revision = outcome.scene.revision;
     if (o.source.getDocument() === doc) {
       clearTimeout(draftTimer);
       void queueDraft(() => o.drafts.clear(o.sceneId));

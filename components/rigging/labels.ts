@@ -1,4 +1,5 @@
 import type { RiggingKind, RiggingStatus } from '@/db/schema';
+import { addDays, DUE_SOON_DAYS } from '@/lib/dates';
 
 export const KIND_LABEL: Record<RiggingKind, string> = {
   'round-sling': 'Round sling',
@@ -15,10 +16,9 @@ export const STATUS_LABEL: Record<RiggingStatus, string> = { in_service: 'In ser
 
 export type DueState = 'overdue' | 'due-soon' | 'ok' | 'none';
 
-/** Overdue: due before today; due soon: within 30 days. Dates are YYYY-MM-DD strings, which sort as dates. */
+/** Overdue: due before today; due soon: within DUE_SOON_DAYS. Dates are YYYY-MM-DD strings, which sort as dates. */
 export function dueState(next: string | null, today: string): DueState {
   if (!next) return 'none';
   if (next < today) return 'overdue';
-  const soon = new Date(Date.parse(`${today}T00:00:00Z`) + 30 * 86_400_000).toISOString().slice(0, 10);
-  return next <= soon ? 'due-soon' : 'ok';
+  return next <= addDays(today, DUE_SOON_DAYS) ? 'due-soon' : 'ok';
 }

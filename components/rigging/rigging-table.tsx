@@ -41,7 +41,7 @@ export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: b
   const qs = new URLSearchParams(Object.entries({ kind, status, due }).filter(([, v]) => v)).toString();
   const qc = useQueryClient();
   const q = useQuery({ queryKey: ['rigging', qs], queryFn: () => fetchJson<{ items: RiggingItem[]; today: string }>(`/api/rigging${qs ? `?${qs}` : ''}`) });
-  const today = q.data?.today ?? new Date().toISOString().slice(0, 10);
+  const today = q.data?.today ?? '';
 
   const columns = useMemo(
     () => [

@@ -194,6 +194,23 @@ export async function listProfileVersions(db: Db, organisationId: number, profil
   return (await versionQuery(db, organisationId, profileId).orderBy('v.version', 'desc').execute()).map(toVersion);
 }
 
+/**
+ * Whether this organisation's profile has that stored version, and whether the profile is retired; reads
+ * no spec (for pinning a scene to the version its sketch names).
+ */
+export async function profileVersionStatus(db: Db, organisationId: number, profileId: number, version: number): Promise<{ retired: boolean } | undefined> {
+  const row = await db
+    .selectFrom('equipment_profile_versions as v')
+    .innerJoin('equipment_profiles as p', 'p.id', 'v.profile_id')
+    .select('p.retired_at')
+    .where('v.organisation_id', '=', organisationId)
+    .where('p.organisation_id', '=', organisationId)
+    .where('v.profile_id', '=', profileId)
+    .where('v.version', '=', version)
+    .executeTakeFirst();
+  return row ? { retired: row.retired_at !== null } : undefined;
+}
+
 export async function findProfileVersion(db: Db, organisationId: number, profileId: number, version: number) {
   const row = await versionQuery(db, organisationId, profileId).where('v.version', '=', version).executeTakeFirst();
   return row ? toVersion(row) : undefined;

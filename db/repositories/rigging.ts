@@ -1,6 +1,7 @@
 import type { Kysely } from 'kysely';
 import type { Database, RiggingItemRow, RiggingKind, RiggingStatus } from '../schema';
 import type { ResolvedRiggingItem } from '@/lib/equipment/rigging-item';
+import { addDays, DUE_SOON_DAYS } from '@/lib/dates';
 
 type Db = Kysely<Database>;
 
@@ -38,10 +39,6 @@ export function toRiggingItem(r: RiggingItemRow): RiggingItem {
 
 export type DueFilter = 'overdue' | 'due-30' | 'ok' | 'none';
 
-/** YYYY-MM-DD `days` after `today` (UTC calendar). */
-export function addDays(today: string, days: number): string {
-  return new Date(Date.parse(`${today}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
-}
 
 export interface RiggingFilters {
   kind?: RiggingKind;
@@ -56,8 +53,8 @@ export async function listRiggingItems(db: Db, organisationId: number, f: Riggin
   if (f.kind) q = q.where('kind', '=', f.kind);
   if (f.status) q = q.where('status', '=', f.status);
   if (f.due === 'overdue') q = q.where('next_inspection_due', '<', f.today);
-  if (f.due === 'due-30') q = q.where('next_inspection_due', '>=', f.today).where('next_inspection_due', '<=', addDays(f.today, 30));
-  if (f.due === 'ok') q = q.where('next_inspection_due', '>', addDays(f.today, 30));
+  if (f.due === 'due-30') q = q.where('next_inspection_due', '>=', f.today).where('next_inspection_due', '<=', addDays(f.today, DUE_SOON_DAYS));
+  if (f.due === 'ok') q = q.where('next_inspection_due', '>', addDays(f.today, DUE_SOON_DAYS));
   if (f.due === 'none') q = q.where('next_inspection_due', 'is', null);
   return (await q.orderBy('kind').orderBy('tag').execute()).map(toRiggingItem);
 }

@@ -1,8 +1,9 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import { addDays, createRiggingItem, recordInspection } from '../repositories/rigging';
+import { createRiggingItem, recordInspection } from '../repositories/rigging';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
 import { resolveRatings } from '@/lib/equipment/rigging-item';
+import { addDays, today as todayIso } from '@/lib/dates';
 
 /**
  * Invented demo rigging inventory. Tags and items are made up for the demo; ratings come from the
@@ -37,7 +38,7 @@ const COBALT: DemoItem[] = [
 export const DEMO_RIGGING = { 'harrow-ridge': HARROW, 'cobalt-flats': COBALT } as const;
 
 export async function seedDemoRigging(trx: Kysely<Database>, orgIds: Map<string, number>, userIds: Map<string, number>) {
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayIso();
   const inspectors = { 'harrow-ridge': userIds.get('operator@harrow.example')!, 'cobalt-flats': userIds.get('operator@cobalt.example')! };
   for (const [org, items] of Object.entries(DEMO_RIGGING) as [keyof typeof DEMO_RIGGING, DemoItem[]][]) {
     const orgId = orgIds.get(org)!;

@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
-import { findEquipmentProfile, findProfileVersion } from '@/db/repositories/equipment';
+import { findEquipmentProfile, profileVersionStatus } from '@/db/repositories/equipment';
 import { HttpError } from './errors';
 
 /**
@@ -32,14 +32,38 @@ export function documentTruckPin(document: unknown): { profileId: number; profil
   return t && ok(t.profileId) && ok(t.profileVersion) ? { profileId: t.profileId, profileVersion: t.profileVersion } : null;
 }
 
+export interface ScenePin {
+  equipmentProfileId: number | null;
+  equipmentProfileVersion: number | null;
+}
+
 /**
- * What the scene record says it was planned with, following the sketch: the document's truck profile and
- * the exact version it is drawn from, when that profile is this organisation's and the version exists.
- * Null when the document says nothing usable (no truck, or a truck from elsewhere): leave the record be.
+ * The truck profile and version a scene record names, from a create or save request. The record follows
+ * the sketch: the version pinned is the one the sketch's truck is drawn from, when the sketch names that
+ * profile and the version exists, else the profile's current version.
+ * - an explicit `equipmentProfileId` is checked (this organisation's; in service, unless `keepProfileId`
+ *   names it: a scene already on a truck may keep it after the truck is retired);
+ * - `null` clears the pin;
+ * - no id: the sketch's truck, under the same rule (this organisation's version, in service unless it is
+ *   `keepProfileId`); otherwise the record is left as it is (undefined): a file from elsewhere, a copy of a
+ *   plan whose truck has been retired, or a sketch without a truck.
  */
-export async function pinFromDocument(db: Kysely<Database>, organisationId: number, document: unknown): Promise<{ equipmentProfileId: number; equipmentProfileVersion: number } | null> {
-  const pin = documentTruckPin(document);
-  if (!pin) return null;
-  const v = await findProfileVersion(db, organisationId, pin.profileId, pin.profileVersion);
-  return v ? { equipmentProfileId: pin.profileId, equipmentProfileVersion: pin.profileVersion } : null;
+export async function scenePin(
+  db: Kysely<Database>,
+  organisationId: number,
+  body: { equipmentProfileId?: number | null; document?: unknown },
+  opts: { keepProfileId?: number | null } = {},
+): Promise<ScenePin | undefined> {
+  if (body.equipmentProfileId === null) return { equipmentProfileId: null, equipmentProfileVersion: null };
+  const sketch = documentTruckPin(body.document);
+  if (body.equipmentProfileId === undefined) {
+    if (!sketch) return undefined;
+    const status = await profileVersionStatus(db, organisationId, sketch.profileId, sketch.profileVersion);
+    if (!status || (status.retired && sketch.profileId !== opts.keepProfileId)) return undefined;
+    return { equipmentProfileId: sketch.profileId, equipmentProfileVersion: sketch.profileVersion };
+  }
+  const id = body.equipmentProfileId;
+  const current = await pinnedProfileVersion(db, organisationId, id, { allowRetired: id === opts.keepProfileId });
+  const drawnFrom = sketch?.profileId === id && sketch.profileVersion !== current && (await profileVersionStatus(db, organisationId, id, sketch.profileVersion)) ? sketch.profileVersion : current;
+  return { equipmentProfileId: id, equipmentProfileVersion: drawnFrom };
 }

@@ -1,5 +1,5 @@
 import { KG_PER_LB } from '@/lib/units';
-import { ROUND_SLING_LB, shackleWll, SHACKLE_SIZES } from '@/lib/lift/rigging-tables';
+import { roundSlingRating, shackleWll, SHACKLE_SIZES, type RoundSlingColour } from '@/lib/lift/rigging-tables';
 import { roundSlingColours } from '@/lib/lift/schema';
 import type { RiggingKind } from '@/db/schema';
 
@@ -43,13 +43,11 @@ export function parseChainSize(text: string): { size: string; grade: '70' | '80'
 export function standardRating(kind: RiggingKind, size: string): StandardRating | null {
   const s = size.trim().toLowerCase();
   if (kind === 'round-sling') {
-    const colour = (s === 'gray' ? 'grey' : s) as keyof typeof ROUND_SLING_LB;
-    const lb = ROUND_SLING_LB[colour];
-    if (!lb) return null;
+    const colour = s === 'gray' ? 'grey' : s;
+    if (!(roundSlingColours as readonly string[]).includes(colour)) return null;
+    // The engine's own table, so the inventory and the rigging check read the same ratings.
     return {
-      vertical: lb.vertical * KG_PER_LB,
-      choker: lb.choker * KG_PER_LB,
-      basket: lb.basket * KG_PER_LB,
+      ...roundSlingRating(colour as RoundSlingColour),
       source: 'wstda-rs1',
       note: 'Polyester round sling by colour, WSTDA RS-1 (value from memory). Check the sling’s own tag.',
     };

@@ -55,8 +55,12 @@ function massChecks(p: PreparedLift, worst: WorstCase, maxima: ReactionMaximum[]
 
 /** The whole analysis of a planned lift over its swing. Throws LiftError for input it cannot analyse. */
 export function analyzeLift(raw: LiftInputIn | LiftInput, options: AnalyzeOptions = {}): LiftResult {
+  return analyzePrepared(prepareLift(raw), options);
+}
+
+/** analyzeLift on a lift already prepared (the editor prepares once per edit and keeps it). */
+export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): LiftResult {
   const step = Math.min(1, options.step ?? 1);
-  const p = prepareLift(raw);
   assertStandsUnloaded(p);
   const { worst, sweep } = worstCaseOf(p, step);
 

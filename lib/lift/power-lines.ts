@@ -91,7 +91,7 @@ export function powerLineOver(p: PreparedLift, line: PowerLine): PowerLineCleara
   // No point of the boom, hoist line or load moves faster than (radius + load reach) m per radian.
   const lipschitz = ((Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach) * Math.PI) / 180;
   const r = lipschitzMin((t) => powerLineDistanceAt(p, line, slewAt(p, t)), p.span, lipschitz, {
-    tolAbs: 0.005, tolRel: 0.005, minStep: 0.005, coarseStep: 10,
+    tolAbs: 0.005, tolRel: 0.001, minStep: 0.005, coarseStep: 10,
   });
   return powerLineAt(p, line, slewAt(p, r.t));
 }

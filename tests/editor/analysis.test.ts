@@ -5,6 +5,7 @@ import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
 import { analyzeLift, analyzeAtSlew, prepareLift } from '@/lib/lift';
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
 import { setSlew } from '@/canvas/commands/truck';
+import { overlayGeometry } from '@/canvas/analysis/overlay-geometry';
 
 const HR7 = { id: 1, version: 1, name: 'Unit 7 — 50-ton rotator (example values)', unitNumber: 'HR-7', spec: HR7_SPEC };
 
@@ -70,5 +71,25 @@ describe('live analysis', () => {
     const g0 = gap();
     t.drag([shed.x, shed.y], [shed.x - 3.048, shed.y], { alt: true });
     expect(gap()).toBeCloseTo(g0 - 3.048, 3);
+  });
+
+  it('overlays while scrubbing: the swing geometry is kept, the tipping lines carry the snapshot’s figures', () => {
+    // Source: definition — the arc, band and clearance marks depend on the plan, not on the slew on screen;
+    // each line's percent is the snapshot's at that slew (analyzeAtSlew) [derived].
+    const t = coilScene();
+    const g0 = overlayGeometry(t.state.analysis, t.doc, t.state.truck)!;
+    t.state.run(setSlew(137, 'gesture'));
+    const a = t.state.analysis!;
+    const g1 = overlayGeometry(a, t.doc, t.state.truck)!;
+    expect(g1.arc).toBe(g0.arc);
+    expect(g1.clearances).toBe(g0.clearances);
+    expect(g1.lines.map((l) => l.percent)).toEqual(a.snapshot!.lines.map((l) => l.percentOfTipping));
+    expect(g1.lines.find((l) => l.governing)?.id).toBe(a.snapshot!.governing!.line);
+    // Same analysis object: the same answer, not a new one.
+    expect(overlayGeometry(a, t.doc, t.state.truck)).toBe(g1);
+    // A real edit (the load moves) makes new swing geometry.
+    const load = t.byKind('load')[0];
+    t.state.run((doc) => ({ capture: 'commit', document: { ...doc, objects: doc.objects.map((o) => (o.id === load.id ? { ...o, x: o.x + 1 } : o)) } }));
+    expect(overlayGeometry(t.state.analysis, t.doc, t.state.truck)!.arc).not.toBe(g0.arc);
   });
 });

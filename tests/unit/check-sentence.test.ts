@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { bearingCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck } from '@/lib/lift/checks';
 import { checkSentence } from '@/canvas/panels/results/check-sentence';
+import * as units from '@/lib/units';
 
 // Exact definitions (NIST SP 811): 1 in = 0.0254 m, 1 lb = 0.45359237 kg, standard gravity 9.80665 m/s².
 // Written out here rather than imported, so the test checks lib/units instead of repeating it.
@@ -17,6 +18,14 @@ describe('the exact conversions the formatter is checked against', () => {
   it('1 psi = 6.894757293168361 kPa, derived from the pound, standard gravity and the inch', () => {
     expect(KPA_PER_PSI).toBeCloseTo(6.894757293168361, 13);
     expect(KPA_PER_PSF * 144).toBeCloseTo(6.894757293168361, 13);
+  });
+
+  it('lib/units holds the same exact definitions (NIST SP 811)', () => {
+    expect(units.M_PER_IN).toBe(M_PER_IN);
+    expect(units.KG_PER_LB).toBe(KG_PER_LB);
+    expect(units.G).toBe(G);
+    expect(units.PA_PER_PSF / 1000).toBeCloseTo(KPA_PER_PSF, 15);
+    expect(units.kpaToPsf(KPA_PER_PSI)).toBeCloseTo(144, 10);
   });
 });
 

@@ -3,8 +3,8 @@ vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import * as scenes from '@/app/api/scenes/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import { getDb } from '@/db';
-import { findEquipmentProfile, updateEquipmentProfile } from '@/db/repositories/equipment';
-import { HR7_SPEC } from '@/db/seed/demo-trucks';
+import { createEquipmentProfile, findEquipmentProfile, retireEquipmentProfile, updateEquipmentProfile } from '@/db/repositories/equipment';
+import { HR4_SPEC, HR7_SPEC } from '@/db/seed/demo-trucks';
 import { signInAs } from '@/tests/setup/auth-mock';
 import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { TRUCKS, truckIdByUnit } from '@/tests/setup/fixtures';
@@ -84,5 +84,26 @@ describe('the scene record follows the sketch’s truck', () => {
     put = await call({ handler: scene.PUT, method: 'PUT', id: String(id), body: { revision: 2, document: docWith(truck(hr7, 99)) } });
     expect(put.status, put.text).toBe(200);
     expect(await record(id)).toMatchObject({ equipment_profile_id: hr7, equipment_profile_version: 2 });
+  });
+
+  it('a retired truck: a new scene from a sketch on it is made without a pin; a scene already on it keeps it', async () => {
+    // The rule of the equipment library: a retired truck cannot be picked for a plan, though a scene already
+    // on it may keep it.
+    const admin = await demoUser('admin@harrow.example');
+    const spare = await createEquipmentProfile(getDb(), admin.organisationId, { kind: 'truck', name: 'Spare wrecker (example values)', unitNumber: 'HR-9', inService: true, spec: HR4_SPEC }, admin.id);
+    const kept = await call({ handler: scenes.POST, method: 'POST', body: { title: 'Planned before retirement', document: docWith(truck(spare.id, 1)) } });
+    expect(await record(kept.json.id as number)).toMatchObject({ equipment_profile_id: spare.id, equipment_profile_version: 1 });
+    await retireEquipmentProfile(getDb(), admin.organisationId, spare.id);
+
+    const copy = await call({ handler: scenes.POST, method: 'POST', body: { title: 'Copy after retirement', document: docWith(truck(spare.id, 1)) } });
+    expect(copy.status, copy.text).toBe(201);
+    expect(await record(copy.json.id as number)).toMatchObject({ equipment_profile_id: null, equipment_profile_version: null });
+    const named = await call({ handler: scenes.POST, method: 'POST', body: { title: 'Named after retirement', equipmentProfileId: spare.id, document: docWith(truck(spare.id, 1)) } });
+    expect(named.status).toBe(400);
+    expect(named.json.issues?.[0].path).toBe('equipmentProfileId');
+
+    const put = await call({ handler: scene.PUT, method: 'PUT', id: String(kept.json.id), body: { revision: 1, document: docWith(truck(spare.id, 1)) } });
+    expect(put.status, put.text).toBe(200);
+    expect(await record(kept.json.id as number)).toMatchObject({ equipment_profile_id: spare.id, equipment_profile_version: 1, revision: 2 });
   });
 });

@@ -3,7 +3,9 @@ import { createRiggingItem, listRiggingItems } from '@/db/repositories/rigging';
 import { recordAudit } from '@/db/repositories/audit';
 import { route } from '@/lib/api/route';
 import { riggingItemSchema, riggingListQuery } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS, resolvedOr400, tagConflict, today } from './shared';
+import { resolvedOr400, tagConflict } from './shared';
+import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { today } from '@/lib/dates';
 
 export const runtime = 'nodejs';
 

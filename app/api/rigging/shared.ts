@@ -2,10 +2,6 @@ import { HttpError } from '@/lib/api/errors';
 import { resolveRatings } from '@/lib/equipment/rigging-item';
 import type { RiggingItemData } from '@/lib/validations/rigging';
 
-/** Operators and admins manage rigging and record inspections; everyone in the organisation reads. */
-export const RIGGING_WRITERS = ['operator', 'admin'] as const;
-
-export const today = () => new Date().toISOString().slice(0, 10);
 
 export function resolvedOr400(data: RiggingItemData) {
   const r = resolveRatings(data);

@@ -4,6 +4,9 @@ import { notFound, redirect } from 'next/navigation';
 import { getDb } from '@/db';
 import { findRiggingItem, listInspections } from '@/db/repositories/rigging';
 import { getCurrentUser } from '@/lib/auth/current-user';
+import { canManageRigging } from '@/lib/auth/roles';
+import { idParams } from '@/lib/api/route';
+import { today } from '@/lib/dates';
 import { PageHeader } from '@/components/ui/page-header';
 import { Notice } from '@/components/ui/notice';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
@@ -16,15 +19,15 @@ export const metadata: Metadata = { title: 'Rigging item' };
 export default async function RiggingItemPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ saved?: string }> }) {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  const id = Number((await params).id);
-  if (!Number.isInteger(id) || id <= 0) notFound();
+  const parsed = idParams.safeParse(await params);
+  if (!parsed.success) notFound();
+  const { id } = parsed.data;
   const db = getDb();
   const item = await findRiggingItem(db, user.organisationId, id);
   if (!item) notFound();
   const inspections = await listInspections(db, user.organisationId, id);
-  const canEdit = user.role === 'operator' || user.role === 'admin';
-  const today = new Date().toISOString().slice(0, 10);
-  const due = dueState(item.nextInspectionDue, today);
+  const canEdit = canManageRigging(user.role);
+  const due = dueState(item.nextInspectionDue, today());
   return (
     <>
       <PageHeader eyebrow={<Link href="/rigging">Rigging inventory</Link>} title={`${item.tag} · ${KIND_LABEL[item.kind]}`} description={item.size || undefined} />
@@ -36,7 +39,7 @@ export default async function RiggingItemPage({ params, searchParams }: { params
       </div>
       <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_28rem]">
         <RiggingItemForm id={item.id} units={user.units} readOnly={!canEdit} initial={{ tag: item.tag, kind: item.kind, size: item.size, length: item.length, ratings: item.ratings, status: item.status, lastInspection: item.lastInspection, nextInspectionDue: item.nextInspectionDue, notes: item.notes }} />
-        <InspectionsPanel itemId={item.id} items={inspections} canRecord={canEdit && item.status !== 'retired'} today={today} />
+        <InspectionsPanel itemId={item.id} items={inspections} canRecord={canEdit && item.status !== 'retired'} today={today()} />
       </div>
     </>
   );

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
+import { canManageRigging } from '@/lib/auth/roles';
 import { PageHeader } from '@/components/ui/page-header';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { RiggingItemForm } from '@/components/rigging/rigging-item-form';
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: 'New rigging item' };
 export default async function NewRiggingPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (user.role !== 'operator' && user.role !== 'admin') forbidden();
+  if (!canManageRigging(user.role)) forbidden();
   return (
     <>
       <PageHeader eyebrow="Rigging inventory" title="New rigging item" />

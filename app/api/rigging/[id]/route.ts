@@ -4,7 +4,8 @@ import { recordAudit } from '@/db/repositories/audit';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { riggingItemSchema } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS, resolvedOr400, tagConflict } from '../shared';
+import { resolvedOr400, tagConflict } from '../shared';
+import { RIGGING_WRITERS } from '@/lib/auth/roles';
 
 export const runtime = 'nodejs';
 

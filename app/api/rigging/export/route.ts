@@ -3,7 +3,7 @@ import { listRiggingItems } from '@/db/repositories/rigging';
 import { route } from '@/lib/api/route';
 import { riggingToCsv } from '@/lib/equipment/rigging-csv';
 import { riggingListQuery } from '@/lib/validations/rigging';
-import { today } from '../shared';
+import { today } from '@/lib/dates';
 
 export const runtime = 'nodejs';
 

@@ -4,7 +4,7 @@ import { recordAudit } from '@/db/repositories/audit';
 import { route } from '@/lib/api/route';
 import { parseRiggingCsv, type CsvRowError } from '@/lib/equipment/rigging-csv';
 import { importSchema } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS } from '../shared';
+import { RIGGING_WRITERS } from '@/lib/auth/roles';
 
 export const runtime = 'nodejs';
 

@@ -3,7 +3,7 @@ import { inTransaction } from '@/db/transaction';
 import { getScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
-import { documentTruckPin, pinFromDocument, pinnedProfileVersion } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/api/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
 
 export const runtime = 'nodejs';
@@ -22,21 +22,9 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: updateSc
     const scene = await getScene(trx, user, params.id);
     if (!scene) throw notFound();
     if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
-    let equipmentProfileVersion: number | null | undefined;
-    if (body.equipmentProfileId) {
-      equipmentProfileVersion = await pinnedProfileVersion(trx, user.organisationId, body.equipmentProfileId, {
-        allowRetired: body.equipmentProfileId === scene.equipmentProfileId,
-      });
-    } else if (body.equipmentProfileId === null) equipmentProfileVersion = null;
-    // A saved sketch carries its truck's profile and version; the record follows it, so the plan's pinned
-    // version is the one its truck is drawn from (for example after moving the plan to a newer version).
-    const follow = body.equipmentProfileId === undefined && body.document !== undefined ? await pinFromDocument(trx, user.organisationId, body.document) : null;
-    if (follow) return updateScene(trx, user, params.id, { ...body, ...follow });
-    if (body.equipmentProfileId && body.equipmentProfileId === documentTruckPin(body.document)?.profileId) {
-      const exact = await pinFromDocument(trx, user.organisationId, body.document);
-      if (exact) equipmentProfileVersion = exact.equipmentProfileVersion;
-    }
-    return updateScene(trx, user, params.id, { ...body, equipmentProfileVersion });
+    // The record names the profile version the saved sketch's truck is drawn from (lib/api/truck-pin).
+    const pin = await scenePin(trx, user.organisationId, body, { keepProfileId: scene.equipmentProfileId });
+    return updateScene(trx, user, params.id, { ...body, ...pin });
   });
   if (outcome.kind === 'missing') throw notFound();
   if (outcome.kind === 'stale') {

@@ -4,7 +4,8 @@ import { recordAudit } from '@/db/repositories/audit';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { inspectionSchema } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS, today } from '../../shared';
+import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { today } from '@/lib/dates';
 
 export const runtime = 'nodejs';
 
