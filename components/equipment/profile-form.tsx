@@ -55,7 +55,8 @@ export function ProfileForm({ initial, units, readOnly, profile }: Props) {
         if (profile) {
           const p = await fetchJson<{ version: number }>(`/api/equipment/${profile.id}`, { method: 'PUT', body: JSON.stringify({ ...values, baseVersion: profile.version }) });
           setSaved(`Saved as version ${p.version}.`);
-          router.refresh();
+          // Fresh server data, and off ?created: the page's "created" notice is about version 1, not this save.
+          router.replace(`/equipment/${profile.id}`);
         } else {
           const p = await fetchJson<{ id: number }>('/api/equipment', { method: 'POST', body: JSON.stringify(values) });
           router.push(`/equipment/${p.id}?created=1`);

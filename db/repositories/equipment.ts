@@ -190,8 +190,17 @@ function versionQuery(db: Db, organisationId: number, profileId: number) {
     .where('v.profile_id', '=', profileId);
 }
 
-export async function listProfileVersions(db: Db, organisationId: number, profileId: number) {
-  return (await versionQuery(db, organisationId, profileId).orderBy('v.version', 'desc').execute()).map(toVersion);
+/** The history list, newest first: every version without its spec (one version's spec: findProfileVersion). */
+export async function listProfileVersions(db: Db, organisationId: number, profileId: number): Promise<Omit<EquipmentProfileVersion, 'spec'>[]> {
+  const rows = await db
+    .selectFrom('equipment_profile_versions as v')
+    .leftJoin('users', 'users.id', 'v.author_id')
+    .select(['v.profile_id', 'v.version', 'v.name', 'v.unit_number', 'v.in_service', 'v.created_at', 'users.name as author_name'])
+    .where('v.organisation_id', '=', organisationId)
+    .where('v.profile_id', '=', profileId)
+    .orderBy('v.version', 'desc')
+    .execute();
+  return rows.map((r) => ({ profileId: r.profile_id, version: r.version, name: r.name, unitNumber: r.unit_number, inService: r.in_service === 1, authorName: r.author_name, createdAt: r.created_at }));
 }
 
 /**

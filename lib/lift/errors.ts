@@ -6,6 +6,7 @@ export type LiftErrorCode =
   | 'invalid-input'
   | 'too-few-supports'
   | 'collinear-supports'
+  | 'coincident-supports'
   | 'invalid-mass'
   | 'zero-length-boom'
   | 'degenerate-polygon'
@@ -17,6 +18,7 @@ export const LIFT_ERROR_CODES: readonly LiftErrorCode[] = [
   'invalid-input',
   'too-few-supports',
   'collinear-supports',
+  'coincident-supports',
   'invalid-mass',
   'zero-length-boom',
   'degenerate-polygon',

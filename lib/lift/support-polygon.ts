@@ -46,7 +46,10 @@ export function convexHull(points: readonly SupportPoint[]): SupportPoint[] {
   return lower.slice(0, -1).concat(upper.slice(0, -1));
 }
 
-/** Hull of the supports and its tipping lines; typed errors for too few or collinear supports. */
+/** Two supports nearer than this (m) stand on the same spot: no pad is that small, and the reactions would be ill-posed. */
+export const MIN_SUPPORT_SPACING = 0.01;
+
+/** Hull of the supports and its tipping lines; typed errors for too few, coincident or collinear supports. */
 export function supportPolygon(supports: readonly SupportPoint[]): { hull: SupportPoint[]; lines: TippingLineGeom[] } {
   if (supports.length < 3) {
     throw new LiftError(
@@ -54,6 +57,14 @@ export function supportPolygon(supports: readonly SupportPoint[]): { hull: Suppo
       `A support polygon needs at least three supports; the plan has ${supports.length}.`,
       'supports',
     );
+  }
+  for (let i = 0; i < supports.length; i++) {
+    for (let j = i + 1; j < supports.length; j++) {
+      const d = Math.hypot(supports[i].x - supports[j].x, supports[i].y - supports[j].y);
+      if (d < MIN_SUPPORT_SPACING) {
+        throw new LiftError('coincident-supports', `Supports "${supports[i].id}" and "${supports[j].id}" stand at the same spot (${(d * 1000).toFixed(1)} mm apart); each pad needs its own place.`, `supports.${j}`);
+      }
+    }
   }
   const hull = convexHull(supports);
   let extent = 0;

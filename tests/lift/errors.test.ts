@@ -25,6 +25,16 @@ describe('typed engine errors', () => {
     const line = [0, 1, 2].map((i) => ({ id: `P${i}`, x: i, y: 2 * i, area: 0.2 }));
     expect(codeOf({ ...base, supports: line })).toBe('collinear-supports');
   });
+  it('coincident-supports: two pads on one spot, naming the second', () => {
+    const twin = [...base.supports, { ...base.supports[0], id: 'FL2', x: base.supports[0].x + 0.004 }];
+    expect(codeOf({ ...base, supports: twin })).toBe('coincident-supports');
+    try {
+      analyzeLift({ ...base, supports: twin });
+    } catch (e) {
+      expect((e as LiftError).field).toBe(`supports.${twin.length - 1}`);
+    }
+    expect(codeOf({ ...base, supports: [...base.supports, { ...base.supports[0], id: 'FL2', x: base.supports[0].x + 0.02 }] })).toBe('none');
+  });
   it('invalid-mass: negative, and NaN given to the library', () => {
     expect(codeOf({ ...base, masses: [{ id: 'carrier', mass: -5, x: 0, y: 0, z: 1 }] })).toBe('invalid-mass');
     expect(codeOf({ ...base, load: { ...base.load, mass: Number.NaN } })).toBe('invalid-mass');

@@ -63,11 +63,15 @@ describe('four-pad reactions on a rigid base', () => {
 });
 
 describe('reactions, properties (fast-check)', () => {
-  const pt = fc.record({ x: fc.double({ min: -4, max: 4, noNaN: true }), y: fc.double({ min: -4, max: 4, noNaN: true }) });
+  // Pads on a 1 cm grid and never two on one spot: the engine refuses supports nearer than
+  // MIN_SUPPORT_SPACING (coincident-supports), as the reactions of two supports on one spot are not determined.
+  const cm = fc.integer({ min: -400, max: 400 }).map((v) => v / 100);
+  const pt = fc.record({ x: cm, y: cm });
+  const pads = fc.uniqueArray(pt, { minLength: 3, maxLength: 7, selector: (p) => `${p.x},${p.y}` });
   it('sum to the total weight and balance its moments whenever no support is in tension', () => {
     // Source: static equilibrium, ΣF = 0 and ΣM = 0 [derived].
     fc.assert(
-      fc.property(fc.array(pt, { minLength: 3, maxLength: 7 }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 1000, max: 60000, noNaN: true }), (pts, u, v, W) => {
+      fc.property(pads, fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 1000, max: 60000, noNaN: true }), (pts, u, v, W) => {
         const hull = convexHull(pts.map((p, i) => ({ id: String(i), ...p })));
         let area = 0;
         for (let i = 0; i < hull.length; i++) area += hull[i].x * hull[(i + 1) % hull.length].y - hull[(i + 1) % hull.length].x * hull[i].y;
@@ -84,9 +88,11 @@ describe('reactions, properties (fast-check)', () => {
           expect(m).toBeGreaterThanOrEqual(-1e-6 * W);
           sum += m; mx += m * X[i]; my += m * Y[i];
         });
-        expect(sum).toBeCloseTo(W, 5);
-        expect(mx).toBeCloseTo(W * cx, 4);
-        expect(my).toBeCloseTo(W * cy, 4);
+        // To a relative 1e-8 of the weight (and of its moment over the 4 m half-extent): double precision
+        // on thin, ill-conditioned pad layouts still lands near 1e-9.
+        expect(Math.abs(sum - W)).toBeLessThan(1e-8 * W);
+        expect(Math.abs(mx - W * cx)).toBeLessThan(1e-8 * W * 4);
+        expect(Math.abs(my - W * cy)).toBeLessThan(1e-8 * W * 4);
       }),
       { numRuns: 150 },
     );

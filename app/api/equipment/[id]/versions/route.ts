@@ -8,7 +8,6 @@ export const runtime = 'nodejs';
 export const GET = route({ params: idParams }, async ({ user, params }) => {
   const db = getDb();
   if (!(await findEquipmentProfile(db, user.organisationId, params.id))) throw new HttpError(404, 'Equipment profile not found');
-  const items = await listProfileVersions(db, user.organisationId, params.id);
   // The list is for the history view; a single version (with its spec) comes from /versions/[version].
-  return { items: items.map(({ spec: _spec, ...v }) => v) };
+  return { items: await listProfileVersions(db, user.organisationId, params.id) };
 });
