@@ -3,7 +3,7 @@ import { Label, Line, Tag, Text } from 'react-konva';
 import { formatLength, type UnitSystem } from '@/lib/units';
 import { PAL } from '../view/palette';
 import type { OverlayGeometry } from '../analysis/overlay-geometry';
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 import type { LabelBox } from './label-placement';
 
 const pct = (n: number) => `${n.toFixed(1)} %`;
