@@ -147,6 +147,17 @@ export interface RiggingInspectionTable {
   created_at: Timestamp;
 }
 
+export interface ScenePlanDetailsTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  /** The scene revision these details were saved with. */
+  revision: number;
+  details: JSONColumnType<Record<string, unknown>>;
+  author_id: number;
+  created_at: Timestamp;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -158,6 +169,7 @@ export interface Database {
   equipment_profile_versions: EquipmentProfileVersionTable;
   rigging_items: RiggingItemTable;
   rigging_inspections: RiggingInspectionTable;
+  scene_plan_details: ScenePlanDetailsTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -180,3 +192,4 @@ export type NewRiggingItem = Insertable<RiggingItemTable>;
 export type RiggingItemUpdate = Updateable<RiggingItemTable>;
 export type RiggingInspectionRow = Selectable<RiggingInspectionTable>;
 export type NewRiggingInspection = Insertable<RiggingInspectionTable>;
+export type ScenePlanDetailsRow = Selectable<ScenePlanDetailsTable>;
