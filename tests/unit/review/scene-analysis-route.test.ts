@@ -21,7 +21,7 @@ import { call } from '@/tests/setup/call';
  */
 
 let coil: number;
-type Json = Record<string, unknown> & { worstCase: { percentOfTipping: number; slew: number }; checks: unknown[]; revision: number };
+type Json = Record<string, unknown> & { issues?: { path: string }[]; worstCase: { percentOfTipping: number; slew: number }; checks: unknown[]; revision: number };
 
 /** The editor's path for a stored document, run here independently of the route. */
 async function editorResult(raw: unknown, organisationId: number) {
