@@ -25,7 +25,7 @@ import * as lessons from '@/app/api/lessons/route';
 import * as lesson from '@/app/api/lessons/[id]/route';
 import { getDb } from '@/db';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
-import { describeMatrix, type MatrixRoute, type TargetResolver } from '@/tests/setup/route-matrix';
+import { describeMatrix, type MatrixRoute, type Target, type TargetResolver } from '@/tests/setup/route-matrix';
 import { LESSONS, PEER_EMAIL, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';
 
 /**
@@ -67,7 +67,7 @@ const lessonTarget = (title: string): TargetResolver => async () => {
   return { id: String(row.id), sceneId: await sceneIdByTitle(TITLES.ownApproved) };
 };
 /** A lesson body on Harrow's training-set scene; other organisations see that scene as unknown (400). */
-const lessonBody = (t: { sceneId?: unknown }) => ({ title: 'Matrix: lesson', steps: [{ sceneId: t.sceneId, revision: 1, notes: 'Watch the rear pads.' }] });
+const lessonBody = (t: Target) => ({ title: 'Matrix: lesson', steps: [{ sceneId: t.sceneId, revision: 1, notes: 'Watch the rear pads.' }] });
 const today = () => new Date().toISOString().slice(0, 10);
 
 const targets: Record<string, TargetResolver> = {
