@@ -16,6 +16,7 @@ import * as riggingExport from '@/app/api/rigging/export/route';
 import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
 import * as analyze from '@/app/api/analyze/route';
+import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
 import * as background from '@/app/api/scenes/[id]/background/route';
 import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { makePng } from '@/tests/fixtures/images';
@@ -180,6 +181,19 @@ const routes: MatrixRoute[] = [
     },
   },
   { method: 'POST', path: '/api/analyze', handler: analyze.POST, body: () => squareOfPads(), expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    // The peer's scenes are empty sketches: whoever may read them gets 422 (nothing to compute), not 404.
+    method: 'GET', path: '/api/scenes/[id]/analysis', handler: sceneAnalysis.GET, checkId: false,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: operator’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 422, 422, 422, 404],
+      'Harrow: peer’s approved': [401, 422, 422, 422, 422, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
   // ── equipment ──────────────────────────────────────────────────────────
   { method: 'GET', path: '/api/equipment', handler: equipment.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
