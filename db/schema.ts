@@ -158,6 +158,27 @@ export interface ScenePlanDetailsTable {
   created_at: Timestamp;
 }
 
+export interface LessonTable {
+  id: Generated<number>;
+  organisation_id: number;
+  author_id: number;
+  title: string;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface LessonStepTable {
+  id: Generated<number>;
+  lesson_id: number;
+  /** 0-based order within the lesson. */
+  position: number;
+  scene_id: number;
+  revision: number;
+  notes: Generated<string>;
+  question: string | null;
+  answer: string | null;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -170,6 +191,8 @@ export interface Database {
   rigging_items: RiggingItemTable;
   rigging_inspections: RiggingInspectionTable;
   scene_plan_details: ScenePlanDetailsTable;
+  lessons: LessonTable;
+  lesson_steps: LessonStepTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -193,3 +216,5 @@ export type RiggingItemUpdate = Updateable<RiggingItemTable>;
 export type RiggingInspectionRow = Selectable<RiggingInspectionTable>;
 export type NewRiggingInspection = Insertable<RiggingInspectionTable>;
 export type ScenePlanDetailsRow = Selectable<ScenePlanDetailsTable>;
+export type LessonRow = Selectable<LessonTable>;
+export type LessonStepRow = Selectable<LessonStepTable>;
