@@ -3,6 +3,7 @@ vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import * as scenes from '@/app/api/scenes/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import * as training from '@/app/api/scenes/[id]/training/route';
+import * as planDetails from '@/app/api/scenes/[id]/details/route';
 import * as equipment from '@/app/api/equipment/route';
 import * as equipmentOne from '@/app/api/equipment/[id]/route';
 import * as duplicate from '@/app/api/equipment/[id]/duplicate/route';
@@ -180,6 +181,29 @@ const routes: MatrixRoute[] = [
     expect: {
       'Harrow: draft’s image': [401, 200, 200, 200, 200, 404],
       'Cobalt: scene’s image': [401, 404, 404, 404, 404, 200],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/details', handler: planDetails.GET,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/scenes/[id]/details', handler: planDetails.PUT, writes: [...sceneWrites, 'scene_plan_details'],
+    body: (t) => ({ revision: t.revision, details: { job: { customer: 'Matrix customer' } } }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 200],
+      'unknown id': [401, 404, 403, 403, 403, 404],
     },
   },
   { method: 'POST', path: '/api/analyze', handler: analyze.POST, body: () => squareOfPads(), expect: { '-': [401, 200, 200, 200, 200, 200] } },
