@@ -6,7 +6,8 @@ import { Section } from './section';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
 import { BackgroundPanel } from '../../background/background-panel';
 import { screenToWorld } from '../../editor/camera';
-import { formatPressure, inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { formatPressure } from '@/lib/format/quantity';
 
 /** The swing plan, the ground and the plan's limits (nothing selected). */
 export function SceneSettings() {
