@@ -100,6 +100,7 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
   });
 
   const data = query.data;
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns fresh functions by design; we do not run the React Compiler
   const table = useReactTable({
     data: data?.items ?? [],
     columns,

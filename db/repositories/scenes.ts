@@ -2,7 +2,7 @@ import { sql, type Kysely } from 'kysely';
 import type { Database, SceneRow } from '../schema';
 import type { SceneStatus } from '@/lib/domain';
 import type { CurrentUser } from '@/lib/domain';
-import { canReadAllScenes } from '@/lib/auth/roles';
+import { mayReadAllScenes } from '@/lib/auth/permissions';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
 
@@ -54,7 +54,7 @@ function visibleTo(db: Db, user: CurrentUser) {
     .innerJoin('users', 'users.id', 'scenes.owner_id')
     .where('scenes.organisation_id', '=', user.organisationId)
     .where('scenes.deleted_at', 'is', null);
-  if (!canReadAllScenes(user.role)) {
+  if (!mayReadAllScenes(user)) {
     q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
   }
   return q;
