@@ -55,6 +55,8 @@ export interface SceneTable {
   equipment_profile_id: number | null;
   equipment_profile_version: number | null;
   in_training_set: Generated<number>;
+  location: string | null;
+  notes: string | null;
   created_at: Timestamp;
   updated_at: Timestamp;
   deleted_at: string | null;

@@ -1,28 +1,22 @@
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import type { Database, SceneRow, SceneStatus } from '../schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { canReadAllScenes } from '@/lib/auth/roles';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
 
-type Db = Kysely<Database>;
+import type { SceneSummary } from './scene-list';
 
-export interface SceneSummary {
-  id: number;
-  title: string;
-  status: SceneStatus;
-  revision: number;
-  ownerId: number;
-  ownerName: string;
-  updatedAt: string;
-  inTrainingSet: boolean;
-}
+export type { SceneSummary } from './scene-list';
+
+type Db = Kysely<Database>;
 
 export interface Scene extends SceneSummary {
   organisationId: number;
   document: Record<string, unknown>;
   equipmentProfileId: number | null;
   equipmentProfileVersion: number | null;
+  notes: string | null;
   createdAt: string;
 }
 
@@ -41,6 +35,8 @@ function toScene(row: SceneWithOwner): Scene {
     equipmentProfileId: row.equipment_profile_id,
     equipmentProfileVersion: row.equipment_profile_version,
     inTrainingSet: row.in_training_set === 1,
+    location: row.location,
+    notes: row.notes,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
   };
@@ -59,48 +55,6 @@ function visibleTo(db: Db, user: CurrentUser) {
   return q;
 }
 
-export interface ListScenesOptions {
-  page: number;
-  pageSize: number;
-  title?: string;
-  status?: SceneStatus;
-  sort?: 'updatedAt' | 'title' | 'status' | 'ownerName' | 'revision';
-  dir?: 'asc' | 'desc';
-}
-
-const SORT_COLUMNS = {
-  updatedAt: 'scenes.updated_at',
-  title: 'scenes.title',
-  status: 'scenes.status',
-  ownerName: 'users.name',
-  revision: 'scenes.revision',
-} as const;
-
-export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOptions) {
-  let q = visibleTo(db, user);
-  if (opts.title) q = q.where(sql<boolean>`instr(lower(scenes.title), ${opts.title.toLowerCase()}) > 0`);
-  if (opts.status) q = q.where('scenes.status', '=', opts.status);
-  const total = await q.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
-  const rows = await q
-    .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'users.name as owner_name'])
-    .orderBy(SORT_COLUMNS[opts.sort ?? 'updatedAt'], opts.dir ?? 'desc')
-    .orderBy('scenes.id', opts.dir ?? 'desc')
-    .limit(opts.pageSize)
-    .offset((opts.page - 1) * opts.pageSize)
-    .execute();
-  const items: SceneSummary[] = rows.map((r) => ({
-    id: r.id,
-    title: r.title,
-    status: r.status,
-    revision: r.revision,
-    ownerId: r.owner_id,
-    ownerName: r.owner_name,
-    updatedAt: r.updated_at,
-    inTrainingSet: r.in_training_set === 1,
-  }));
-  return { items, total: Number(total.n), page: opts.page, pageSize: opts.pageSize };
-}
-
 export async function getScene(db: Db, user: CurrentUser, id: number): Promise<Scene | undefined> {
   const row = await visibleTo(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
   return row ? toScene(row as SceneWithOwner) : undefined;
@@ -108,6 +62,8 @@ export async function getScene(db: Db, user: CurrentUser, id: number): Promise<S
 
 export interface NewSceneInput {
   title: string;
+  location?: string | null;
+  notes?: string | null;
   document: Record<string, unknown>;
   equipmentProfileId?: number | null;
   equipmentProfileVersion?: number | null;
@@ -124,6 +80,8 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
         organisation_id: user.organisationId,
         owner_id: user.id,
         title: input.title,
+        location: input.location ?? null,
+        notes: input.notes ?? null,
         document: doc,
         revision: 1,
         equipment_profile_id: input.equipmentProfileId ?? null,
@@ -142,6 +100,8 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
 export interface SceneChanges {
   revision: number;
   title?: string;
+  location?: string | null;
+  notes?: string | null;
   document?: Record<string, unknown>;
   status?: SceneStatus;
   equipmentProfileId?: number | null;
@@ -165,6 +125,8 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
         revision: next,
         updated_at: now,
         ...(changes.title !== undefined && { title: changes.title }),
+        ...(changes.location !== undefined && { location: changes.location }),
+        ...(changes.notes !== undefined && { notes: changes.notes }),
         ...(changes.status !== undefined && { status: changes.status }),
         ...(changes.document !== undefined && { document: JSON.stringify(changes.document) }),
         ...(changes.equipmentProfileId !== undefined && { equipment_profile_id: changes.equipmentProfileId }),
