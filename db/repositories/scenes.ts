@@ -4,6 +4,7 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { canReadAllScenes } from '@/lib/auth/roles';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
+import { compressedSnapshot } from './revision-storage';
 
 import type { SceneSummary } from './scene-list';
 
@@ -109,17 +110,29 @@ export interface SceneChanges {
 }
 
 /** `missing`: no such scene in the user's organisation (or it was deleted); nothing about it is revealed. */
-export type UpdateOutcome = { kind: 'ok'; scene: Scene } | { kind: 'stale'; current: number } | { kind: 'missing' };
+export type UpdateOutcome = { kind: 'ok'; revision: number; savedAt: string } | { kind: 'stale'; current: number } | { kind: 'missing' };
+
+/** What a save needs to know before it writes: who owns the scene, its status and pin. No document. */
+export async function sceneForSave(db: Db, user: CurrentUser, id: number) {
+  return db
+    .selectFrom('scenes')
+    .select(['owner_id as ownerId', 'status', 'revision', 'equipment_profile_id as equipmentProfileId'])
+    .where('id', '=', id)
+    .where('organisation_id', '=', user.organisationId)
+    .where('deleted_at', 'is', null)
+    .executeTakeFirst();
+}
 
 /**
  * Saves a new revision if `changes.revision` is the current one. The revision check and the write happen
- * in the same statement, so two saves based on the same revision cannot both win.
+ * in the same statement, so two saves based on the same revision cannot both win. The document is written
+ * once as JSON on the scene row; the revision row holds a compressed snapshot (db/repositories/revision-storage.ts).
  */
 export async function updateScene(db: Db, user: CurrentUser, id: number, changes: SceneChanges): Promise<UpdateOutcome> {
   return inTransaction(db, async (trx): Promise<UpdateOutcome> => {
     const now = new Date().toISOString();
     const next = changes.revision + 1;
-    const updated = await trx
+    const base = trx
       .updateTable('scenes')
       .set({
         revision: next,
@@ -135,9 +148,9 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       .where('id', '=', id)
       .where('organisation_id', '=', user.organisationId)
       .where('deleted_at', 'is', null)
-      .where('revision', '=', changes.revision)
-      .returning(['document'])
-      .executeTakeFirst();
+      .where('revision', '=', changes.revision);
+    // Only a save without a document (a rename) reads the stored one back, to snapshot it.
+    const updated = changes.document !== undefined ? await base.returning('id').executeTakeFirst() : await base.returning(['id', 'document']).executeTakeFirst();
     if (!updated) {
       const cur = await trx
         .selectFrom('scenes')
@@ -148,9 +161,10 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
         .executeTakeFirst();
       return cur ? { kind: 'stale', current: cur.revision } : { kind: 'missing' };
     }
+    const snapshot = changes.document ?? (updated as unknown as { document: Record<string, unknown> }).document;
     await trx
       .insertInto('scene_revisions')
-      .values({ scene_id: id, revision: next, document: JSON.stringify(updated.document), author_id: user.id, created_at: now })
+      .values({ scene_id: id, revision: next, document: compressedSnapshot(snapshot), author_id: user.id, created_at: now })
       .execute();
     await recordAudit(trx, {
       organisationId: user.organisationId,
@@ -159,7 +173,7 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       action: 'scene.update',
       detail: { revision: next, fields: changedFields(changes) },
     });
-    return { kind: 'ok', scene: (await getScene(trx, user, id))! };
+    return { kind: 'ok', revision: next, savedAt: now };
   });
 }
 

@@ -52,9 +52,11 @@ describe('updateScene', () => {
     const out = await updateScene(db, op, s.id, { revision: 1, document: doc(2), title: undefined });
     expect(out.kind).toBe('ok');
     if (out.kind !== 'ok') return;
-    expect(out.scene.revision).toBe(2);
-    expect(out.scene.title).toBe('Coil move');
-    expect(out.scene.document).toEqual(doc(2));
+    expect(out.revision).toBe(2);
+    const saved = (await getScene(db, op, s.id))!;
+    expect(saved.title).toBe('Coil move');
+    expect(saved.document).toEqual(doc(2));
+    expect(saved.updatedAt).toBe(out.savedAt);
     expect((await listRevisions(db, op.organisationId, s.id)).map((r) => r.revision)).toEqual([2, 1]);
     const stored = await db.selectFrom('scene_revisions').select('document').where('scene_id', '=', s.id).where('revision', '=', 2).executeTakeFirstOrThrow();
     expect(stored.document).toEqual(doc(2));
