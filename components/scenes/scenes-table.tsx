@@ -6,7 +6,7 @@ import Link from 'next/link';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
 import type { ScenePage, SceneSummary } from '@/db/repositories/scene-list';
-import { SCENE_STATUSES, type SceneStatus } from '@/db/schema';
+import { SCENE_STATUSES, type SceneStatus } from '@/lib/domain';
 import { StatusPill, statusLabel } from '@/components/ui/badge';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';

@@ -1,6 +1,6 @@
 import { sql, type Expression, type Kysely, type SqlBool } from 'kysely';
-import type { Database, SceneStatus } from '../schema';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { Database } from '../schema';
+import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { canReadAllScenes } from '@/lib/auth/roles';
 
 type Db = Kysely<Database>;

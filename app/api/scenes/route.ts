@@ -4,9 +4,9 @@ import { createScene } from '@/db/repositories/scenes';
 import { BadCursorError, listScenes } from '@/db/repositories/scene-list';
 import { HttpError } from '@/lib/api/errors';
 import { route } from '@/lib/api/route';
-import { scenePin } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/server/truck-pin';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
-import { emptySceneDocument } from '@/lib/scene-document';
+import { emptySceneDocument } from '@/lib/scene';
 
 export const runtime = 'nodejs';
 

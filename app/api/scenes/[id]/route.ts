@@ -4,7 +4,7 @@ import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repos
 import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
-import { scenePin } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
 
 export const runtime = 'nodejs';
