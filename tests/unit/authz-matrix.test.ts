@@ -19,6 +19,8 @@ import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
 import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
+import * as revisions from '@/app/api/scenes/[id]/revisions/route';
+import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
 import * as background from '@/app/api/scenes/[id]/background/route';
 import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { makePng } from '@/tests/fixtures/images';
@@ -224,6 +226,29 @@ const routes: MatrixRoute[] = [
       'Harrow: operator’s approved': [401, 200, 200, 200, 200, 404],
       'Harrow: peer’s draft': [401, 404, 422, 422, 422, 404],
       'Harrow: peer’s approved': [401, 422, 422, 422, 422, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    // Lists answer 200 for whoever may read the scene, with null figures where there is nothing to compute.
+    method: 'GET', path: '/api/scenes/[id]/revisions', handler: revisions.GET, checkId: false,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/revisions/[revision]', handler: revisionOne.GET, checkId: false,
+    params: (t) => ({ id: t.id!, revision: String(t.revision ?? 1) }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
       'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
       'Cobalt: scene': [401, 404, 404, 404, 404, 200],
       'unknown id': [401, 404, 404, 404, 404, 404],
