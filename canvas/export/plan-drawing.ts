@@ -8,7 +8,7 @@ import { obstacleFootprints, wireEnds } from '../shapes/obstacle/geometry';
 import { trailerFootprints } from '../shapes/trailer/geometry';
 import { boundsOf, type Polygon, type Pt } from '../geometry/vec';
 import { PAL } from '../view/palette';
-import { dualLength } from '@/lib/dual-units';
+import { dualLength } from '@/lib/format/dual';
 import type { UnitSystem } from '@/lib/units';
 import { chooseScale, clipPolygon, clipPolyline, toPaper } from './paper';
 import { placeLabels, type LabelRequest } from './labels';

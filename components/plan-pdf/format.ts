@@ -1,11 +1,20 @@
 import type { Check } from '@/lib/lift';
 import type { UnitSystem } from '@/lib/units';
-import { checkSentence } from '@/canvas/panels/results/check-sentence';
+import { STATUS_WORDS, describeCheck, tippingLineWords } from '@/lib/format/checks';
+import { formatNumber } from '@/lib/format/number';
 
-/** Words and figures of the plan document. Checks are worded by the app's one check formatter. */
-export const pct = (n: number | null | undefined, d = 1) => (n === null || n === undefined || !Number.isFinite(n) ? '-' : `${n.toFixed(d)} %`);
-export const deg = (n: number) => `${n.toFixed(1)}°`;
-export const checkWords = (c: Check, units: UnitSystem) => checkSentence(c, units);
+/** Words and figures of the plan document. Checks are worded by the app's one check formatter (lib/format/checks). */
+export const pct = (n: number | null | undefined, d = 1) => (n === null || n === undefined || !Number.isFinite(n) ? '-' : `${formatNumber(n, d)} %`);
+export const deg = (n: number) => `${formatNumber(n, 1)}°`;
+export const checkWords = (c: Check, units: UnitSystem) => describeCheck(c, units).sentence;
+export const checkStatus = (c: Check) => STATUS_WORDS[c.status].replace(/^./, (x) => x.toUpperCase());
+
+/** The governing tipping line in words ("left rear–right rear pads (rear line, RL-RR)"), from the stability check. */
+export function governingLineWords(checks: readonly Check[], code: string): string {
+  const c = checks.find((x) => x.code === 'stability' && !x.upperWeight);
+  const line = c?.subject.line;
+  return line ? tippingLineWords({ names: c.subject.names, side: line.side, code: line.code }) : code;
+}
 
 /** "2026-12-02 14:05 UTC" from an ISO timestamp: a document travels, so the zone is stated. */
 export function when(iso: string | null | undefined): string {

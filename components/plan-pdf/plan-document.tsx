@@ -5,7 +5,8 @@ import { PageFrame, planNumber } from './page-frame';
 import { EquipmentSection, GroundSection, LoadSection, RiggingSection } from './sections-setup';
 import { ChecksSection, ClearanceSection, StabilitySection } from './sections-checks';
 import { DetailsSection, SignOffSection } from './sections-details';
-import { pct } from './format';
+import { governingLineWords, pct } from './format';
+import { checksHeadline } from '@/lib/format/checks';
 import { s } from './styles';
 
 /** The lift plan document: the drawing first, then the set-up, the figures, the details and the sign-off. */
@@ -32,8 +33,7 @@ export function PlanDocument({ d }: { d: PlanData }) {
         )}
         {r && (
           <Text style={[s.p, { marginTop: 4 }]}>
-            Worst case {pct(r.worstCase.percentOfTipping)} of tipping at slew {r.worstCase.slew.toFixed(1)}° about tipping line {r.worstCase.line} (plan limit {d.doc.limits.percentOfTipping} %).{' '}
-            {r.checks.filter((c) => !c.ok).length === 0 ? 'Every check is within the plan’s limits.' : `${r.checks.filter((c) => !c.ok).length} check(s) over the plan’s limits: see "Every check".`}
+            Worst case {pct(r.worstCase.percentOfTipping)} of tipping at slew {r.worstCase.slew.toFixed(1)}° about the {governingLineWords(r.checks, r.worstCase.line)} (plan limit {d.doc.limits.percentOfTipping} %). {checksHeadline(r.checks)}.
           </Text>
         )}
         <View break>

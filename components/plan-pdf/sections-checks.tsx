@@ -1,9 +1,11 @@
 import { Text, View } from '@react-pdf/renderer';
-import { dualLength, dualMass } from '@/lib/dual-units';
+import { dualLength, dualMass } from '@/lib/format/dual';
 import type { PlanData } from './plan-data';
 import { StabilityChart } from './stability-chart';
 import { Table } from './table';
-import { checkWords, deg, pct } from './format';
+import { powerRuleWords } from '@/lib/format/checks';
+import { ftToM } from '@/lib/units';
+import { checkStatus, checkWords, deg, governingLineWords, pct } from './format';
 import { s } from './styles';
 
 /** Stability, clearances, power lines and every check in words: the server's figures for this revision. */
@@ -17,7 +19,7 @@ export function StabilitySection({ d }: { d: PlanData }) {
     <View>
       <Text style={s.h2} minPresenceAhead={60}>Stability</Text>
       <Text style={s.p}>
-        Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line {w.line}. The plan's limit is {limit} %
+        Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan's limit is {limit} %
         {w.percentOfTipping <= limit ? `, a margin of ${(limit - w.percentOfTipping).toFixed(1)} points.` : `; ${(w.percentOfTipping - limit).toFixed(1)} points over it.`}
         {w.tippingLoad !== null ? ` A hook load of ${dualMass(w.tippingLoad, u)} would reach the tipping point there.` : ''}
       </Text>
@@ -64,7 +66,7 @@ export function ClearanceSection({ d }: { d: PlanData }) {
             d.names[p.id] ?? p.id,
             `${dualLength(p.distance, u)} (${p.nearest}, slew ${deg(p.slew)})`,
             p.required === null ? 'set by the utility' : dualLength(p.required, u),
-            p.rule,
+            powerRuleWords(p.rule, p.rule.feet !== null ? dualLength(ftToM(p.rule.feet), u) : p.required !== null ? dualLength(p.required, u) : ''),
             p.required !== null && p.distance >= p.required ? 'within' : 'over',
           ])}
           tone={(i, j) => (j === 4 ? (r.powerLines[i].required !== null && r.powerLines[i].distance >= r.powerLines[i].required! ? 'within' : 'over') : null)}
@@ -82,7 +84,7 @@ export function ChecksSection({ d }: { d: PlanData }) {
       <Text style={s.h2} minPresenceAhead={60}>Every check</Text>
       {r.checks.map((c) => (
         <View key={c.id} style={{ flexDirection: 'row', marginBottom: 2 }} wrap={false}>
-          <Text style={[{ width: 62 }, c.ok ? s.within : s.over]}>{c.ok ? 'Within limit' : 'Over limit'}</Text>
+          <Text style={[{ width: 62 }, c.ok ? s.within : s.over]}>{checkStatus(c)}</Text>
           <Text style={{ flex: 1 }}>{checkWords(c, d.meta.units)}</Text>
         </View>
       ))}

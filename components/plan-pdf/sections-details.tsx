@@ -1,5 +1,5 @@
 import { Text, View } from '@react-pdf/renderer';
-import { dualSpeed } from '@/lib/dual-units';
+import { dualSpeed } from '@/lib/format/dual';
 import type { PlanData } from './plan-data';
 import { KeyValues, Table } from './table';
 import { localWhen, when, yesNo } from './format';

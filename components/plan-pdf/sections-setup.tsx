@@ -1,10 +1,10 @@
 import { Text, View } from '@react-pdf/renderer';
-import { dualArea, dualLength, dualMass, dualPressure } from '@/lib/dual-units';
+import { dualArea, dualLength, dualMass, dualPressure } from '@/lib/format/dual';
 import { WEIGHT_SOURCE_WORDS } from '@/lib/plan-details/schema';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
 import type { PlanData } from './plan-data';
 import { KeyValues, Table } from './table';
-import { deg, pct } from './format';
+import { checkWords, deg } from './format';
 import { s } from './styles';
 
 /** Equipment configuration, load, rigging and ground: the set-up the figures rest on. */
@@ -12,7 +12,7 @@ export function EquipmentSection({ d }: { d: PlanData }) {
   const u = d.meta.units;
   const t = d.truck;
   if (!t) return <Text style={s.p}>No truck is placed on this plan.</Text>;
-  const chart = d.result?.loadChart;
+  const chartCheck = d.result?.checks.find((c) => c.code === 'load-chart' && !c.upperWeight);
   return (
     <View>
       <Text style={s.h2} minPresenceAhead={60}>Equipment configuration</Text>
@@ -23,7 +23,7 @@ export function EquipmentSection({ d }: { d: PlanData }) {
           ['Hook radius', d.result ? dualLength(d.result.hook.radius, u) : '-'],
           ['Swing', `From slew ${deg(d.doc.swing.from)} (pick) to ${deg(d.doc.swing.to)} (set), ${d.doc.swing.direction === 'ccw' ? 'counter-clockwise' : 'clockwise'} seen from above`],
           ['Winch', d.winches.length ? d.winches.map((w) => `${w.name}: rated line pull ${dualMass(w.ratedLinePull, u)}, up to ${w.maxParts} parts of line`).join('; ') : 'None in the profile'],
-          ['Load chart use', chart ? (chart.percent === null ? `No rating: ${chart.reason}` : `${pct(chart.percent)} of the chart's rated ${dualMass(chart.rated ?? 0, u)} (read at ${dualLength(chart.radiusUsed ?? 0, u)} radius, ${dualLength(chart.boomLengthUsed ?? 0, u)} boom)`) : 'No load chart in the profile'],
+          ['Load chart use', chartCheck ? checkWords(chartCheck, u) : 'No load chart in the profile'],
         ]}
       />
       <Text style={s.h3} minPresenceAhead={40}>Outriggers</Text>
@@ -79,7 +79,7 @@ export function RiggingSection({ d }: { d: PlanData }) {
             `${r.pick.kind}, ${r.pick.legs} × ${r.pick.hitch}`,
             `${r.pick.angleFromHorizontal}° from horizontal`,
             r.capacityKg !== null ? dualMass(r.capacityKg, u) : dualMass(r.pick.ratingKg, u),
-            r.demandKg !== null && r.capacityKg ? pct((100 * r.demandKg) / r.capacityKg, 0) : '-',
+            r.demandKg !== null && r.capacityKg ? `${Math.round((100 * r.demandKg) / r.capacityKg)} %` : '-',
             r.lastInspection ? `${r.lastInspection}${r.nextDue ? ` (next due ${r.nextDue})` : ''}` : 'Not recorded',
           ])}
           tone={(i, j) => (j === 4 && d.rigging[i].demandKg !== null && d.rigging[i].capacityKg !== null ? (d.rigging[i].demandKg! > d.rigging[i].capacityKg! ? 'over' : null) : null)}
@@ -110,7 +110,7 @@ export function GroundSection({ d }: { d: PlanData }) {
         rows={r.reactions.maxima.map((m) => {
           const a = d.padAreas[m.support];
           const area = a ? (a.cribbing ? `${dualArea(a.cribbing, u)} cribbing` : `${dualArea(a.pad, u)} pad`) : '-';
-          return [m.support, `${dualMass(m.mass, u)} (${m.force.toFixed(1)} kN)`, deg(m.slew), area, dualPressure(m.pressure, u), pct((100 * m.pressure) / soil.allowable, 0)];
+          return [m.support, `${dualMass(m.mass, u)} (${m.force.toFixed(1)} kN)`, deg(m.slew), area, dualPressure(m.pressure, u), `${Math.round((100 * m.pressure) / soil.allowable)} %`];
         })}
         tone={(i, j) => (j === 5 && r.reactions.maxima[i].pressure > soil.allowable ? 'over' : null)}
       />

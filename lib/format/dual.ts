@@ -1,4 +1,5 @@
-import { formatForce, formatLength, formatMass, formatPressure, type UnitSystem } from './units';
+import type { UnitSystem } from '@/lib/units';
+import { formatForce, formatLength, formatMass, formatPressure } from './quantity';
 
 /**
  * A figure in the viewer's units with the other system in brackets, for documents that travel (the plan
