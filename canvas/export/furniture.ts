@@ -1,4 +1,4 @@
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 import { PAL } from '../view/palette';
 import { M_PER_FT, type UnitSystem } from '@/lib/units';
 import type { DrawItem } from './drawing-types';

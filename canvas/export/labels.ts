@@ -1,4 +1,4 @@
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 import type { DrawItem } from './drawing-types';
 
 export interface LabelRequest {

@@ -1,4 +1,4 @@
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 import type { UnitSystem } from '@/lib/units';
 
 /**

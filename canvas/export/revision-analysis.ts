@@ -1,8 +1,8 @@
 import { analyzeAtSlew, isLiftError, prepareLift, type LiftResult } from '@/lib/lift';
-import type { SceneDocument } from '../document/schema';
-import type { LiveAnalysis } from '../analysis/live-analysis';
-import { sceneToLiftInput } from '../analysis/scene-to-lift';
-import type { TruckModel } from '../truck/truck-model';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { LiveAnalysis } from '../analysis/live-analysis-types';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 
 /**
  * What the plan drawing needs besides the figures: the prepared lift (geometry) and a snapshot at the

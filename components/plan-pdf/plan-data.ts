@@ -1,14 +1,14 @@
 import type { LiftResult } from '@/lib/lift';
 import type { UnitSystem } from '@/lib/units';
 import type { PlanDetails } from '@/lib/plan-details/schema';
-import type { SceneDocument } from '@/canvas/document/schema';
-import type { LoadObject, RiggingPick, TruckObject } from '@/canvas/document/objects';
-import type { TruckProfileInput } from '@/canvas/truck/from-spec';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { LoadObject, RiggingPick, TruckObject } from '@/lib/scene/objects';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import { drawingAnalysis } from '@/canvas/export/revision-analysis';
-import { truckModelFromProfile } from '@/canvas/truck/from-spec';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 import { planDrawing } from '@/canvas/export/plan-drawing';
 import type { PlanDrawing } from '@/canvas/export/drawing-types';
-import { loadMass } from '@/canvas/shapes/load/geometry';
+import { loadMass } from '@/lib/scene/geometry/load';
 
 /** Everything the plan document shows, computed once on the server for one saved revision. */
 export interface PlanMeta {

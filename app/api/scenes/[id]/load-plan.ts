@@ -4,7 +4,7 @@ import { planDetailsAt } from '@/db/repositories/plan-details';
 import { HttpError } from '@/lib/api/errors';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { analyseSavedScene } from '@/lib/server/scene-analysis';
-import { parseSceneDocument } from '@/canvas/document/parse';
+import { parseSceneDocument } from '@/lib/scene/parse';
 import { buildPlanData, type PlanData, type PlanInputs } from '@/components/plan-pdf/plan-data';
 import { planRevision } from './plan-revision';
 
