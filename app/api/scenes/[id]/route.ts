@@ -1,11 +1,12 @@
 import { getDb } from '@/db';
 import { inTransaction } from '@/db/transaction';
-import { getScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
-import { mayDeleteScene, mayEditScene, rolesFor } from '@/lib/auth/permissions';
+import { mayDeleteScene, mayEditScene, mayReadScene, rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -20,8 +21,10 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
   // Read, ownership check and write in one transaction: nothing can change the scene in between.
   const outcome = await inTransaction(getDb(), async (trx) => {
-    const scene = await getScene(trx, user, params.id);
-    if (!scene) throw notFound();
+    // The few columns the checks need; the stored document is never read on a save.
+    const scene = await sceneForSave(trx, user, params.id);
+    // A scene this user may not even read is not found, as on GET.
+    if (!scene || !mayReadScene(user, scene)) throw notFound();
     if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit it');
     // The record names the profile version the saved sketch's truck is drawn from (lib/api/truck-pin).
     const pin = await scenePin(trx, user.organisationId, body, { keepProfileId: scene.equipmentProfileId });
@@ -38,7 +41,8 @@ export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body:
       { status: 409 },
     );
   }
-  return outcome.scene;
+  scheduleThinning(getDb(), params.id);
+  return { revision: outcome.revision, savedAt: outcome.savedAt };
 });
 
 export const DELETE = route({ roles: rolesFor('deleteScene'), params: idParams }, async ({ user, params }) => {
