@@ -1,6 +1,7 @@
 import type { SceneDocument } from '../document/schema';
 import type { TruckObject } from '../document/objects';
-import { DEG, bearing, wrap360, type Pt } from '../geometry/vec';
+import { wrap360 } from '@/lib/angles';
+import { DEG, bearing, type Pt } from '../geometry/vec';
 import type { TruckModel } from '../truck/truck-model';
 
 /** Slew angle (truck frame) that points the boom at a site point. */
