@@ -34,3 +34,15 @@ export function headlineFigures(r: Pick<LiftResult, 'worstCase' | 'reactions' | 
     leastClearanceTarget: gap?.target ?? null,
   };
 }
+
+/** One save on the revision timeline (GET /api/scenes/{id}/revisions). */
+export interface RevisionSummary {
+  revision: number;
+  savedAt: string;
+  author: string;
+  /** The scene's status for its latest revision; "superseded" for every earlier one. */
+  status: string;
+  /** Headline figures, or null when the engine had nothing to compute (see `problem`). */
+  figures: HeadlineFigures | null;
+  problem: { code: string; message: string } | null;
+}
