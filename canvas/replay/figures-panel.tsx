@@ -2,6 +2,7 @@
 import { useEditorState } from '../editor-context';
 import { formatLength, formatPressure } from '@/lib/units';
 import { cx } from '@/components/ui/cx';
+import { clearanceFigure } from '@/lib/replay/headline-figures';
 
 const pct = (v: number) => `${v.toFixed(1)} %`;
 
@@ -26,7 +27,7 @@ export function FiguresPanel({ big = false, hidden = false }: { big?: boolean; h
   const over = governing ? governing.percentOfTipping > doc.limits.percentOfTipping : true;
   let gap: { value: number; target: string } | null = null;
   for (const c of snap.clearances) {
-    const v = c.overlapsInPlan ? c.vertical : c.horizontal;
+    const v = clearanceFigure(c);
     if (!gap || v < gap.value) gap = { value: v, target: c.target };
   }
   const allow = doc.soil.allowable;

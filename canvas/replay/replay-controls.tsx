@@ -3,14 +3,15 @@ import { SPEEDS, MAX_SPEED, MIN_SPEED } from '@/lib/replay/playback-clock';
 import type { Playback } from './use-playback';
 import { cx } from '@/components/ui/cx';
 
-const btn = 'inline-flex min-h-touch items-center justify-center rounded-plate border-2 border-ink bg-paper-raised px-3 font-semibold hover:bg-paper-sunk';
+const shape = 'inline-flex min-h-touch items-center justify-center rounded-plate border-2 border-ink px-3 font-semibold';
+const btn = `${shape} bg-paper-raised hover:bg-paper-sunk`;
 
 /** Play/pause, step, worst case, speed, loop and a position slider along the planned arc. */
 export function ReplayControls({ playback, rate, canWorst }: { playback: Playback; rate: number; canWorst: boolean }) {
   const c = playback.clock;
   return (
     <div className="flex flex-wrap items-center gap-2" data-testid="replay-controls">
-      <button type="button" className={cx(btn, 'min-w-24 bg-ink text-paper-raised hover:bg-ink-soft')} onClick={playback.toggle} aria-keyshortcuts="Space">
+      <button type="button" className={cx(shape, 'min-w-24 bg-ink text-paper-raised hover:bg-ink-soft')} data-testid="play-pause" onClick={playback.toggle} aria-keyshortcuts="Space">
         {c.playing ? 'Pause' : 'Play'}
       </button>
       <button type="button" className={btn} onClick={() => playback.step(-1)} aria-label="One degree back" aria-keyshortcuts="ArrowLeft">
