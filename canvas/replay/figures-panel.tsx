@@ -1,6 +1,6 @@
 'use client';
 import { useEditorState } from '../editor-context';
-import { formatLength, formatPressure } from '@/lib/units';
+import { formatLength, formatPressure } from '@/lib/format/quantity';
 import { cx } from '@/components/ui/cx';
 import { clearanceFigure } from '@/lib/replay/headline-figures';
 

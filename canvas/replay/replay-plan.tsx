@@ -12,7 +12,7 @@ import { zoomAround } from '../editor/camera';
 import { useFontGeneration } from '../view/use-font-generation';
 import type { Editor } from '../editor/editor';
 import type { EditorStore } from '../store/editor-store';
-import type { TruckObject } from '../document/objects';
+import type { TruckObject } from '@/lib/scene/objects';
 
 /**
  * The replay's plan, drawn with the editor's own shapes. Layers by how often they change: the grid and

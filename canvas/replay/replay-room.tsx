@@ -4,12 +4,12 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useStore } from 'zustand';
 import { createEditorStore } from '../store/editor-store';
-import { Editor } from '../editor/editor';
+import { createEditor } from '../editor/create-editor';
 import { EditorContext } from '../editor-context';
 import { attachLiveAnalysis } from '../analysis/live-analysis';
 import { fitToScene } from '../editor/actions';
-import type { SceneDocument } from '../document/schema';
-import type { TruckProfileInput } from '../truck/from-spec';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { RevisionSummary } from '@/lib/replay/headline-figures';
 import { SPEED_KEYS, profileSlewRate, DEFAULT_SLEW_DEG_PER_S } from '@/lib/replay/playback-clock';
@@ -52,7 +52,7 @@ export function ReplayRoom(props: ReplayRoomProps) {
   const router = useRouter();
   const make = (doc: SceneDocument, revision: number) => {
     const store = createEditorStore({ sceneId: props.scene.id, document: doc, revision, readOnly: true, units: props.units, profiles: props.profiles });
-    return { store, editor: new Editor(store) };
+    return { store, editor: createEditor(store) };
   };
   const [ctx] = useState(() => make(props.document, props.revision));
   const [ghost] = useState(() => (props.compare ? make(props.compare.document, props.compare.revision) : null));

@@ -2,7 +2,8 @@
 import Link from 'next/link';
 import type { RevisionSummary } from '@/lib/replay/headline-figures';
 import type { HeadlineFigures } from '@/lib/replay/headline-figures';
-import { formatLength, formatPressure, type UnitSystem } from '@/lib/units';
+import { formatLength, formatPressure } from '@/lib/format/quantity';
+import type { UnitSystem } from '@/lib/units';
 import { cx } from '@/components/ui/cx';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });

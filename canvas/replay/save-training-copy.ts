@@ -1,6 +1,6 @@
 'use client';
 import { useState } from 'react';
-import type { SceneDocument } from '../document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 
 type SaveState = { kind: 'idle' } | { kind: 'saving' } | { kind: 'saved'; id: number } | { kind: 'error'; message: string };
 

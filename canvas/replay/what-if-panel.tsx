@@ -1,9 +1,9 @@
 'use client';
 import { useState } from 'react';
 import { KG_PER_LB, M_PER_FT, type UnitSystem } from '@/lib/units';
-import type { SceneDocument } from '../document/schema';
-import type { LoadObject, TruckObject } from '../document/objects';
-import { loadMass } from '../shapes/load/geometry';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { LoadObject, TruckObject } from '@/lib/scene/objects';
+import { loadMass } from '@/lib/scene/geometry/load';
 import type { WhatIf } from './what-if';
 
 const field = 'min-h-touch w-24 rounded-plate border-2 border-ink bg-paper-raised px-2 tabular-nums';

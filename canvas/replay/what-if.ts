@@ -1,4 +1,4 @@
-import type { SceneDocument } from '../document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 
 /** What a trainer may change in the sandbox; anything left out keeps the saved value. */
 export interface WhatIf {

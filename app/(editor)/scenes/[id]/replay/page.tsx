@@ -9,10 +9,10 @@ import { canWriteLessons } from '@/lib/auth/roles';
 import { idParams } from '@/lib/api/route';
 import { pathId } from '@/lib/validations/path-id';
 import { listRevisionSummaries } from '@/lib/server/scene-revisions';
-import { parseSceneDocument } from '@/canvas/document/parse';
-import { loadSceneProfiles } from '@/canvas/truck/load-profiles';
+import { parseSceneDocument } from '@/lib/scene/parse';
+import { loadSceneProfiles } from '@/lib/server/load-profiles';
 import { ReplayLoader } from '@/canvas/replay/replay-loader';
-import type { SceneDocument } from '@/canvas/document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 
 export const metadata: Metadata = { title: 'Replay' };
 

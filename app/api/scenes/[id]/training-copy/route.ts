@@ -4,7 +4,7 @@ import { inTransaction } from '@/db/transaction';
 import { createScene, getScene, setTrainingSet } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
-import { scenePin } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/server/truck-pin';
 import { LESSON_WRITERS } from '@/lib/auth/roles';
 import { sceneDocument, sceneTitle } from '@/lib/validations/scenes';
 
