@@ -24,3 +24,4 @@ export * from './result';
 export * from './analyze';
 export * from './at-slew';
 export * from './search';
+export * from './names';

@@ -47,9 +47,12 @@ const point2 = z.object({ x: siteCoord, y: siteCoord });
 const point3 = z.object({ x: siteCoord, y: siteCoord, z: heightM });
 const truckPoint3 = z.object({ x: truckCoord, y: truckCoord, z: heightM });
 const id = z.string().min(1).max(64);
+/** What a person calls the object (a label typed in the editor, "left rear"); results show it instead of the id. */
+const name = z.string().max(120).optional();
 
 export const supportSchema = z.object({
   id,
+  name,
   x: truckCoord,
   y: truckCoord,
   /** Pad (or tyre contact) area on the ground, m². */
@@ -111,6 +114,7 @@ export const swingSchema = z.object({
 
 export const prismSchema = z.object({
   id,
+  name,
   polygon: z.array(point2).min(3).max(256),
   /** Height of its top above the ground, m. */
   top: within(0, RANGE.height, 'm'),
@@ -118,6 +122,7 @@ export const prismSchema = z.object({
 
 export const powerLineSchema = z.object({
   id,
+  name,
   a: point3,
   b: point3,
   /** Nominal phase-to-phase voltage; null when unknown. */
@@ -133,6 +138,7 @@ export const roundSlingColours = ['purple', 'green', 'yellow', 'tan', 'red', 'wh
 
 export const slingSchema = z.object({
   id,
+  name,
   /** Vertical rated capacity, kg. Give this or a round-sling colour. */
   verticalRating: pos.optional(),
   colour: z.enum(roundSlingColours).optional(),
@@ -146,6 +152,7 @@ export const slingSchema = z.object({
 
 export const shackleSchema = z.object({
   id,
+  name,
   /** Nominal size code, e.g. "5/8" or "1-1/4" (inches). Give this or wll. */
   size: z.string().optional(),
   /** Working load limit, kg. */
