@@ -20,7 +20,7 @@ function drawing(units: 'imperial' | 'metric') {
   return { result, d: planDrawing({ doc: coil.document, model, analysis: drawingAnalysis(coil.document, model, result)!, names: lift.names, units, width: 540, height: 540 })! };
 }
 
-describe('plan drawing export', () => {
+describe('plan drawing export', { timeout: 60_000 }, () => {
   it('states a ratio scale that maps metres to paper exactly (1 in = 72 pt)', () => {
     // 30 m across 540 pt needs at least 1:157; the imperial series offers 1:240 (1 in = 20 ft).
     const s = chooseScale(30, 10, 540, 540, 'imperial');
