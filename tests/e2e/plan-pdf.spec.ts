@@ -9,10 +9,12 @@ async function coilId(page: Page): Promise<number> {
 }
 
 test('the operator downloads the lift plan PDF and the drawing from the editor, and edits the plan details', async ({ page }) => {
+  // The server renders the PDF and the editor loads its canvas: generous on a machine shared with other builds.
+  test.setTimeout(240_000);
   await signIn(page, 'operator@harrow.example');
   const id = await coilId(page);
   await page.goto(`/scenes/${id}`);
-  await expect(page.getByTestId('results-summary')).toBeVisible();
+  await expect(page.getByTestId('results-summary')).toBeVisible({ timeout: 90_000 });
 
   const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByTestId('editor-download-plan').click()]);
   expect(pdf.suggestedFilename()).toMatch(/^lift-plan-AL-\d+-rev\d+\.pdf$/);
@@ -39,7 +41,7 @@ test('the operator downloads the lift plan PDF and the drawing from the editor, 
   await screens(page, 'plan-details');
   await page.getByLabel('Customer').fill('Harbour Freight Lines (demo)');
   await page.getByRole('button', { name: 'Save plan details' }).click();
-  await expect(page.getByText(/Saved as revision \d+/)).toBeVisible();
+  await expect(page.getByText(/Saved as revision \d+/)).toBeVisible({ timeout: 30_000 });
   const saved = await (await page.request.get(`/api/scenes/${id}/details`)).json();
   expect(saved.details.job.customer).toBe('Harbour Freight Lines (demo)');
   await expect(page.getByTestId('download-plan-pdf')).toHaveAttribute('href', `/api/scenes/${id}/plan.pdf`);
