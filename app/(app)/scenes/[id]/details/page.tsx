@@ -52,6 +52,9 @@ export default async function SceneDetailsPage({ params }: Props) {
             <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
               Open in editor
             </ButtonLink>
+            <ButtonLink href={`/scenes/${scene.id}/replay`} variant="secondary" size="lg">
+              Replay
+            </ButtonLink>
             <ButtonLink href={`/scenes/${scene.id}/plan`} variant="secondary" size="lg">
               Plan details
             </ButtonLink>
