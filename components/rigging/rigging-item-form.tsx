@@ -10,7 +10,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
-import { CHAIN_GRADES, CHAIN_SIZES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
+import { LIFTING_CHAIN_CHOICES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
 import { formatMass, type UnitSystem } from '@/lib/units';
 import { UnitInput } from '@/components/equipment/unit-input';
@@ -66,11 +66,15 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
     ) : kind === 'chain' ? (
       <SelectField label="Chain size and grade" disabled={readOnly} {...register('size')}>
         <option value="">Choose size and grade</option>
-        {CHAIN_GRADES.flatMap((g) => CHAIN_SIZES.map((s) => `${s} in grade ${g}`)).map((v) => (
+        {LIFTING_CHAIN_CHOICES.map((v) => (
           <option key={v} value={v}>
             {v}
           </option>
         ))}
+        {/* A row stored before the lifting rules keeps its size, shown as it was. */}
+        {initial.kind === 'chain' && initial.size && !LIFTING_CHAIN_CHOICES.includes(initial.size) && (
+          <option value={initial.size}>{initial.size} (not a lifting chain)</option>
+        )}
       </SelectField>
     ) : (
       <TextField label="Size / description" disabled={readOnly} error={err('size')} {...register('size')} />

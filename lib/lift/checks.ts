@@ -73,12 +73,19 @@ export function powerLineCheck(pl: PowerLineClearance): Check {
   };
 }
 
+const RIGGING_NAMES: Record<RiggingVerdict['element'], string> = { sling: 'Sling', shackle: 'Shackle', hook: 'Hook', 'snatch-block': 'Snatch block', winch: 'Winch' };
+
 export function riggingCheck(r: RiggingVerdict, label = ''): Check {
+  const id = `rigging:${r.element}:${r.id}${label ? ':upper-weight' : ''}`;
+  if (r.refused) {
+    return { id, ok: false, value: r.demand, limit: null, unit: 'kg', reason: `${label}${RIGGING_NAMES[r.element]} ${r.id} is not lifting rigging: ${r.refused} It cannot carry the ${f(r.demand, 0)} kg; over limit.` };
+  }
   const ok = r.demand <= r.capacity;
-  const what = r.element === 'winch' ? `Line pull on the winch is ${f(r.demand, 0)} kg against a rated pull of` : `${r.element === 'sling' ? 'Sling' : 'Shackle'} ${r.id} carries ${f(r.demand, 0)} kg against a capacity of`;
+  const what = r.element === 'winch' ? `Line pull on the winch is ${f(r.demand, 0)} kg against a rated pull of` : `${RIGGING_NAMES[r.element]} ${r.id} carries ${f(r.demand, 0)} kg against a capacity of`;
+  const notes = [...r.assumptions, ...r.warnings].map((n) => ` ${n}`).join('');
   return {
-    id: `rigging:${r.element}:${r.id}${label ? ':upper-weight' : ''}`, ok, value: r.demand, limit: r.capacity, unit: 'kg',
-    reason: `${label}${what} ${f(r.capacity, 0)} kg (${r.detail}); ${verdict(ok)}, ${f((100 * r.demand) / r.capacity, 0)} % used.`,
+    id, ok, value: r.demand, limit: r.capacity, unit: 'kg',
+    reason: `${label}${what} ${f(r.capacity, 0)} kg (${r.detail}); ${verdict(ok)}, ${f((100 * r.demand) / r.capacity, 0)} % used.${notes}`,
   };
 }
 

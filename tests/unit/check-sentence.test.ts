@@ -54,7 +54,7 @@ describe('check sentences in the imperial view', () => {
   });
 
   it('kg: a sling carrying exactly 20,000 lb against 24,000 lb', () => {
-    const c = riggingCheck({ id: 'HR-RS-06', element: 'sling', demand: 20000 * KG_PER_LB, capacity: 24000 * KG_PER_LB, detail: '2 × round sling, basket hitch at 60° from horizontal' });
+    const c = riggingCheck({ id: 'HR-RS-06', element: 'sling', demand: 20000 * KG_PER_LB, capacity: 24000 * KG_PER_LB, detail: '2 × round sling, basket hitch at 60° from horizontal', ratingSource: 'the tag', assumptions: [], warnings: [], refused: null });
     expect(c.reason).toBe('Sling HR-RS-06 carries 9,072 kg against a capacity of 10,886 kg (2 × round sling, basket hitch at 60° from horizontal); within limit, 83 % used.');
     expect(checkSentence(c, 'imperial')).toBe('Sling HR-RS-06 carries 20,000 lb against a capacity of 24,000 lb (2 × round sling, basket hitch at 60° from horizontal); within limit, 83 % used.');
   });
@@ -76,7 +76,7 @@ describe('check sentences in the imperial view', () => {
   });
 
   it('the metric view shows the engine’s sentence as written', () => {
-    const c = riggingCheck({ id: 'HR-SH-01', element: 'shackle', demand: 2000, capacity: 3250, detail: '5/8 in shackle, one of 2' });
+    const c = riggingCheck({ id: 'HR-SH-01', element: 'shackle', demand: 2000, capacity: 3250, detail: '5/8 in shackle, one of 2', ratingSource: 'the tag', assumptions: [], warnings: [], refused: null });
     expect(checkSentence(c, 'metric')).toBe(c.reason);
   });
 });
