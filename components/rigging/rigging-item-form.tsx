@@ -11,6 +11,7 @@ import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { LIFTING_CHAIN_CHOICES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
+import { liftingUse } from '@/lib/lift/ratings/lifting-use';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
 import { formatMass, type UnitSystem } from '@/lib/units';
 import { UnitInput } from '@/components/equipment/unit-input';
@@ -23,6 +24,8 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
   const kind = useWatch({ control, name: 'kind' });
   const size = useWatch({ control, name: 'size' }) ?? '';
   const std = standardRating(kind, size);
+  // Say why before the save is refused; a size not chosen yet is not a refusal.
+  const refusal = kind === 'recovery-strap' || size ? liftingUse(kind, size) : null;
   const r = initial.ratings;
   const [manual, setManual] = useState(!!id && !!r && r.vertical !== null && !(std && Math.abs((r.vertical ?? 0) - std.vertical) < 0.01));
   const [serverError, setServerError] = useState<string | null>(null);
@@ -94,6 +97,12 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
         {sizeField}
         <Controller control={control} name="length" render={({ field }) => <UnitInput label="Length (blank if it does not apply)" quantity="length" units={units} value={field.value ?? null} onChange={field.onChange} disabled={readOnly} error={err('length')} />} />
       </div>
+      {refusal && (
+        <Notice tone="warning" title="Not lifting rigging">
+          <span data-testid="form-not-lifting">{refusal.reason}</span>
+          {id ? ' A row stored before this rule can be saved with its kind and size unchanged; it stays flagged.' : ' It cannot be added to the rigging inventory.'}
+        </Notice>
+      )}
       <fieldset className="space-y-3 rounded-plate border border-paper-line p-3">
         <legend className="px-1 text-label font-bold">Ratings by hitch</legend>
         {std && !manual && (
