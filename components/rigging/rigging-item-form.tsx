@@ -13,7 +13,8 @@ import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { LIFTING_CHAIN_CHOICES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
 import { liftingUse } from '@/lib/lift/ratings/lifting-use';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
-import { formatMass, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatMass } from '@/lib/format/quantity';
 import { UnitInput } from '@/components/equipment/unit-input';
 import { KIND_LABEL, STATUS_LABEL } from './labels';
 

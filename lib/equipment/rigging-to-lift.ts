@@ -43,6 +43,7 @@ function sling(p: RiggingPickLike): NonNullable<RiggingIn['slings']>[number] {
   const chain = p.kind === 'chain' ? parseChain(p.size ?? '') : null;
   return {
     id: p.tag,
+    name: p.tag,
     material: MATERIAL[p.kind] ?? 'other',
     verticalRating: opt(r?.vertical) ?? p.ratingKg,
     chokerRating: opt(r?.choker) ?? only('choker'),
@@ -63,9 +64,9 @@ export function picksToRigging(picks: readonly RiggingPickLike[]): RiggingIn {
   const own = new Set(['shackle', 'hook', 'snatch-block']);
   return {
     slings: picks.filter((p) => !own.has(p.kind)).map(sling),
-    shackles: of('shackle').map((p) => ({ id: p.tag, wll: wllOf(p), legs: p.legs, angleFromHorizontal: p.angleFromHorizontal })),
-    hooks: of('hook').map((p) => ({ id: p.tag, wll: wllOf(p), legs: p.legs, angleFromHorizontal: p.angleFromHorizontal })),
-    snatchBlocks: of('snatch-block').map((p) => ({ id: p.tag, wll: wllOf(p), lineAngle: opt(p.lineAngle) })),
+    shackles: of('shackle').map((p) => ({ id: p.tag, name: p.tag, wll: wllOf(p), legs: p.legs, angleFromHorizontal: p.angleFromHorizontal })),
+    hooks: of('hook').map((p) => ({ id: p.tag, name: p.tag, wll: wllOf(p), legs: p.legs, angleFromHorizontal: p.angleFromHorizontal })),
+    snatchBlocks: of('snatch-block').map((p) => ({ id: p.tag, name: p.tag, wll: wllOf(p), lineAngle: opt(p.lineAngle) })),
   };
 }
 

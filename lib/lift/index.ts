@@ -25,3 +25,4 @@ export * from './result';
 export * from './analyze';
 export * from './at-slew';
 export * from './search';
+export * from './names';

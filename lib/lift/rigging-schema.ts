@@ -8,6 +8,8 @@ import { slingMaterials } from './ratings/hitch';
  */
 const pos = z.number().positive();
 const id = z.string().min(1).max(64);
+/** What a person calls the item (its tag); results show it instead of the id. */
+const name = z.string().max(120).optional();
 /** Leg angle from horizontal, degrees; 90 = straight up. */
 const legAngle = z.number().gt(0).max(90).default(90);
 /** Legs in the assembly; at most three are counted as carrying the load (ASME B30.9, OSHA 1910.184). */
@@ -15,6 +17,7 @@ const legs = z.number().int().min(1).max(8).default(1);
 
 export const slingSchema = z.object({
   id,
+  name,
   /** What the sling is made of; picks the hitch factors, the chain table and the D/d table. */
   material: z.enum(slingMaterials).default('other'),
   /** Vertical rated capacity from the tag, kg. Give this, a round-sling colour or a chain grade and size. */
@@ -37,6 +40,7 @@ export const slingSchema = z.object({
 
 export const shackleSchema = z.object({
   id,
+  name,
   /** Nominal size code, e.g. "5/8" or "1-1/4" (inches). Give this or wll. */
   size: z.string().max(20).optional(),
   /** Working load limit, kg. */
@@ -48,6 +52,7 @@ export const shackleSchema = z.object({
 
 export const hookSchema = z.object({
   id,
+  name,
   /** Working load limit marked on the hook, kg. */
   wll: pos,
   /** 1 for the master hook that carries the whole load; a leg hook takes its leg's tension. */
@@ -57,6 +62,7 @@ export const hookSchema = z.object({
 
 export const snatchBlockSchema = z.object({
   id,
+  name,
   /** Working load limit of the block, kg. */
   wll: pos,
   /** Angle between the two parts of line at the block, degrees: 0 = parallel (load 2T), 180 = straight. */

@@ -1,8 +1,8 @@
 import { KG_PER_LB } from '@/lib/units';
 import { LiftError } from './errors';
-import { alloyChainRow, chainGradeUse, chainSizeUse, RECOVERY_STRAP } from './ratings';
+import { alloyChainRow, chainGradeUse, chainSizeUse, RECOVERY_STRAP, type NotForLifting } from './ratings';
 import { chokeAngleFactor } from './ratings/choke-angle';
-import { hitchRow } from './ratings/hitch';
+import { hitchRow, type SlingMaterial } from './ratings/hitch';
 import { roundSlingRow } from './ratings/round-sling';
 import { describeSource } from './ratings/source';
 import { basketBendFactor, BASKET_RATED_AT } from './ratings/wire-rope-bend';
@@ -27,9 +27,21 @@ export interface SlingRating {
   /** The rating in the chosen hitch for one sling, vertical legs, kg. */
   hitchRating: number;
   ratingSource: string;
-  assumptions: string[];
-  warnings: string[];
-  refused: string | null;
+  material: SlingMaterial;
+  legsCounted: number;
+  /** Choker: the angle used, its factor, and whether a free-hanging choke was assumed (no angle given). */
+  choke: { angle: number; factor: number; assumed: boolean } | null;
+  /** Basket with a D/d: the factor applied, or null where the material has no D/d table. */
+  bend: { ratio: number; factor: number | null } | null;
+  /** Leg angle under 30° from horizontal. */
+  lowAngle: boolean;
+  refused: Refusal | null;
+}
+
+/** Why an item is not lifting rigging: a stable code and the reason in words. */
+export interface Refusal {
+  code: NotForLifting['code'];
+  reason: string;
 }
 
 interface Base {
@@ -41,11 +53,11 @@ interface Base {
 
 const lb = (x: number) => x * KG_PER_LB;
 
-function baseRating(s: SlingInput): Base | { refused: string } {
-  if (s.material === 'recovery-strap') return { refused: RECOVERY_STRAP.reason };
+function baseRating(s: SlingInput): Base | { refused: Refusal } {
+  if (s.material === 'recovery-strap') return { refused: RECOVERY_STRAP };
   if (s.material === 'chain') {
     const no = chainGradeUse(s.grade) ?? chainSizeUse(s.grade!, s.size ?? null);
-    if (no) return { refused: no.reason };
+    if (no) return { refused: no };
     const row = alloyChainRow(s.grade!, s.size!)!;
     const table = { vertical: lb(row.lb), source: `grade ${row.grade} ${row.size} in: ${row.lb.toLocaleString('en-US')} lb, ${describeSource(row.source)}` };
     // A tag lower than the table governs (a worn or derated sling); never a tag above it.
@@ -64,38 +76,34 @@ export const withSlingDefaults = (raw: SlingInputIn): SlingInput => ({ material:
 
 export function slingRating(raw: SlingInputIn): SlingRating {
   const s = withSlingDefaults(raw);
-  const base = baseRating(s);
-  if ('refused' in base) return { capacity: 0, hitchRating: 0, ratingSource: 'none', assumptions: [], warnings: [], refused: base.refused };
   const material = s.colour ? 'round-sling' : s.material;
+  const none = { material, legsCounted: loadLegs(s.legs), choke: null, bend: null, lowAngle: s.angleFromHorizontal < LOW_SLING_ANGLE };
+  const base = baseRating(s);
+  if ('refused' in base) return { ...none, capacity: 0, hitchRating: 0, ratingSource: 'none', refused: base.refused };
   const factors = hitchRow(material);
-  const assumptions: string[] = [];
   const sources = [base.source];
   let rating = base.vertical;
+  let choke: SlingRating['choke'] = null;
+  let bend: SlingRating['bend'] = null;
   if (s.hitch === 'choker') {
-    const choke = chokeAngleFactor(s.chokeAngle);
-    rating = (base.choker ?? base.vertical * factors.choker) * choke.factor;
+    const c = chokeAngleFactor(s.chokeAngle);
+    choke = { angle: c.angle, factor: c.factor, assumed: c.assumed };
+    rating = (base.choker ?? base.vertical * factors.choker) * c.factor;
     if (base.choker === undefined) sources.push(`choker ${factors.choker} × vertical, ${describeSource(factors.chokerSource)}`);
-    sources.push(`choke angle ${choke.band.label} × ${choke.factor.toFixed(2)}, ${describeSource(choke.band.source)}`);
-    if (choke.assumed) assumptions.push(`No choke angle given: a free-hanging choke (about ${choke.angle}°, factor ${choke.factor.toFixed(2)}) is assumed.`);
+    sources.push(`choke angle ${c.band.label} × ${c.factor.toFixed(2)}, ${describeSource(c.band.source)}`);
   } else if (s.hitch === 'basket') {
     rating = base.basket ?? base.vertical * factors.basket;
     if (base.basket === undefined) sources.push(`basket ${factors.basket} × vertical, ${describeSource(factors.basketSource)}`);
     if (s.bendRatio !== undefined && material === 'wire-rope') {
-      const bend = basketBendFactor(s.bendRatio);
-      rating *= bend.factor;
-      sources.push(bend.row ? `D/d ${s.bendRatio} × ${bend.factor.toFixed(3)} (efficiency at D/d ${bend.row.ratio} ÷ at ${BASKET_RATED_AT}), ${describeSource(bend.row.source)}` : `D/d ${s.bendRatio} is below the table: no rating`);
+      const b = basketBendFactor(s.bendRatio);
+      rating *= b.factor;
+      bend = { ratio: s.bendRatio, factor: b.factor };
+      sources.push(b.row ? `D/d ${s.bendRatio} × ${b.factor.toFixed(3)} (efficiency at D/d ${b.row.ratio} ÷ at ${BASKET_RATED_AT}), ${describeSource(b.row.source)}` : `D/d ${s.bendRatio} is below the table: no rating`);
     } else if (s.bendRatio !== undefined) {
-      assumptions.push(`No D/d reduction table for this material: the basket rating is used as given at D/d ${s.bendRatio}.`);
+      bend = { ratio: s.bendRatio, factor: null };
     }
   }
-  const legsCounted = loadLegs(s.legs);
-  if (s.legs > MAX_LOAD_LEGS) assumptions.push(`${s.legs} legs are rated as ${MAX_LOAD_LEGS} carrying the load (ASME B30.9, OSHA 1910.184).`);
-  const warnings = s.angleFromHorizontal < LOW_SLING_ANGLE ? [lowAngleWarning(s.angleFromHorizontal)] : [];
-  return { capacity: rating * sinDeg(s.angleFromHorizontal) * legsCounted, hitchRating: rating, ratingSource: sources.join('; '), assumptions, warnings, refused: null };
-}
-
-export function lowAngleWarning(angle: number): string {
-  return `Leg angle ${angle}° from horizontal is under ${LOW_SLING_ANGLE}°: each leg pulls ${(1 / sinDeg(angle)).toFixed(2)} × its share of the load; avoid angles under ${LOW_SLING_ANGLE}° (ASME B30.9 guidance).`;
+  return { ...none, choke, bend, capacity: rating * sinDeg(s.angleFromHorizontal) * none.legsCounted, hitchRating: rating, ratingSource: sources.join('; '), refused: null };
 }
 
 export function slingCapacity(s: SlingInputIn): number {

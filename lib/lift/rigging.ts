@@ -1,9 +1,10 @@
 import { KG_PER_LB } from '@/lib/units';
 import { LiftError } from './errors';
+import type { SlingMaterial } from './ratings/hitch';
 import { shackleRow } from './ratings/shackle';
 import { describeSource } from './ratings/source';
-import type { HookInput, Rigging, ShackleInput, SlingInputIn, SnatchBlockInput, WinchInput } from './rigging-schema';
-import { loadLegs, lowAngleWarning, LOW_SLING_ANGLE, MAX_LOAD_LEGS, sinDeg, slingRating, withSlingDefaults } from './rigging-sling';
+import type { HookInput, Rigging, ShackleInput, SlingInput, SlingInputIn, SnatchBlockInput, WinchInput } from './rigging-schema';
+import { loadLegs, LOW_SLING_ANGLE, sinDeg, slingRating, withSlingDefaults, type Refusal } from './rigging-sling';
 
 /**
  * Each rigging element against its share of the load. Slings: see rigging-sling.ts. Shackles and leg
@@ -15,33 +16,66 @@ import { loadLegs, lowAngleWarning, LOW_SLING_ANGLE, MAX_LOAD_LEGS, sinDeg, slin
  */
 export interface RiggingVerdict {
   id: string;
+  /** What results call it (the input's name, else its id). */
+  name: string;
   element: 'sling' | 'shackle' | 'hook' | 'snatch-block' | 'winch';
   /** The element's share of the load, kg (line pull for the winch, the block's load for a snatch block). */
   demand: number;
   /** What it may carry, kg (rated line pull for the winch); 0 when the item is refused. */
   capacity: number;
-  detail: string;
-  /** Where the rating comes from: the table row with its source, or the tag. */
-  ratingSource: string;
-  /** Assumptions the figures rest on, in words. */
-  assumptions: string[];
-  /** Points to look at that do not by themselves fail the check. */
-  warnings: string[];
-  /** Why the item is not lifting rigging at all; the check then fails. */
-  refused: string | null;
+  /** How it is used and rated, as data. */
+  facts: RiggingFacts;
 }
 
-const base = { assumptions: [] as string[], warnings: [] as string[], refused: null };
+export interface RiggingFacts {
+  legs: number | null;
+  /** Legs counted as carrying the load: at most 3 (ASME B30.9, OSHA 1910.184). */
+  legsCounted: number | null;
+  hitch: SlingInput['hitch'] | null;
+  /** Leg angle from horizontal, degrees. */
+  angleFromHorizontal: number | null;
+  /** Under 30° from horizontal: the check may pass, but the angle is to be avoided. */
+  lowAngle: boolean;
+  /** Round-sling colour when the rating comes from the colour table. */
+  colour: SlingInput['colour'] | null;
+  material: SlingMaterial | null;
+  /** Chain grade; shackle or chain size, inches ("5/8"). */
+  grade: string | null;
+  size: string | null;
+  /** Choker: the choke angle used, its factor, and whether a free-hanging choke was assumed. */
+  choke: { angle: number; factor: number; assumed: boolean } | null;
+  /** Basket with a D/d: the factor applied, null where the material has no D/d table. */
+  bend: { ratio: number; factor: number | null } | null;
+  /** Snatch block: angle between its lines, the line pull and where that pull came from. */
+  lineAngle: number | null;
+  linePull: number | null;
+  linePullFrom: 'given' | 'winch' | 'hook-load' | null;
+  parts: number | null;
+  sheaves: WinchInput['sheaves'] | null;
+  leadSheaves: number | null;
+  leadLineFactor: number | null;
+  /** Where the rating comes from: the table row with its source, or the tag. */
+  ratingSource: string;
+  /** Not lifting rigging at all: the check fails with no limit. */
+  refused: Refusal | null;
+}
+
+const NO_FACTS: RiggingFacts = {
+  legs: null, legsCounted: null, hitch: null, angleFromHorizontal: null, lowAngle: false, colour: null, material: null, grade: null, size: null,
+  choke: null, bend: null, lineAngle: null, linePull: null, linePullFrom: null, parts: null, sheaves: null, leadSheaves: null, leadLineFactor: null,
+  ratingSource: '', refused: null,
+};
 
 export function slingVerdict(raw: SlingInputIn, loadMass: number): RiggingVerdict {
   const s = withSlingDefaults(raw);
   const r = slingRating(s);
-  const how = s.colour ? `${s.colour} round sling` : s.material === 'chain' ? `grade ${s.grade ?? '?'} chain${s.size ? ` ${s.size} in` : ''}` : s.material === 'other' ? 'sling' : s.material.replace('-', ' ');
-  const choke = s.hitch === 'choker' && s.chokeAngle !== undefined ? `, choke angle ${s.chokeAngle}°` : '';
   return {
-    id: s.id, element: 'sling', demand: loadMass, capacity: r.capacity,
-    detail: `${s.legs} × ${how}, ${s.hitch} hitch${choke} at ${s.angleFromHorizontal}° from horizontal`,
-    ratingSource: r.ratingSource, assumptions: r.assumptions, warnings: r.warnings, refused: r.refused,
+    id: s.id, name: s.name ?? s.id, element: 'sling', demand: loadMass, capacity: r.capacity,
+    facts: {
+      ...NO_FACTS, legs: s.legs, legsCounted: r.legsCounted, hitch: s.hitch, angleFromHorizontal: s.angleFromHorizontal, lowAngle: r.lowAngle,
+      colour: s.colour ?? null, material: r.material, grade: s.grade ?? null, size: s.size ?? null, choke: r.choke, bend: r.bend,
+      ratingSource: r.ratingSource, refused: r.refused,
+    },
   };
 }
 
@@ -50,12 +84,7 @@ export function legTension(loadMass: number, legs: number, angleFromHorizontal: 
   return loadMass / (loadLegs(legs) * sinDeg(angleFromHorizontal));
 }
 
-function legNotes(legs: number, angle: number) {
-  return {
-    assumptions: legs > MAX_LOAD_LEGS ? [`${legs} legs: the load is shared by ${MAX_LOAD_LEGS} (ASME B30.9, OSHA 1910.184).`] : [],
-    warnings: angle < LOW_SLING_ANGLE ? [lowAngleWarning(angle)] : [],
-  };
-}
+const legFacts = (legs: number, angle: number) => ({ legs, legsCounted: loadLegs(legs), angleFromHorizontal: angle, lowAngle: angle < LOW_SLING_ANGLE });
 
 export function shackleWll(size: string): number | null {
   const row = shackleRow(size);
@@ -70,20 +99,15 @@ export function shackleVerdict(s: ShackleInput, loadMass: number): RiggingVerdic
     throw new LiftError('invalid-rigging', `Shackle "${s.id}": ${what}.`, 'rigging.shackles');
   }
   return {
-    ...base, ...legNotes(s.legs, s.angleFromHorizontal),
-    id: s.id, element: 'shackle', demand: legTension(loadMass, s.legs, s.angleFromHorizontal), capacity: wll,
-    detail: `${s.size ? `${s.size} in shackle` : 'shackle'}, ${s.legs > 1 ? `one in each of ${s.legs} legs` : 'single leg'} at ${s.angleFromHorizontal}° from horizontal`,
-    ratingSource: row ? `${row.size} in: ${row.tons} t, ${describeSource(row.source)}` : 'the marking (entered WLL)',
+    id: s.id, name: s.name ?? s.id, element: 'shackle', demand: legTension(loadMass, s.legs, s.angleFromHorizontal), capacity: wll,
+    facts: { ...NO_FACTS, ...legFacts(s.legs, s.angleFromHorizontal), size: s.size ?? null, ratingSource: row ? `${row.size} in: ${row.tons} t, ${describeSource(row.source)}` : 'the marking (entered WLL)' },
   };
 }
 
 export function hookVerdict(h: HookInput, loadMass: number): RiggingVerdict {
-  const master = h.legs === 1 && h.angleFromHorizontal === 90;
   return {
-    ...base, ...legNotes(h.legs, h.angleFromHorizontal),
-    id: h.id, element: 'hook', demand: legTension(loadMass, h.legs, h.angleFromHorizontal), capacity: h.wll,
-    detail: master ? 'hook carrying the whole load' : `hook on each of ${h.legs} legs at ${h.angleFromHorizontal}° from horizontal`,
-    ratingSource: 'the marking (entered WLL)',
+    id: h.id, name: h.name ?? h.id, element: 'hook', demand: legTension(loadMass, h.legs, h.angleFromHorizontal), capacity: h.wll,
+    facts: { ...NO_FACTS, ...legFacts(h.legs, h.angleFromHorizontal), ratingSource: 'the marking (entered WLL)' },
   };
 }
 
@@ -93,20 +117,11 @@ export function snatchBlockLoad(linePull: number, lineAngle: number): number {
 }
 
 export function snatchBlockVerdict(b: SnatchBlockInput, hookLoad: number, winch?: WinchInput): RiggingVerdict {
-  let pull = b.linePull;
-  const assumptions: string[] = [];
-  if (pull === undefined && winch) {
-    pull = winchLinePull(winch, hookLoad);
-    assumptions.push('Line pull taken as the winch’s line pull for this hook load.');
-  } else if (pull === undefined) {
-    pull = hookLoad;
-    assumptions.push('No line pull given: the line is taken to carry the whole hook load.');
-  }
+  const from: RiggingFacts['linePullFrom'] = b.linePull !== undefined ? 'given' : winch ? 'winch' : 'hook-load';
+  const pull = b.linePull ?? (winch ? winchLinePull(winch, hookLoad) : hookLoad);
   return {
-    ...base, assumptions,
-    id: b.id, element: 'snatch-block', demand: snatchBlockLoad(pull, b.lineAngle), capacity: b.wll,
-    detail: `snatch block, ${b.lineAngle}° between its lines, line pull ${Math.round(pull)} kg, load 2·T·cos(θ/2)`,
-    ratingSource: 'the marking (entered WLL)',
+    id: b.id, name: b.name ?? b.id, element: 'snatch-block', demand: snatchBlockLoad(pull, b.lineAngle), capacity: b.wll,
+    facts: { ...NO_FACTS, lineAngle: b.lineAngle, linePull: pull, linePullFrom: from, ratingSource: 'the marking (entered WLL)' },
   };
 }
 
@@ -128,10 +143,8 @@ export function winchCapacity(w: WinchInput): number {
 export function winchVerdict(w: WinchInput, hookLoad: number): RiggingVerdict {
   const f = leadLineFactor(w.parts, SHEAVE_K[w.sheaves], w.leadSheaves);
   return {
-    ...base,
-    id: 'winch', element: 'winch', demand: hookLoad * f, capacity: w.ratedLinePull,
-    detail: `${w.parts} parts of line over ${w.sheaves} sheaves, ${w.leadSheaves} lead sheave(s), lead-line factor ${f.toFixed(4)}`,
-    ratingSource: 'the winch’s rated line pull (entered)',
+    id: 'winch', name: 'winch', element: 'winch', demand: hookLoad * f, capacity: w.ratedLinePull,
+    facts: { ...NO_FACTS, parts: w.parts, sheaves: w.sheaves, leadSheaves: w.leadSheaves, leadLineFactor: f, ratingSource: 'the winch’s rated line pull (entered)' },
   };
 }
 

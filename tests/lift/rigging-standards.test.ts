@@ -3,6 +3,7 @@ import {
   ALLOY_CHAIN_ROWS, analyzeLift, chokeAngleFactor, CHOKE_BANDS, legTension, shackleVerdict, slingRating, slingVerdict, snatchBlockLoad,
   snatchBlockVerdict, hookVerdict, riggingCheck, type SlingInputIn,
 } from '@/lib/lift';
+import { describeCheck } from '@/lib/format/checks';
 import { KG_PER_LB } from '@/lib/units';
 import { squareOfPads } from './scenarios';
 
@@ -28,7 +29,8 @@ describe('three-leg rule (ASME B30.9; OSHA 1910.184)', () => {
     const triple = slingRating(chain({ legs: 3, angleFromHorizontal: 45 })).capacity;
     expect(slingRating(chain({ legs: 4, angleFromHorizontal: 45 })).capacity).toBe(triple);
     expect(slingRating(chain({ legs: 8, angleFromHorizontal: 45 })).capacity).toBe(triple);
-    expect(slingRating(chain({ legs: 4 })).assumptions.join(' ')).toMatch(/4 legs are rated as 3/);
+    expect(slingRating(chain({ legs: 4 })).legsCounted).toBe(3);
+    expect(describeCheck(riggingCheck(slingVerdict(chain({ legs: 4 }), 1000)), 'imperial').sentence).toMatch(/4 legs are rated as 3 carrying the load/);
   });
   it('shackle demand follows the same legs: 4 legs at 60° under 10,000 kg → 3,849 kg per shackle', () => {
     // 10 000 / (3 × sin 60°) = 10 000 / 2.598 08 = 3 849.0 kg; the old 4-leg split gave 2 886.8 kg (25 % low).
@@ -62,16 +64,16 @@ describe('alloy chain slings, grade 80 and 100 (ASTM A906, makers\u2019 WLL tabl
     // 49 CFR 393.108 lists 3/8 grade 70 at 6 600 lb as a tie-down limit [read]; it is no lifting rating.
     const r = slingRating(chain({ grade: '70' }));
     expect(r.capacity).toBe(0);
-    expect(r.refused).toMatch(/Grade 70 chain is tie-down and towing chain, not a lifting sling/);
+    expect(r.refused).toMatchObject({ code: 'chain-grade', reason: expect.stringMatching(/Grade 70 chain is tie-down and towing chain, not a lifting sling/) });
     const c = riggingCheck(slingVerdict(chain({ grade: '70' }), 500));
-    expect(c.ok).toBe(false);
-    expect(c.reason).toMatch(/^Sling bridle is not lifting rigging: Grade 70/);
+    expect(c).toMatchObject({ ok: false, status: 'beyond', limit: null });
+    expect(describeCheck(c, 'metric').sentence).toMatch(/^Sling bridle is not lifting rigging: Grade 70/);
   });
   it('"1/4 in" is the tie-down name: refused, pointing to 9/32; a chain without a grade is refused', () => {
-    expect(slingRating(chain({ size: '1/4' })).refused).toMatch(/9\/32/);
-    expect(slingRating(chain({ grade: undefined })).refused).toMatch(/grade is not given/);
+    expect(slingRating(chain({ size: '1/4' })).refused?.reason).toMatch(/9\/32/);
+    expect(slingRating(chain({ grade: undefined })).refused?.reason).toMatch(/grade is not given/);
     // Grade 100 has no 1 in row in the makers' tables.
-    expect(slingRating(chain({ grade: '100', size: '1' })).refused).toMatch(/Grade 100 chain sling sizes are 7\/32, 9\/32/);
+    expect(slingRating(chain({ grade: '100', size: '1' })).refused?.reason).toMatch(/Grade 100 chain sling sizes are 7\/32, 9\/32/);
   });
   it('a tag below the table governs; a tag above it does not raise the rating', () => {
     expect(slingRating(chain({ verticalRating: 3000 })).capacity).toBe(3000);
@@ -80,7 +82,7 @@ describe('alloy chain slings, grade 80 and 100 (ASTM A906, makers\u2019 WLL tabl
   it('recovery straps are not lifting rigging', () => {
     // Common practice (no published source): a recovery strap is made for pulling, not lifting.
     const v = slingVerdict({ id: 'strap', material: 'recovery-strap', verticalRating: 9072, hitch: 'vertical' }, 100);
-    expect(v.refused).toMatch(/made for pulling/);
+    expect(v.facts.refused?.code).toBe('recovery-strap');
     expect(riggingCheck(v).ok).toBe(false);
   });
 });
@@ -109,8 +111,8 @@ describe('choke-angle factors (ASME B30.9 table as reproduced by sling makers, r
   it('no angle given: the result says it assumed a free-hanging choke (factor 1.00)', () => {
     const v = slingVerdict({ id: 'c', colour: 'green', hitch: 'choker' }, 1000);
     expect(lbOf(v.capacity)).toBeCloseTo(4200, 6);
-    expect(v.assumptions).toEqual(['No choke angle given: a free-hanging choke (about 135°, factor 1.00) is assumed.']);
-    expect(riggingCheck(v).reason).toMatch(/free-hanging choke/);
+    expect(v.facts.choke).toEqual({ angle: 135, factor: 1, assumed: true });
+    expect(describeCheck(riggingCheck(v), 'imperial').sentence).toMatch(/No choke angle given: a free-hanging choke \(about 135°, factor 1\.00\) is assumed\./);
   });
 });
 
@@ -134,7 +136,8 @@ describe('snatch blocks, hooks and shackles as their own kinds', () => {
   it('with no line pull the winch\u2019s pull is used, else the hook load, and the assumption is stated', () => {
     const v = snatchBlockVerdict({ id: 'SB', wll: 5000, lineAngle: 0 }, 2000);
     expect(v.demand).toBe(4000);
-    expect(v.assumptions[0]).toMatch(/whole hook load/);
+    expect(v.facts.linePullFrom).toBe('hook-load');
+    expect(describeCheck(riggingCheck(v), 'metric').sentence).toMatch(/no line pull given: the whole hook load/);
     // Winch: 2 parts, roller, no lead sheave: F = 1.04²·0.04/(1.04² − 1) = 0.5302 (Wire Rope Users Manual).
     const w = snatchBlockVerdict({ id: 'SB', wll: 5000, lineAngle: 0 }, 2000, { ratedLinePull: 5000, parts: 2, sheaves: 'roller', leadSheaves: 0 });
     expect(w.demand).toBeCloseTo(2 * 2000 * 0.530196, 3);
@@ -155,10 +158,11 @@ describe('sling angle warning and the basket D/d reduction', () => {
   it('under 30° from horizontal warns (the check can still pass); at 30° it does not', () => {
     // Each leg pulls 1/sin 25° = 2.37 × its share. Source: sling angle guidance, ASME B30.9 [derived factor].
     const low = slingVerdict({ id: 'w', verticalRating: 10000, hitch: 'vertical', legs: 2, angleFromHorizontal: 25 }, 1000);
-    expect(low.warnings[0]).toMatch(/under 30°: each leg pulls 2\.37 ×/);
+    expect(low.facts.lowAngle).toBe(true);
     expect(riggingCheck(low).ok).toBe(true);
-    expect(slingVerdict({ id: 'w', verticalRating: 10000, hitch: 'vertical', legs: 2, angleFromHorizontal: 30 }, 1000).warnings).toEqual([]);
-    expect(shackleVerdict({ id: 's', wll: 5000, legs: 2, angleFromHorizontal: 20 }, 1000).warnings).toHaveLength(1);
+    expect(describeCheck(riggingCheck(low), 'metric').sentence).toMatch(/under 30° from horizontal: each leg pulls 2\.37 ×/);
+    expect(slingVerdict({ id: 'w', verticalRating: 10000, hitch: 'vertical', legs: 2, angleFromHorizontal: 30 }, 1000).facts.lowAngle).toBe(false);
+    expect(shackleVerdict({ id: 's', wll: 5000, legs: 2, angleFromHorizontal: 20 }, 1000).facts.lowAngle).toBe(true);
   });
   it('wire rope in a basket at D/d 10 keeps 0.86/0.92 of its basket rating; at D/d 25 and above, all of it', () => {
     // Efficiency curve (Wire Rope Users Manual, value from memory): D/d 10 → 86 %, D/d 25 → 92 %; makers
@@ -172,6 +176,7 @@ describe('sling angle warning and the basket D/d reduction', () => {
   it('no D/d table for a round sling: no reduction, and the result says so', () => {
     const r = slingRating({ id: 'rs', colour: 'red', hitch: 'basket', bendRatio: 2 });
     expect(lbOf(r.capacity)).toBeCloseTo(26400, 6);
-    expect(r.assumptions[0]).toMatch(/No D\/d reduction table/);
+    expect(r.bend).toEqual({ ratio: 2, factor: null });
+    expect(describeCheck(riggingCheck(slingVerdict({ id: 'rs', colour: 'red', hitch: 'basket', bendRatio: 2 }, 100)), 'metric').sentence).toMatch(/No D\/d reduction table/);
   });
 });

@@ -3,6 +3,7 @@ import { picksToRigging, pickVerdict, type RiggingPickLike } from '@/lib/equipme
 import { addVerdict, pickNotices } from '@/canvas/panels/inspector/rigging-status';
 import { analyzeLift, riggingSchema } from '@/lib/lift';
 import { KG_PER_LB } from '@/lib/units';
+import { describeCheck } from '@/lib/format/checks';
 import { squareOfPads } from '../lift/scenarios';
 
 const pick = (over: Partial<RiggingPickLike>): RiggingPickLike => ({ tag: 'T', kind: 'round-sling', size: '', hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: 1000, ratings: { vertical: 1000, choker: 800, basket: 2000 }, ...over });
@@ -18,9 +19,9 @@ describe('picked rigging → the engine: each kind to its own check', () => {
       ]),
     );
     expect(r.slings.map((s) => s.id)).toEqual(['S1']);
-    expect(r.shackles).toEqual([{ id: 'SH', wll: 2948, legs: 2, angleFromHorizontal: 60 }]);
-    expect(r.hooks).toEqual([{ id: 'HK', wll: 6350, legs: 1, angleFromHorizontal: 90 }]);
-    expect(r.snatchBlocks).toEqual([{ id: 'SB', wll: 10886, lineAngle: 90 }]);
+    expect(r.shackles).toEqual([{ id: 'SH', name: 'SH', wll: 2948, legs: 2, angleFromHorizontal: 60 }]);
+    expect(r.hooks).toEqual([{ id: 'HK', name: 'HK', wll: 6350, legs: 1, angleFromHorizontal: 90 }]);
+    expect(r.snatchBlocks).toEqual([{ id: 'SB', name: 'SB', wll: 10886, lineAngle: 90 }]);
   });
   it('a chain pick carries its grade and size to the chain table; a grade 70 pick fails the plan', () => {
     // 2-leg 3/8 grade 80 at 60°: 2 × 7 100 × sin 60° = 12 297.6 lb (ASTM A906 makers' tables, read).
@@ -29,10 +30,10 @@ describe('picked rigging → the engine: each kind to its own check', () => {
     const input = squareOfPads({ rigging: picksToRigging([pick({ tag: 'CF-CH-01', kind: 'chain', size: '3/8 in grade 70', ratings: { vertical: 2993.7, choker: null, basket: null } })]) });
     const check = analyzeLift(input).checks.find((c) => c.id === 'rigging:sling:CF-CH-01')!;
     expect(check.ok).toBe(false);
-    expect(check.reason).toMatch(/not lifting rigging: Grade 70/);
+    expect(describeCheck(check, 'metric').sentence).toMatch(/not lifting rigging: Grade 70/);
   });
   it('a recovery strap in an older plan is refused by the engine, not rated', () => {
-    expect(pickVerdict(pick({ kind: 'recovery-strap', ratings: { vertical: 9072, choker: null, basket: null } }), 100, 100)!.refused).toMatch(/made for pulling/);
+    expect(pickVerdict(pick({ kind: 'recovery-strap', ratings: { vertical: 9072, choker: null, basket: null } }), 100, 100)!.facts.refused?.reason).toMatch(/made for pulling/);
   });
   it('the choke angle and D/d go to the engine only with their hitch', () => {
     const [choked] = riggingSchema.parse(picksToRigging([pick({ hitch: 'choker', chokeAngle: 100, bendRatio: 4 })])).slings;

@@ -1,6 +1,8 @@
 'use client';
 import type { RiggingPick } from '../../document/objects';
-import { formatMass, type UnitSystem } from '@/lib/units';
+import type { UnitSystem } from '@/lib/units';
+import { formatMass } from '@/lib/format/quantity';
+import { riggingNotes } from '@/lib/format/rigging-words';
 import { pickVerdict } from '@/lib/equipment/rigging-to-lift';
 import { NumberField, SelectField } from '../fields';
 import type { RiggingNotice } from './rigging-status';
@@ -30,6 +32,7 @@ const isLegFitting = (kind: string) => kind === 'shackle' || kind === 'hook';
 export function RiggingPickRow(props: { pick: RiggingPick; notices: RiggingNotice[]; loadMass: number; hookLoad: number; units: UnitSystem; readOnly: boolean; onChange(p: RiggingPick): void; onRemove(): void }) {
   const { pick: r, units, readOnly: ro, onChange } = props;
   const v = pickVerdict(r, props.loadMass, props.hookLoad);
+  const notes = v ? riggingNotes({ ...v.facts, element: v.element }) : null;
   const set = (patch: Partial<RiggingPick>) => onChange({ ...r, ...patch });
   const legs = <NumberField label="Legs" value={r.legs} min={1} max={8} digits={0} disabled={ro} onCommit={(n) => set({ legs: Math.round(n) })} />;
   const angle = <NumberField label="Angle (° up)" value={r.angleFromHorizontal} min={1} max={90} disabled={ro} onCommit={(a) => set({ angleFromHorizontal: a })} />;
@@ -65,20 +68,20 @@ export function RiggingPickRow(props: { pick: RiggingPick; notices: RiggingNotic
           {r.hitch === 'basket' && r.kind === 'wire-rope-sling' && <NumberField label="Bend D/d" value={r.bendRatio ?? 25} min={0.1} max={1000} disabled={ro} onCommit={(d) => set({ bendRatio: d })} />}
         </div>
       )}
-      {v?.refused ? (
-        <Notice notice={{ tone: 'stop', text: `Not lifting rigging: ${v.refused}` }} />
+      {v?.facts.refused ? (
+        <Notice notice={{ tone: 'stop', text: `Not lifting rigging: ${v.facts.refused.reason}` }} />
       ) : v ? (
         <>
           <p className="mt-1 text-xs text-ink-muted" data-testid={`rigging-capacity-${r.tag}`}>
             {v.element === 'sling' ? `Capacity as rigged ${formatMass(v.capacity, units)}` : `WLL ${formatMass(v.capacity, units)}, carries ${formatMass(v.demand, units)}`}
             {v.element === 'sling' && ` for a ${formatMass(v.demand, units)} load`}
           </p>
-          {v.assumptions.map((a) => (
+          {notes!.assumptions.map((a) => (
             <p key={a} className="text-xs text-ink-muted">
               {a}
             </p>
           ))}
-          {v.warnings.map((w) => <Notice key={w} notice={{ tone: 'warn', text: w }} />)}
+          {notes!.warnings.map((w) => <Notice key={w} notice={{ tone: 'warn', text: w }} />)}
         </>
       ) : null}
     </li>
