@@ -3,7 +3,7 @@ import {
   alloyChainRow, describeSource, LIFTING_CHAIN_GRADES, LIFTING_CHAIN_SIZES, liftingUse, parseChain, roundSlingColours, roundSlingRating,
   roundSlingRow, shackleRow, SHACKLE_SIZES, TIE_DOWN_RATED, TIE_DOWN_SOURCE_ID, type NotForLifting, type RoundSlingColour,
 } from '@/lib/lift/ratings';
-import type { RiggingKind } from '@/db/schema';
+import type { RiggingKind } from '@/lib/domain';
 
 /**
  * Ratings filled in from the engine's rating tables (lib/lift/ratings, one file per table, each row with

@@ -1,5 +1,5 @@
 'use client';
-import type { RiggingPick } from '../../document/objects';
+import type { RiggingPick } from '@/lib/scene/objects';
 import type { UnitSystem } from '@/lib/units';
 import { formatMass } from '@/lib/format/quantity';
 import { riggingNotes } from '@/lib/format/rigging-words';

@@ -1,10 +1,10 @@
 'use client';
 import { useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import type { LoadObject, RiggingPick } from '../../document/objects';
+import type { LoadObject, RiggingPick } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
-import { loadMass } from '../../shapes/load/geometry';
+import { loadMass } from '@/lib/scene/geometry/load';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { SelectField } from '../fields';
 import { Notice, RiggingPickRow } from './rigging-pick-row';
