@@ -21,6 +21,7 @@ import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
 import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
+import * as trainingCopy from '@/app/api/scenes/[id]/training-copy/route';
 import * as background from '@/app/api/scenes/[id]/background/route';
 import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { makePng } from '@/tests/fixtures/images';
@@ -252,6 +253,17 @@ const routes: MatrixRoute[] = [
       'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
       'Cobalt: scene': [401, 404, 404, 404, 404, 200],
       'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    // A what-if kept as a new training-set scene: trainers and admins, from any scene they may read.
+    method: 'POST', path: '/api/scenes/[id]/training-copy', handler: trainingCopy.POST, writes: sceneWrites, checkId: false,
+    body: () => ({ title: 'Matrix: what-if copy', document: { version: 2, objects: [] } }),
+    expect: {
+      'Harrow: operator’s draft': [401, 403, 403, 201, 201, 403],
+      'Harrow: deleted scene': [401, 403, 403, 404, 404, 403],
+      'Cobalt: scene': [401, 403, 403, 404, 404, 403],
+      'unknown id': [401, 403, 403, 404, 404, 403],
     },
   },
   // ── equipment ──────────────────────────────────────────────────────────
