@@ -17,6 +17,7 @@ import * as inspections from '@/app/api/rigging/[id]/inspections/route';
 import * as riggingExport from '@/app/api/rigging/export/route';
 import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
+import * as userOne from '@/app/api/users/[id]/route';
 import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
@@ -76,6 +77,8 @@ const lessonTarget = (title: string): TargetResolver => async () => {
 const lessonBody = (t: Target) => ({ title: 'Matrix: lesson', steps: [{ sceneId: t.sceneId, revision: 1, notes: 'Watch the rear pads.' }] });
 const today = () => new Date().toISOString().slice(0, 10);
 
+const userTarget = (email: string): TargetResolver => async () => ({ id: String((await getDb().selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id) });
+
 const targets: Record<string, TargetResolver> = {
   '-': async () => ({}),
   'Harrow: operator’s draft': sceneTarget(TITLES.ownDraft),
@@ -96,6 +99,8 @@ const targets: Record<string, TargetResolver> = {
   'Cobalt: lesson': lessonTarget(LESSONS.cobalt),
   'Harrow: training scene': async () => ({ sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
   'unknown lesson': async () => ({ id: '987654', sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
+  'Harrow: trainer': userTarget('trainer@harrow.example'),
+  'Cobalt: operator': userTarget('operator@cobalt.example'),
 };
 const lessonWrites = ['lessons', 'lesson_steps', 'audit_log'];
 
@@ -419,6 +424,15 @@ const routes: MatrixRoute[] = [
     method: 'POST', path: '/api/users', handler: users.POST, writes: ['users', 'audit_log'],
     body: () => ({ name: 'Matrix New Hire', email: 'matrix.hire@harrow.example', role: 'operator', password: 'a-long-enough-password' }),
     expect: { '-': [401, 403, 403, 403, 201, 403] },
+  },
+  {
+    method: 'PATCH', path: '/api/users/[id]', handler: userOne.PATCH, writes: ['users', 'audit_log'],
+    body: () => ({ role: 'supervisor' }),
+    expect: {
+      'Harrow: trainer': [401, 403, 403, 403, 200, 403],
+      'Cobalt: operator': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
   },
   { method: 'GET', path: '/api/me', handler: me.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
