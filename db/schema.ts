@@ -149,6 +149,38 @@ export interface RiggingInspectionTable {
   created_at: Timestamp;
 }
 
+export interface ScenePlanDetailsTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  /** The scene revision these details were saved with. */
+  revision: number;
+  details: JSONColumnType<Record<string, unknown>>;
+  author_id: number;
+  created_at: Timestamp;
+}
+
+export interface LessonTable {
+  id: Generated<number>;
+  organisation_id: number;
+  author_id: number;
+  title: string;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface LessonStepTable {
+  id: Generated<number>;
+  lesson_id: number;
+  /** 0-based order within the lesson. */
+  position: number;
+  scene_id: number;
+  revision: number;
+  notes: Generated<string>;
+  question: string | null;
+  answer: string | null;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -160,6 +192,9 @@ export interface Database {
   equipment_profile_versions: EquipmentProfileVersionTable;
   rigging_items: RiggingItemTable;
   rigging_inspections: RiggingInspectionTable;
+  scene_plan_details: ScenePlanDetailsTable;
+  lessons: LessonTable;
+  lesson_steps: LessonStepTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -182,3 +217,6 @@ export type NewRiggingItem = Insertable<RiggingItemTable>;
 export type RiggingItemUpdate = Updateable<RiggingItemTable>;
 export type RiggingInspectionRow = Selectable<RiggingInspectionTable>;
 export type NewRiggingInspection = Insertable<RiggingInspectionTable>;
+export type ScenePlanDetailsRow = Selectable<ScenePlanDetailsTable>;
+export type LessonRow = Selectable<LessonTable>;
+export type LessonStepRow = Selectable<LessonStepTable>;

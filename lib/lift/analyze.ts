@@ -5,7 +5,7 @@ import { clearanceOver } from './clearance';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
 import { powerLineOver } from './power-lines';
-import { prepareLift, withLoadMass, type PreparedLift } from './prepare';
+import { prepareLift, slewAt, withLoadMass, type PreparedLift } from './prepare';
 import { createReactionState, describeReactions, reactionsAt } from './reactions';
 import type { LiftResult, WorstCase } from './result';
 import { shackleVerdict, slingVerdict, winchVerdict, type RiggingVerdict } from './rigging';
@@ -96,6 +96,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
 
   const chart = p.input.loadChart;
   return {
+    arc: { from: p.from, to: slewAt(p, p.span), direction: p.input.swing.direction, span: p.span, fullTurn: p.fullTurn },
     tippingLines: p.lines.map((l) => ({
       id: l.id, from: l.from, to: l.to, distanceFromAxis: l.distanceFromAxis, distanceFromCG: insideDistance(l, cgx, cgy),
       a: { x: l.ax, y: l.ay }, b: { x: l.bx, y: l.by },

@@ -5,7 +5,11 @@ import { checkPolygon, parseLiftInput, siteObjects } from './validate';
 import { supportPolygon, type SupportPoint, type TippingLineGeom } from './support-polygon';
 import { footprintLocal, type FootprintLocal } from './footprint';
 
+import { arcOf } from './swing';
+import { normalizeDegrees } from './types';
+
 export { parseLiftInput } from './validate';
+export { arcOf } from './swing';
 
 /** A body part or obstacle as the clearance sweep sees it: a flat polygon in the truck frame. */
 export interface Target {
@@ -54,15 +58,10 @@ export interface PreparedLift {
   from: number;
   span: number;
   sign: 1 | -1;
+  /** True when the swing covers every slew (see swing.ts for the rule). */
+  fullTurn: boolean;
 }
 
-/** Arc from `from` to `to` in `direction`; a span of exactly 360 is kept as a full turn. */
-export function arcOf(swing: LiftInput['swing']): { from: number; span: number; sign: 1 | -1 } {
-  const sign = swing.direction === 'ccw' ? 1 : -1;
-  const raw = sign * (swing.to - swing.from);
-  const span = raw >= 0 && raw <= 360 ? raw : ((raw % 360) + 360) % 360;
-  return { from: swing.from, span, sign };
-}
 
 /** Validates the input (typed errors) and precomputes what every slew evaluation shares. */
 export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
@@ -122,7 +121,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
   const hookY0 = pivot.y;
   const tipZ = pivot.z + length * Math.sin(el);
   const loadBottom = tipZ - input.load.hang;
-  const { from, span, sign } = arcOf(input.swing);
+  const { from, span, sign, fullTurn } = arcOf(input.swing);
   return {
     input, hull, lines,
     fixedMass, fixedMx, fixedMy, rotMass, rotMx0, rotMy0,
@@ -135,7 +134,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     supportY: Float64Array.from(input.supports, (s) => s.y),
     targets,
     powerLines: [...input.powerLines, ...fromSite.powerLines],
-    from, span, sign,
+    from, span, sign, fullTurn,
   };
 }
 
@@ -146,7 +145,5 @@ export function withLoadMass(p: PreparedLift, loadMass: number): PreparedLift {
   return { ...p, input, hookLoad: loadMass + input.hook.blockMass + input.hook.riggingMass };
 }
 
-export const slewAt = (p: PreparedLift, t: number) => {
-  const s = (p.from + p.sign * t) % 360;
-  return s < 0 ? s + 360 : s;
-};
+/** Slew at `t` degrees along the planned arc, in [0, 360). */
+export const slewAt = (p: PreparedLift, t: number): number => normalizeDegrees(p.from + p.sign * t);

@@ -36,7 +36,18 @@ export interface UpperWeightResult {
   reactionMaxima: ReactionMaximum[];
 }
 
+/** The arc that was analysed, after the swing rule of swing.ts (from and to normalised to [0, 360)). */
+export interface AnalysedArc {
+  from: number;
+  to: number;
+  direction: 'ccw' | 'cw';
+  /** Degrees swept: 0 for one slew (pick and set the same), 360 for a full turn. */
+  span: number;
+  fullTurn: boolean;
+}
+
 export interface LiftResult {
+  arc: AnalysedArc;
   tippingLines: TippingLineResult[];
   worstCase: WorstCase;
   sweep: SweepSample[];

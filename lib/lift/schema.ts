@@ -59,6 +59,11 @@ export const loadSchema = z.object({
   hang: z.number().nonnegative(),
 });
 
+/**
+ * Pick (`from`) and set (`to`) slews, degrees, and the direction of travel. The one rule for turning these
+ * into an arc is lib/lift/swing.ts: a whole number of turns (0→360, 360→0, 0→720, 10→370 cw, within 1e-9°)
+ * or more than a turn is a full turn; only from ≈ to is a single slew.
+ */
 export const swingSchema = z.object({
   from: num,
   to: num,
