@@ -1,10 +1,5 @@
 import type { ColumnType, Generated, Insertable, JSONColumnType, Selectable, Updateable } from 'kysely';
-
-export type Role = 'operator' | 'supervisor' | 'trainer' | 'admin';
-export const ROLES: readonly Role[] = ['operator', 'supervisor', 'trainer', 'admin'] as const;
-
-export type SceneStatus = 'draft' | 'submitted' | 'approved' | 'rejected' | 'archived';
-export const SCENE_STATUSES: readonly SceneStatus[] = ['draft', 'submitted', 'approved', 'rejected', 'archived'] as const;
+import type { RiggingKind, RiggingStatus, Role, SceneStatus } from '@/lib/domain';
 
 /** ISO-8601 text timestamps: SQLite has no date type, and text sorts correctly. */
 type Timestamp = ColumnType<string, string | undefined, string>;
@@ -57,6 +52,8 @@ export interface SceneTable {
   equipment_profile_id: number | null;
   equipment_profile_version: number | null;
   in_training_set: Generated<number>;
+  location: string | null;
+  notes: string | null;
   created_at: Timestamp;
   updated_at: Timestamp;
   deleted_at: string | null;
@@ -66,8 +63,11 @@ export interface SceneRevisionTable {
   id: Generated<number>;
   scene_id: number;
   revision: number;
-  document: JSONColumnType<Record<string, unknown>>;
+  /** JSON text for kept revisions; gzip bytes for autosaves (inflated on read by db/json-columns.ts). */
+  document: JSONColumnType<Record<string, unknown>, string | Buffer, string | Buffer>;
   author_id: number;
+  /** 1 for a submitted or approved revision: a full snapshot that thinning never removes. */
+  kept: Generated<number>;
   created_at: Timestamp;
 }
 
@@ -108,11 +108,6 @@ export interface EquipmentProfileVersionTable {
   author_id: number | null;
   created_at: Timestamp;
 }
-
-export type RiggingKind = 'round-sling' | 'web-sling' | 'wire-rope-sling' | 'chain' | 'shackle' | 'snatch-block' | 'hook' | 'recovery-strap';
-export const RIGGING_KINDS: readonly RiggingKind[] = ['round-sling', 'web-sling', 'wire-rope-sling', 'chain', 'shackle', 'snatch-block', 'hook', 'recovery-strap'] as const;
-export type RiggingStatus = 'in_service' | 'tagged_out' | 'retired';
-export const RIGGING_STATUSES: readonly RiggingStatus[] = ['in_service', 'tagged_out', 'retired'] as const;
 
 export interface RiggingItemTable {
   id: Generated<number>;

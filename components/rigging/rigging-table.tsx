@@ -5,7 +5,7 @@ import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, 
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import type { RiggingItem } from '@/db/repositories/rigging';
-import { RIGGING_KINDS, RIGGING_STATUSES } from '@/db/schema';
+import { RIGGING_KINDS, RIGGING_STATUSES } from '@/lib/domain';
 import { Badge } from '@/components/ui/badge';
 import { ButtonLink, buttonClasses } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
@@ -13,7 +13,8 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { SelectField } from '@/components/ui/select';
 import { Notice } from '@/components/ui/notice';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { formatLength, formatMass, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatLength, formatMass } from '@/lib/format/quantity';
 import { KIND_LABEL, STATUS_LABEL, dueState } from './labels';
 import { RiggingImport } from './rigging-import';
 

@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { emptyPlanDetails, planDetailsSchema, type PlanDetails } from '@/lib/plan-details/schema';
 import { updateScene, type UpdateOutcome } from './scenes';
 import { inTransaction } from '../transaction';
@@ -53,7 +53,7 @@ export async function savePlanDetails(db: Db, user: CurrentUser, sceneId: number
       .values({
         organisation_id: user.organisationId,
         scene_id: sceneId,
-        revision: outcome.scene.revision,
+        revision: outcome.revision,
         details: JSON.stringify(details),
         author_id: user.id,
         created_at: new Date().toISOString(),

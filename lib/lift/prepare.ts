@@ -14,6 +14,8 @@ export { arcOf } from './swing';
 /** A body part or obstacle as the clearance sweep sees it: a flat polygon in the truck frame. */
 export interface Target {
   id: string;
+  /** What results call it (the input's name, else its id). */
+  name: string;
   kind: 'body' | 'obstacle';
   poly: Float64Array;
   n: number;
@@ -80,7 +82,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
 
   const fromSite = siteObjects(input);
   const targets: Target[] = [];
-  const target = (id: string, kind: Target['kind'], poly: Float64Array, top: number): Target => {
+  const target = (id: string, name: string | undefined, kind: Target['kind'], poly: Float64Array, top: number): Target => {
     let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
     for (let i = 0; i < poly.length; i += 2) {
       x0 = Math.min(x0, poly[i]); x1 = Math.max(x1, poly[i]); y0 = Math.min(y0, poly[i + 1]); y1 = Math.max(y1, poly[i + 1]);
@@ -88,14 +90,14 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     const cx = (x0 + x1) / 2, cy = (y0 + y1) / 2;
     let r = 0;
     for (let i = 0; i < poly.length; i += 2) r = Math.max(r, Math.hypot(poly[i] - cx, poly[i + 1] - cy));
-    return { id, kind, poly, n: poly.length / 2, top, cx, cy, r };
+    return { id, name: name ?? id, kind, poly, n: poly.length / 2, top, cx, cy, r };
   };
   input.bodies.forEach((b, i) => {
-    targets.push(target(b.id, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
+    targets.push(target(b.id, b.name, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
   });
   [...input.obstacles, ...fromSite.obstacles].forEach((o, i) => {
     const field = i < input.obstacles.length ? `obstacles.${i}.polygon` : `site.obstacles.${i - input.obstacles.length}.polygon`;
-    targets.push(target(o.id, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
+    targets.push(target(o.id, o.name, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
   });
   if (input.load.footprint.kind === 'polygon') checkPolygon(input.load.footprint.points, 'load.footprint.points', 'The load footprint');
 

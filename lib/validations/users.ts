@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/db/schema';
+import { ROLES } from '@/lib/domain';
 import { PASSWORD_MAX_CHARS, passwordSchema } from '@/lib/auth/password-policy';
 
 export const roleSchema = z.enum(ROLES as unknown as [string, ...string[]], {

@@ -7,7 +7,8 @@ import { SOIL_CHOICES } from '@/lib/lift/soil';
 import { arcOf } from '@/lib/lift/swing';
 import { BackgroundPanel } from '../../background/background-panel';
 import { screenToWorld } from '../../editor/camera';
-import { formatPressure, inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { formatPressure } from '@/lib/format/quantity';
 
 /** What the engine will analyse for these fields (lib/lift/swing.ts), so 0° → 360° is never read as one slew. */
 export function arcWords(swing: { from: number; to: number; direction: 'ccw' | 'cw' }): string {

@@ -4,7 +4,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError, zodIssues, describeIssues } from '@/lib/api/errors';
 import { ACCEPTED_IMAGE_TYPES, oversizedImageReason, sniffImage } from '@/lib/image-sniff';
 import { readBodyLimited } from '@/lib/api/body';
-import { storeSceneUpload } from '@/lib/background/store-scene-upload';
+import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { MAX_BACKGROUND_BYTES, MULTIPART_OVERHEAD_BYTES, backgroundUploadForm } from '@/lib/validations/uploads';
 
 export const runtime = 'nodejs';
