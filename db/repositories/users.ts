@@ -33,16 +33,6 @@ export async function setUserPassword(db: Db, id: number, passwordHash: string):
   await db.updateTable('users').set((eb) => ({ password_hash: passwordHash, session_version: eb('session_version', '+', 1) })).where('id', '=', id).execute();
 }
 
-/** Deactivates or reactivates a user in this organisation; deactivating ends their sessions too. */
-export function setUserActive(db: Db, organisationId: number, id: number, active: boolean) {
-  return db
-    .updateTable('users')
-    .set((eb) => ({ active: active ? 1 : 0, session_version: active ? eb.ref('session_version') : eb('session_version', '+', 1) }))
-    .where('id', '=', id)
-    .where('organisation_id', '=', organisationId)
-    .executeTakeFirst();
-}
-
 export function findUserById(db: Db, id: number) {
   return db
     .selectFrom('users')
@@ -75,4 +65,32 @@ export function setUserRole(db: Db, organisationId: number, id: number, role: Ro
 
 export function setUserUnits(db: Db, id: number, units: 'imperial' | 'metric') {
   return db.updateTable('users').set({ units }).where('id', '=', id).executeTakeFirst();
+}
+
+/** Active admins of an organisation other than `exceptId`: an organisation must always keep one. */
+export async function otherActiveAdmins(db: Db, organisationId: number, exceptId: number): Promise<number> {
+  const row = await db
+    .selectFrom('users')
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .where('organisation_id', '=', organisationId)
+    .where('role', '=', 'admin')
+    .where('active', '=', 1)
+    .where('id', '!=', exceptId)
+    .executeTakeFirstOrThrow();
+  return Number(row.n);
+}
+
+/** A new role and/or deactivation; deactivating also raises the session version, ending the user's sessions. */
+export function updateUser(db: Db, organisationId: number, id: number, changes: { role?: Role; active?: boolean }) {
+  return db
+    .updateTable('users')
+    .set((eb) => ({
+      ...(changes.role !== undefined && { role: changes.role }),
+      ...(changes.active !== undefined && { active: changes.active ? 1 : 0 }),
+      ...(changes.active === false && { session_version: eb('session_version', '+', 1) }),
+    }))
+    .where('id', '=', id)
+    .where('organisation_id', '=', organisationId)
+    .returning(['id', 'organisation_id', 'email', 'name', 'role', 'units', 'active', 'created_at'])
+    .executeTakeFirst();
 }

@@ -20,3 +20,13 @@ export const changePasswordSchema = z.object({
   currentPassword: z.string({ error: 'Current password is required' }).min(1, 'Current password is required').max(PASSWORD_MAX_CHARS),
   newPassword: passwordSchema,
 });
+
+/** An admin's change to a user: a new role, or deactivation / reactivation. */
+export const updateUserSchema = z
+  .object({
+    role: roleSchema.optional(),
+    active: z.boolean({ error: 'active must be true or false' }).optional(),
+  })
+  .strict()
+  .refine((v) => v.role !== undefined || v.active !== undefined, { path: ['role'], message: 'Give a role or active' });
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;

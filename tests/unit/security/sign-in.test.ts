@@ -149,14 +149,14 @@ describe('sessions end', () => {
     claims.value = null;
   }, 120_000);
 
-  it('deactivation ends the sessions (the function issue 12 routes will call)', async () => {
-    const { setUserActive } = await import('@/db/repositories/users');
+  it('deactivation (PATCH /api/users/{id} active:false, through updateUser) ends the sessions', async () => {
+    const { updateUser } = await import('@/db/repositories/users');
     const u = await idOf('operator@harrow.example');
     const harrow = (await demoUser('operator@harrow.example')).organisationId;
     claims.value = { userId: u.id, sessionVersion: u.session_version };
     expect((await realGetCurrentUser())?.email).toBe('operator@harrow.example');
-    await setUserActive(db, harrow, u.id, false);
-    await setUserActive(db, harrow, u.id, true);
+    await updateUser(db, harrow, u.id, { active: false });
+    await updateUser(db, harrow, u.id, { active: true });
     // Reactivated, but the old session stays ended.
     expect(await realGetCurrentUser()).toBeNull();
     claims.value = null;
