@@ -6,6 +6,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { createUserSchema } from '@/lib/validations/users';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -13,11 +14,11 @@ export const runtime = 'nodejs';
 // tell one organisation's admin about another's people.
 const emailTaken = () => new HttpError(409, 'email: an account in your organisation already has this e-mail', [{ path: 'email', message: 'Already in use in your organisation' }]);
 
-export const GET = route({ roles: ['admin'] }, async ({ user }) => {
+export const GET = route({ roles: rolesFor('manageUsers') }, async ({ user }) => {
   return { items: await listUsers(getDb(), user.organisationId) };
 });
 
-export const POST = route({ roles: ['admin'], body: createUserSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('manageUsers'), body: createUserSchema }, async ({ user, body }) => {
   // Hash first: bcrypt takes tens of milliseconds and must not hold the write transaction open.
   const passwordHash = await hashPassword(body.password);
   try {
