@@ -2,6 +2,7 @@ import type { Migration } from 'kysely';
 import * as foundation from './2026-12-01T00-00_foundation';
 import * as sceneUploads from './2026-12-01T22-45_scene-uploads';
 import * as equipmentLibrary from './2026-12-01T23-00_equipment-library';
+import * as reviewDesk from './2026-12-02T11-00_review-desk';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -11,4 +12,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01T00-00_foundation': foundation,
   '2026-12-01T22-45_scene-uploads': sceneUploads,
   '2026-12-01T23-00_equipment-library': equipmentLibrary,
+  '2026-12-02T11-00_review-desk': reviewDesk,
 };

@@ -6,6 +6,8 @@ import { DEMO_TRUCKS } from './demo-trucks';
 import { seedDemoRigging } from './demo-rigging';
 import { createEquipmentProfile } from '../repositories/equipment';
 import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
+import { REVIEW_SCENES } from './demo-review-scenes';
+import { seedDemoReview } from './demo-review';
 
 /** Inserts the invented demo scenario into an empty database, in one transaction. Returns false if data exists. */
 export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
@@ -34,7 +36,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
       truckIds.set(t.unitNumber, { id: p.id, version: p.version });
     }
     await seedDemoRigging(trx, orgIds, userIds);
-    for (const s of DEMO_SCENES) {
+    for (const s of [...DEMO_SCENES, ...REVIEW_SCENES]) {
       const owner = userIds.get(s.owner)!;
       const truck = s.truck ? truckIds.get(s.truck) : undefined;
       const doc = JSON.stringify(withTruckProfile(s.document, truck));
@@ -57,6 +59,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
         .executeTakeFirstOrThrow();
       await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: owner, created_at: now }).execute();
     }
+    await seedDemoReview(trx);
   });
   return true;
 }

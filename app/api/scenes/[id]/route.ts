@@ -5,6 +5,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { scenePin } from '@/lib/api/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
+import { isEditable, transition } from '@/lib/review/lifecycle';
 
 export const runtime = 'nodejs';
 
@@ -22,9 +23,16 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: updateSc
     const scene = await getScene(trx, user, params.id);
     if (!scene) throw notFound();
     if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
+    // A submitted or approved plan is frozen; the message says what to do instead (withdraw, new revision).
+    if (!isEditable(scene.status)) {
+      const t = transition(scene.status, 'edit');
+      throw new HttpError(409, t.ok ? 'This plan cannot be edited now' : t.message, [{ path: 'status', message: `The plan is ${scene.status}` }]);
+    }
+    // Editing a returned plan takes it back to draft.
+    const status = scene.status === 'returned' ? ({ status: 'draft' } as const) : {};
     // The record names the profile version the saved sketch's truck is drawn from (lib/api/truck-pin).
     const pin = await scenePin(trx, user.organisationId, body, { keepProfileId: scene.equipmentProfileId });
-    return updateScene(trx, user, params.id, { ...body, ...pin });
+    return updateScene(trx, user, params.id, { ...body, ...pin, ...status });
   });
   if (outcome.kind === 'missing') throw notFound();
   if (outcome.kind === 'stale') {
