@@ -215,6 +215,38 @@ export interface MailOutboxTable {
   created_at: Timestamp;
 }
 
+export interface ScenePlanDetailsTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  /** The scene revision these details were saved with. */
+  revision: number;
+  details: JSONColumnType<Record<string, unknown>>;
+  author_id: number;
+  created_at: Timestamp;
+}
+
+export interface LessonTable {
+  id: Generated<number>;
+  organisation_id: number;
+  author_id: number;
+  title: string;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface LessonStepTable {
+  id: Generated<number>;
+  lesson_id: number;
+  /** 0-based order within the lesson. */
+  position: number;
+  scene_id: number;
+  revision: number;
+  notes: Generated<string>;
+  question: string | null;
+  answer: string | null;
+}
+
 export interface Database {
   organisations: OrganisationTable;
   users: UserTable;
@@ -230,6 +262,9 @@ export interface Database {
   scene_comments: SceneCommentTable;
   notifications: NotificationTable;
   mail_outbox: MailOutboxTable;
+  scene_plan_details: ScenePlanDetailsTable;
+  lessons: LessonTable;
+  lesson_steps: LessonStepTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;
@@ -256,3 +291,6 @@ export type SceneSubmissionRow = Selectable<SceneSubmissionTable>;
 export type SceneCommentRow = Selectable<SceneCommentTable>;
 export type NotificationRow = Selectable<NotificationTable>;
 export type MailOutboxRow = Selectable<MailOutboxTable>;
+export type ScenePlanDetailsRow = Selectable<ScenePlanDetailsTable>;
+export type LessonRow = Selectable<LessonTable>;
+export type LessonStepRow = Selectable<LessonStepTable>;

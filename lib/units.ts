@@ -22,15 +22,6 @@ export const psfToKpa = (psf: number) => (psf * PA_PER_PSF) / 1000;
 export const m2ToFt2 = (m2: number) => m2 / (M_PER_FT * M_PER_FT);
 export const ft2ToM2 = (ft2: number) => ft2 * M_PER_FT * M_PER_FT;
 
-/** 12.5 m → 41' 0" (rounded to the nearest inch, carrying 12" into the feet). */
-export function formatFeetInches(m: number): string {
-  const sign = m < 0 ? '−' : '';
-  let totalIn = Math.round(Math.abs(mToIn(m)));
-  const ft = Math.floor(totalIn / 12);
-  totalIn -= ft * 12;
-  return `${sign}${ft}′ ${totalIn}″`;
-}
-
 /** Parses 41' 6", 41'6, 41 ft 6 in, 41.5 (feet) or 498" (inches) into metres; null when unreadable. */
 export function parseFeetInches(text: string): number | null {
   const t = text.trim().replace(/[′’]/g, "'").replace(/[″”]/g, '"');
@@ -41,22 +32,4 @@ export function parseFeetInches(text: string): number | null {
   const bare = t.match(/^-?\d+(?:\.\d+)?$/);
   if (bare) return ftToM(Number(t));
   return null;
-}
-
-const group = (n: number, digits = 0) => n.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits });
-
-export function formatLength(m: number, units: UnitSystem): string {
-  return units === 'metric' ? `${group(m, 2)} m` : formatFeetInches(m);
-}
-
-export function formatMass(kg: number, units: UnitSystem): string {
-  return units === 'metric' ? `${group(kg)} kg` : `${group(kgToLb(kg))} lb`;
-}
-
-export function formatPressure(kpa: number, units: UnitSystem): string {
-  return units === 'metric' ? `${group(kpa, 0)} kPa` : `${group(kpaToPsf(kpa))} psf`;
-}
-
-export function formatForce(kn: number, units: UnitSystem): string {
-  return units === 'metric' ? `${group(kn, 1)} kN` : `${group(kgToLb(knToKg(kn)))} lbf`;
 }

@@ -3,6 +3,8 @@ import * as foundation from './2026-12-01T00-00_foundation';
 import * as sceneUploads from './2026-12-01T22-45_scene-uploads';
 import * as equipmentLibrary from './2026-12-01T23-00_equipment-library';
 import * as reviewDesk from './2026-12-02T11-00_review-desk';
+import * as planDetails from './2026-12-02T12-00_plan-details';
+import * as lessons from './2026-12-02T13-00_lessons';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -13,4 +15,6 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01T22-45_scene-uploads': sceneUploads,
   '2026-12-01T23-00_equipment-library': equipmentLibrary,
   '2026-12-02T11-00_review-desk': reviewDesk,
+  '2026-12-02T12-00_plan-details': planDetails,
+  '2026-12-02T13-00_lessons': lessons,
 };

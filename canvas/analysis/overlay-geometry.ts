@@ -2,7 +2,7 @@ import type { SceneDocument } from '../document/schema';
 import type { LoadObject, TruckObject } from '../document/objects';
 import type { TruckModel } from '../truck/truck-model';
 import type { LiveAnalysis } from './live-analysis';
-import type { LiftResult, PreparedLift } from '@/lib/lift';
+import { sideOf, type LiftResult, type PreparedLift, type TruckSide } from '@/lib/lift';
 import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '../geometry/vec';
 import { hookSitePoint, hookRadius } from '../shapes/truck/geometry';
 import { loadLocalOutline } from '../shapes/load/geometry';
@@ -11,6 +11,8 @@ import { closestPoints } from './closest-points';
 
 export interface TippingLineMark {
   id: string;
+  /** Which side of the truck the line lies on, for its label. */
+  side: TruckSide;
   a: Pt;
   b: Pt;
   percent: number;
@@ -52,7 +54,7 @@ export interface OverlayGeometry {
   direction: 'ccw' | 'cw';
   pick: Pt;
   set: Pt;
-  worst: { slew: number; percent: number; line: string; from: Pt; to: Pt; over: boolean } | null;
+  worst: { slew: number; percent: number; line: string; side: TruckSide; from: Pt; to: Pt; over: boolean } | null;
   clearances: ClearanceMark[];
   nearestNow: ClearanceMark | null;
   powerZones: PowerZone[];
@@ -93,7 +95,7 @@ export function overlayGeometry(a: LiveAnalysis | null, doc: SceneDocument, mode
   const governing = a.snapshot?.governing?.line ?? null;
   const lines: TippingLineMark[] = p.lines.map((l, i) => {
     const pct = a.snapshot?.lines[i]?.percentOfTipping ?? 0;
-    return { id: l.id, ...s.lineEnds[i], percent: pct, margin: limit - pct, governing: l.id === governing, over: pct > limit };
+    return { id: l.id, side: sideOf(l.nx, l.ny), ...s.lineEnds[i], percent: pct, margin: limit - pct, governing: l.id === governing, over: pct > limit };
   });
   let nearestNow: ClearanceMark | null = null;
   if (a.snapshot && a.snapshot.clearances.length) {
@@ -130,7 +132,7 @@ function swingGeometryOf(a: LiveAnalysis, doc: SceneDocument, model: TruckModel)
 
   const res = a.result;
   const worst = res
-    ? { slew: res.worstCase.slew, percent: res.worstCase.percentOfTipping, line: res.worstCase.line, from: { x: truck.x, y: truck.y }, to: at(res.worstCase.slew, r + reach + 2), over: res.worstCase.percentOfTipping > limit }
+    ? { slew: res.worstCase.slew, percent: res.worstCase.percentOfTipping, line: res.worstCase.line, side: res.tippingLines.find((l) => l.id === res.worstCase.line)?.side ?? 'front', from: { x: truck.x, y: truck.y }, to: at(res.worstCase.slew, r + reach + 2), over: res.worstCase.percentOfTipping > limit }
     : null;
 
   const names = a.lift.ok ? a.lift.names : {};

@@ -56,15 +56,16 @@ export function sceneToLiftInput(doc: SceneDocument, model: TruckModel | null): 
   const names: Record<string, string> = { tailboard: 'tailboard', body: 'body', cab: 'cab' };
   const obstacles = doc.objects.filter((o): o is ObstacleObject => o.kind === 'obstacle');
   const trailers = doc.objects.filter((o): o is TrailerObject => o.kind === 'trailer');
-  const prisms = [
-    ...obstacles.filter((o) => o.shape.kind !== 'line').map((o) => ({ id: o.id, polygon: obstacleFootprints(o)[0], top: o.height })),
-    ...trailers.map((t) => ({ id: t.id, polygon: trailerFootprints(t)[0], top: t.deckHeight })),
-  ];
   for (const o of obstacles) names[o.id] = o.label || (o.obstacleKind === 'power-line' ? 'power line' : o.obstacleKind.replace('-', ' '));
   for (const t of trailers) names[t.id] = t.label || 'receiving trailer';
+  // Names go into the engine input so that its checks carry them; results never show an object id.
+  const prisms = [
+    ...obstacles.filter((o) => o.shape.kind !== 'line').map((o) => ({ id: o.id, name: names[o.id], polygon: obstacleFootprints(o)[0], top: o.height })),
+    ...trailers.map((t) => ({ id: t.id, name: names[t.id], polygon: trailerFootprints(t)[0], top: t.deckHeight })),
+  ];
   const powerLines = obstacles.flatMap((o) => {
     const ends = wireEnds(o);
-    return ends ? [{ id: o.id, a: { ...ends[0], z: o.height }, b: { ...ends[1], z: o.height }, kV: o.voltageKV }] : [];
+    return ends ? [{ id: o.id, name: names[o.id], a: { ...ends[0], z: o.height }, b: { ...ends[1], z: o.height }, kV: o.voltageKV }] : [];
   });
   const slings = load.rigging.filter((r) => !isShackle(r.kind));
   const shackles = load.rigging.filter((r) => isShackle(r.kind));
@@ -83,8 +84,8 @@ export function sceneToLiftInput(doc: SceneDocument, model: TruckModel | null): 
     ...(load.rigging.length
       ? {
           rigging: {
-            slings: slings.map((r) => ({ id: r.tag, verticalRating: r.ratings?.vertical ?? r.ratingKg, hitch: r.hitch, angleFromHorizontal: r.angleFromHorizontal, legs: r.legs })),
-            shackles: shackles.map((r) => ({ id: r.tag, wll: r.ratingKg, legs: r.legs, angleFromHorizontal: r.angleFromHorizontal })),
+            slings: slings.map((r) => ({ id: r.tag, name: r.tag, verticalRating: r.ratings?.vertical ?? r.ratingKg, hitch: r.hitch, angleFromHorizontal: r.angleFromHorizontal, legs: r.legs })),
+            shackles: shackles.map((r) => ({ id: r.tag, name: r.tag, wll: r.ratingKg, legs: r.legs, angleFromHorizontal: r.angleFromHorizontal })),
           },
         }
       : {}),

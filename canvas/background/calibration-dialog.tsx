@@ -1,7 +1,8 @@
 'use client';
 
 import { useEffect, useRef, useState } from 'react';
-import { formatLength, mToIn, type UnitSystem } from '@/lib/units';
+import { mToIn, type UnitSystem } from '@/lib/units';
+import { formatLength } from '@/lib/format/quantity';
 import { BodyPortal } from '../persistence/portal';
 import { applyCalibration, CalibrationError, parseDistance, type BackgroundPlacement, type ImagePoint } from './calibration';
 

@@ -1,12 +1,13 @@
 'use client';
 import { Label, Line, Tag, Text } from 'react-konva';
-import { formatLength, type UnitSystem } from '@/lib/units';
+import type { UnitSystem } from '@/lib/units';
+import { tippingLineShort, tippingMargin } from '@/lib/format/checks';
+import { formatAngle, formatLength, formatPercent } from '@/lib/format/quantity';
 import { PAL } from '../view/palette';
 import type { OverlayGeometry } from '../analysis/overlay-geometry';
 import type { Pt } from '../geometry/vec';
 import type { LabelBox } from './label-placement';
 
-const pct = (n: number) => `${n.toFixed(1)} %`;
 
 export type PillTone = 'ok' | 'over' | 'plain' | 'live' | 'text';
 
@@ -48,11 +49,11 @@ export function analysisPillItems(g: OverlayGeometry, at: (p: Pt) => Pt, units: 
   }
   for (const l of g.lines) {
     if (!l.governing && !l.over && l.percent <= 0) continue;
-    const text = l.over ? `${l.id} OVER by ${(-l.margin).toFixed(1)} pts` : `${l.id} margin ${l.margin.toFixed(1)} pts`;
+    const text = `${tippingLineShort({ side: l.side, code: l.id })}: ${tippingMargin(l.percent, l.percent + l.margin)}${l.over ? ' — OVER LIMIT' : ''}`;
     out.push({ key: `line-${l.id}`, anchor: at({ x: (l.a.x + l.b.x) / 2, y: (l.a.y + l.b.y) / 2 }), tone: l.over ? 'over' : l.governing ? 'ok' : 'plain', priority: l.over ? 0 : l.governing ? 2 : 4, text });
   }
   if (g.worst) {
-    out.push({ key: 'worst', anchor: at(g.worst.to), tone: g.worst.over ? 'over' : 'plain', priority: 1, text: `Worst case ${g.worst.slew.toFixed(1)}°: ${pct(g.worst.percent)} of tipping about ${g.worst.line}${g.worst.over ? ' — OVER LIMIT' : ''}` });
+    out.push({ key: 'worst', anchor: at(g.worst.to), tone: g.worst.over ? 'over' : 'plain', priority: 1, text: `Worst case ${formatAngle(g.worst.slew)}: ${formatPercent(g.worst.percent)} of tipping about the ${tippingLineShort({ side: g.worst.side, code: g.worst.line })}${g.worst.over ? ' — OVER LIMIT' : ''}` });
   }
   for (const c of g.clearances) {
     const v = `${c.vertical ? 'above by ' : ''}${formatLength(c.value, units)}`;

@@ -1,6 +1,7 @@
 'use client';
 import { useEffect, useState } from 'react';
-import { formatFeetInches, kgToLb, lbToKg, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { kgToLb, lbToKg, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { formatFeetInches } from '@/lib/format/quantity';
 
 interface FieldProps<T> {
   label: string;

@@ -3,6 +3,7 @@ import { useEditorContext, useEditorState } from '../editor-context';
 import { setSlew } from '../commands/truck';
 import { useDisplaySlew } from '../view/use-display-slew';
 import { LiveReadout } from './live-readout';
+import { arcOf } from '@/lib/lift/swing';
 
 /** The slew slider under the plan: drag it, or use ← →; the boom, the load and every readout follow. */
 export function SlewScrubber() {
@@ -41,6 +42,7 @@ export function SlewScrubber() {
       </span>
       <span className="text-xs text-ink-muted">
         pick {swing.from}° → set {swing.to}° {swing.direction === 'ccw' ? '(counter-clockwise)' : '(clockwise)'}
+        {arcOf(swing).fullTurn ? ', a full turn' : ''}
       </span>
       <LiveReadout />
     </div>

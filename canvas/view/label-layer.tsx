@@ -3,7 +3,7 @@ import { useRef, type ReactElement } from 'react';
 import { Label, Tag, Text } from 'react-konva';
 import { useEditorState } from '../editor-context';
 import { worldToScreen } from '../editor/camera';
-import { formatLength } from '@/lib/units';
+import { formatLength } from '@/lib/format/quantity';
 import { tapeLength } from '../shapes/tape/geometry';
 import { PAL } from './palette';
 import { analysisPillItems, Pill, PILL_FONT, PILL_PAD, type PillItem } from '../overlays/analysis-labels';

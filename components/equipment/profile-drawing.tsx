@@ -1,7 +1,8 @@
 'use client';
 
 import type { TruckSpec } from '@/lib/equipment/truck-spec';
-import { formatLength, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatLength } from '@/lib/format/quantity';
 
 /**
  * A to-scale plan and side view drawn straight from the profile's numbers (carrier frame: x forward from

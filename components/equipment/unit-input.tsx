@@ -3,7 +3,8 @@
 import { useEffect, useId, useState } from 'react';
 import { FieldFrame, controlClasses, describedBy } from '@/components/ui/field';
 import { cx } from '@/components/ui/cx';
-import { formatFeetInches, inToM, kgToLb, lbToKg, mToIn, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { inToM, kgToLb, lbToKg, mToIn, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { formatFeetInches } from '@/lib/format/quantity';
 
 export type Quantity = 'length' | 'diameter' | 'mass' | 'angle' | 'fraction' | 'count' | 'area';
 

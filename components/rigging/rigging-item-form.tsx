@@ -12,7 +12,8 @@ import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { CHAIN_GRADES, CHAIN_SIZES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
-import { formatMass, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatMass } from '@/lib/format/quantity';
 import { UnitInput } from '@/components/equipment/unit-input';
 import { KIND_LABEL, STATUS_LABEL } from './labels';
 

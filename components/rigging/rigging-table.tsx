@@ -13,7 +13,8 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { SelectField } from '@/components/ui/select';
 import { Notice } from '@/components/ui/notice';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { formatLength, formatMass, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatLength, formatMass } from '@/lib/format/quantity';
 import { KIND_LABEL, STATUS_LABEL, dueState } from './labels';
 import { RiggingImport } from './rigging-import';
 

@@ -7,7 +7,8 @@ import { Button } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import { Notice } from '@/components/ui/notice';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { formatLength, formatMass, formatPressure, type UnitSystem } from '@/lib/units';
+import { type UnitSystem } from '@/lib/units';
+import { formatLength, formatMass, formatPressure } from '@/lib/format/quantity';
 
 // Sample values to show what each choice looks like: a 12.5 m radius, a 9,000 kg load, 150 kPa under a pad.
 const SAMPLE = { radius: 12.5, mass: 9000, pressure: 150 };

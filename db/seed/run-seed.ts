@@ -8,6 +8,8 @@ import { createEquipmentProfile } from '../repositories/equipment';
 import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
 import { REVIEW_SCENES } from './demo-review-scenes';
 import { seedDemoReview } from './demo-review';
+import { DEMO_PLAN_DETAILS } from './demo-plan-details';
+import { planDetailsSchema } from '@/lib/plan-details/schema';
 
 /** Inserts the invented demo scenario into an empty database, in one transaction. Returns false if data exists. */
 export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
@@ -58,6 +60,11 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
         .returning('id')
         .executeTakeFirstOrThrow();
       await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: owner, created_at: now }).execute();
+      const details = DEMO_PLAN_DETAILS[s.title];
+      if (details) {
+        const json = JSON.stringify(planDetailsSchema.parse(details));
+        await trx.insertInto('scene_plan_details').values({ organisation_id: orgIds.get(s.org)!, scene_id: row.id, revision: 1, details: json, author_id: owner, created_at: now }).execute();
+      }
     }
     await seedDemoReview(trx);
   });

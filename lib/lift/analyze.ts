@@ -1,11 +1,12 @@
 import { CAUTION_LINES } from '@/lib/caution';
 import { reactionMaxima, type ReactionMaximum } from './bearing';
-import { bearingCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck, type Check } from './checks';
+import { bearingCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck, lineSubject, type Check, type UpperWeight } from './checks';
+import { sideOf } from './names';
 import { clearanceOver } from './clearance';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
 import { powerLineOver } from './power-lines';
-import { prepareLift, withLoadMass, type PreparedLift } from './prepare';
+import { prepareLift, slewAt, withLoadMass, type PreparedLift } from './prepare';
 import { createReactionState, describeReactions, reactionsAt } from './reactions';
 import type { LiftResult, WorstCase } from './result';
 import { shackleVerdict, slingVerdict, winchVerdict, type RiggingVerdict } from './rigging';
@@ -44,12 +45,12 @@ function riggingVerdicts(p: PreparedLift): RiggingVerdict[] {
   ];
 }
 
-function massChecks(p: PreparedLift, worst: WorstCase, maxima: ReactionMaximum[], rigging: RiggingVerdict[], label: string): Check[] {
+function massChecks(p: PreparedLift, worst: WorstCase, maxima: ReactionMaximum[], rigging: RiggingVerdict[], uw: UpperWeight): Check[] {
   const { limits, soil, supports, loadChart, boom } = p.input;
-  const checks = [stabilityCheck(label ? 'stability:upper-weight' : 'stability', worst.percentOfTipping, worst.slew, worst.line, limits.percentOfTipping, label)];
-  maxima.forEach((m, i) => checks.push(bearingCheck(m, soil.allowable, supports[i].cribbingArea !== undefined, label)));
-  rigging.forEach((r) => checks.push(riggingCheck(r, label)));
-  if (loadChart) checks.push(loadChartCheck(percentOfRated(loadChart, p.radius, boom.length, p.hookLoad), p.radius, limits.percentOfRated, label));
+  const checks = [stabilityCheck(p, worst, limits.percentOfTipping, uw)];
+  maxima.forEach((m, i) => checks.push(bearingCheck(p, m, soil.allowable, supports[i].cribbingArea !== undefined, uw)));
+  rigging.forEach((r) => checks.push(riggingCheck(r, uw)));
+  if (loadChart) checks.push(loadChartCheck(percentOfRated(loadChart, p.radius, boom.length, p.hookLoad), p.radius, boom.length, limits.percentOfRated, uw));
   return checks;
 }
 
@@ -80,7 +81,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
   const cgx = (p.fixedMx + rx + p.hookLoad * hx) / W;
   const cgy = (p.fixedMy + ry + p.hookLoad * hy) / W;
 
-  const checks = massChecks(p, worst, maxima, rigging, '');
+  const checks = massChecks(p, worst, maxima, rigging, null);
   clearances.forEach((c) => checks.push(clearanceCheck(c, p.input.limits.clearance)));
   powerLines.forEach((l) => checks.push(powerLineCheck(l)));
 
@@ -90,14 +91,15 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
     const u = worstCaseOf(up, step).worst;
     const uMax = reactionMaxima(up, step);
     upper = { loadMass: up.input.load.mass, hookLoad: up.hookLoad, worstCase: u, reactionMaxima: uMax };
-    const label = `At the upper weight (${p.input.weightUncertainty} % over, ${Math.round(up.input.load.mass)} kg): `;
-    checks.push(...massChecks(up, u, uMax, riggingVerdicts(up), label));
+    const uw = { percent: p.input.weightUncertainty, loadMass: up.input.load.mass };
+    checks.push(...massChecks(up, u, uMax, riggingVerdicts(up), uw));
   }
 
   const chart = p.input.loadChart;
   return {
+    arc: { from: p.from, to: slewAt(p, p.span), direction: p.input.swing.direction, span: p.span, fullTurn: p.fullTurn },
     tippingLines: p.lines.map((l) => ({
-      id: l.id, from: l.from, to: l.to, distanceFromAxis: l.distanceFromAxis, distanceFromCG: insideDistance(l, cgx, cgy),
+      id: l.id, from: l.from, to: l.to, names: lineSubject(p, l.id).names as [string, string], side: sideOf(l.nx, l.ny), distanceFromAxis: l.distanceFromAxis, distanceFromCG: insideDistance(l, cgx, cgy),
       a: { x: l.ax, y: l.ay }, b: { x: l.bx, y: l.by },
     })),
     worstCase: worst,

@@ -1,3 +1,5 @@
+import { LiftError } from './errors';
+import { normalizeDegrees } from './types';
 import { clearanceAt, type Clearance } from './clearance';
 import { powerLineAt, type PowerLineClearance } from './power-lines';
 import type { PreparedLift } from './prepare';
@@ -23,7 +25,12 @@ export interface SlewSnapshot {
   powerLines: PowerLineClearance[];
 }
 
-export function analyzeAtSlew(p: PreparedLift, slew: number): SlewSnapshot {
+export function analyzeAtSlew(p: PreparedLift, at: number): SlewSnapshot {
+  // A NaN slew would make every figure NaN, and every comparison with a limit false: refuse it.
+  if (typeof at !== 'number' || !Number.isFinite(at)) {
+    throw new LiftError('invalid-input', `The slew must be a finite number of degrees; ${String(at)} is not.`, 'slew');
+  }
+  const slew = normalizeDegrees(at);
   const perLine = new Float64Array(p.lines.length);
   const hit = tippingAt(p, slew, perLine);
   const state = reactionsAt(p, slew, createReactionState(p.supportX.length));

@@ -1,4 +1,5 @@
 import { G } from '@/lib/units';
+import { padName } from './names';
 import { slewAt, type PreparedLift } from './prepare';
 import { createReactionState, reactionsAt } from './reactions';
 import { goldenMax } from './search';
@@ -10,6 +11,8 @@ import { REFINE_TOL } from './sweep';
  */
 export interface ReactionMaximum {
   support: string;
+  /** The pad's name ("left rear"): the input's name, else the usual name for its code. */
+  name: string;
   /** kN */
   force: number;
   mass: number;
@@ -57,6 +60,6 @@ export function reactionMaxima(p: PreparedLift, sweepStep = 1): ReactionMaximum[
     m = Math.max(0, m);
     const force = (m * G) / 1000;
     const pressure = sup.cribbingArea ? ((m + (sup.cribbingMass ?? 0)) * G) / 1000 / sup.cribbingArea : force / sup.area;
-    return { support: sup.id, force, mass: m, slew: slewAt(p, t), pressure, liftsOff: liftsOff[i] === 1 };
+    return { support: sup.id, name: sup.name ?? padName(sup.id, sup.x, sup.y), force, mass: m, slew: slewAt(p, t), pressure, liftsOff: liftsOff[i] === 1 };
   });
 }

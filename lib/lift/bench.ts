@@ -88,7 +88,7 @@ function naiveAnalysis(input: LiftInputIn) {
     });
   }
   const clearances: Clearance[] = p.targets.map((t, i) => ({
-    target: t.id, kind: t.kind, horizontal: best[i].gap, vertical: p.loadBottom - t.top, slew: best[i].slew,
+    target: t.id, name: t.name, kind: t.kind, horizontal: best[i].gap, vertical: p.loadBottom - t.top, slew: best[i].slew,
     overlapsInPlan: best[i].gap <= 0, conflict: best[i].gap <= 0 && p.loadBottom < t.top,
   }));
   return { ...result, clearances };

@@ -1,95 +1,159 @@
 import type { ReactionMaximum } from './bearing';
 import type { Clearance } from './clearance';
 import type { ChartLookup } from './load-chart';
-import type { PowerLineClearance } from './power-lines';
-import type { RiggingVerdict } from './rigging';
+import { padName, sideOf, type TruckSide } from './names';
+import type { PowerLineClearance, PowerLineRule } from './power-lines';
+import type { PreparedLift } from './prepare';
+import type { RiggingFacts, RiggingVerdict } from './rigging';
 
 /**
- * Every verdict of an analysis, with a sentence a person can read. The wording reports margins against
- * the plan's limits ("within limit", "over limit"); it never calls a lift safe.
+ * Every verdict of an analysis as data: what was checked (a stable code and the subject, by id and by
+ * name), the figure and the plan's limit in SI, their ratio and a status. There is no sentence here: the
+ * one formatter (lib/format/checks.ts) writes the words, in the viewer's units, for every surface.
  */
-export interface Check {
+export type QuantityKind = 'force' | 'pressure' | 'length' | 'angle' | 'percent' | 'mass';
+export type CheckStatus = 'within' | 'near' | 'beyond';
+export type CheckCode = 'stability' | 'bearing' | 'clearance' | 'power-line' | 'rigging' | 'load-chart';
+export type SubjectKind = 'tipping-line' | 'pad' | 'truck-part' | 'obstacle' | 'power-line' | 'sling' | 'shackle' | 'winch' | 'load-chart';
+
+/** SI units of each quantity kind inside the engine. */
+export const SI_UNIT: Record<QuantityKind, string> = { force: 'kN', pressure: 'kPa', length: 'm', angle: '°', percent: '%', mass: 'kg' };
+
+export interface CheckSubject {
+  kind: SubjectKind;
+  /** Input ids (pad codes, obstacle ids, rigging tags); a tipping line has its two pads' ids. */
+  ids: string[];
+  /** Names for people, one per id ("left rear", "shed"). */
+  names: string[];
+  /** Tipping lines only: the line's short code ("RL-RR") and the side of the truck it lies on. */
+  line?: { code: string; side: TruckSide };
+}
+
+interface CheckBase {
+  /** Unique within a result and stable between runs: "bearing:FL", "clearance:cab", "stability:upper-weight". */
   id: string;
-  ok: boolean;
+  code: CheckCode;
+  subject: CheckSubject;
+  quantity: QuantityKind;
+  /** The computed figure in SI (see SI_UNIT); null when there is none (no chart rating). */
   value: number | null;
+  /** The plan's limit in SI; null when it must be set by someone else (a utility). */
   limit: number | null;
-  unit: '%' | 'kPa' | 'm' | 'kg';
-  reason: string;
+  /** value ÷ limit; null when either is missing. */
+  ratio: number | null;
+  /** 'at-most': the value must not exceed the limit; 'at-least': it must not fall below it. */
+  sense: 'at-most' | 'at-least';
+  status: CheckStatus;
+  /** status !== 'beyond'. */
+  ok: boolean;
+  /** Slew of the figure, degrees (null where the check does not depend on the slew). */
+  slew: number | null;
+  /** Set for the checks repeated at the upper end of the load's weight uncertainty. */
+  upperWeight: { percent: number; loadMass: number } | null;
 }
 
-/** Fixed decimals with thousands separators; toLocaleString is far slower and this runs per check. */
-function f(n: number, d = 1): string {
-  const [int, frac] = Math.abs(n).toFixed(d).split('.');
-  const grouped = int.length > 3 ? int.replace(/\B(?=(\d{3})+(?!\d))/g, ',') : int;
-  return (n < 0 && Number(n.toFixed(d)) !== 0 ? '−' : '') + grouped + (frac ? `.${frac}` : '');
-}
-const verdict = (ok: boolean) => (ok ? 'within limit' : 'over limit');
+export type Check =
+  | (CheckBase & { code: 'stability'; facts: { tippingLoad: number | null } })
+  | (CheckBase & { code: 'bearing'; facts: { force: number; underCribbing: boolean; liftsOff: boolean } })
+  | (CheckBase & { code: 'clearance'; facts: Omit<Clearance, 'target' | 'name' | 'kind' | 'slew'> & { part: 'load' } })
+  | (CheckBase & { code: 'power-line'; facts: { nearest: PowerLineClearance['nearest']; rule: PowerLineRule } })
+  | (CheckBase & { code: 'rigging'; facts: RiggingFacts & { element: RiggingVerdict['element'] } })
+  | (CheckBase & { code: 'load-chart'; facts: Omit<ChartLookup, 'rated'> & { rated: number | null; radius: number; boomLength: number } });
 
-export function stabilityCheck(id: string, pct: number, slew: number, line: string, limit: number, label = ''): Check {
-  const ok = pct <= limit;
-  const margin = ok ? `margin ${f(limit - pct)} points` : `${f(pct - limit)} points over`;
+/**
+ * Within 10 % of a limit counts as near it (common practice, no published source): the figure is
+ * within the plan's limit but there is little left.
+ */
+export const NEAR_FRACTION = 0.9;
+
+export function statusOf(value: number | null, limit: number | null, sense: CheckBase['sense']): CheckStatus {
+  if (value === null || limit === null) return 'beyond';
+  if (sense === 'at-most') return value > limit ? 'beyond' : value >= NEAR_FRACTION * limit ? 'near' : 'within';
+  return value < limit ? 'beyond' : value * NEAR_FRACTION <= limit ? 'near' : 'within';
+}
+
+type Figures = Pick<CheckBase, 'value' | 'limit' | 'sense'> & { status?: CheckStatus };
+function figures(f: Figures): Pick<CheckBase, 'value' | 'limit' | 'ratio' | 'sense' | 'status' | 'ok'> {
+  const status = f.status ?? statusOf(f.value, f.limit, f.sense);
+  const ratio = f.value !== null && f.limit !== null && f.limit !== 0 ? f.value / f.limit : null;
+  return { value: f.value, limit: f.limit, ratio, sense: f.sense, status, ok: status !== 'beyond' };
+}
+
+export type UpperWeight = CheckBase['upperWeight'];
+const suffix = (uw: UpperWeight) => (uw ? ':upper-weight' : '');
+
+function supportName(p: PreparedLift, id: string): string {
+  const s = p.input.supports.find((x) => x.id === id);
+  return s?.name ?? padName(id, s?.x ?? 0, s?.y ?? 0);
+}
+
+/** A tipping line as a subject: its two pads by id and name, its code and the side it lies on. */
+export function lineSubject(p: PreparedLift, lineId: string): CheckSubject {
+  const l = p.lines.find((x) => x.id === lineId);
+  if (!l) return { kind: 'tipping-line', ids: [], names: [], line: { code: lineId, side: 'front' } };
+  return { kind: 'tipping-line', ids: [l.from, l.to], names: [supportName(p, l.from), supportName(p, l.to)], line: { code: l.id, side: sideOf(l.nx, l.ny) } };
+}
+
+export function padSubject(p: PreparedLift, id: string): CheckSubject {
+  return { kind: 'pad', ids: [id], names: [supportName(p, id)] };
+}
+
+export function stabilityCheck(p: PreparedLift, worst: { slew: number; percentOfTipping: number; line: string; tippingLoad: number | null }, limit: number, uw: UpperWeight = null): Check {
   return {
-    id, ok, value: pct, limit, unit: '%',
-    reason: `${label}Worst case at slew ${f(slew)}°: the hook load is ${f(pct)} % of the tipping load about line ${line}; the plan's limit is ${f(limit, 0)} % (${verdict(ok)}, ${margin}).`,
+    id: `stability${suffix(uw)}`, code: 'stability', subject: lineSubject(p, worst.line), quantity: 'percent',
+    ...figures({ value: worst.percentOfTipping, limit, sense: 'at-most' }),
+    slew: worst.slew, upperWeight: uw, facts: { tippingLoad: worst.tippingLoad },
   };
 }
 
-export function bearingCheck(m: ReactionMaximum, allowable: number, withCribbing: boolean, label = ''): Check {
-  const ok = m.pressure <= allowable;
-  const under = withCribbing ? 'the cribbing' : 'the pad';
+export function bearingCheck(p: PreparedLift, m: ReactionMaximum, allowable: number, underCribbing: boolean, uw: UpperWeight = null): Check {
   return {
-    id: `bearing:${m.support}${label ? ':upper-weight' : ''}`, ok, value: m.pressure, limit: allowable, unit: 'kPa',
-    reason: `${label}Support ${m.support} presses ${f(m.pressure, 0)} kPa on the ground under ${under} at slew ${f(m.slew)}° (${f(m.force)} kN); allowable ${f(allowable, 0)} kPa, ${verdict(ok)} (${f(Math.abs(100 - (100 * m.pressure) / allowable), 0)} % ${ok ? 'below' : 'above'}).`,
+    id: `bearing:${m.support}${suffix(uw)}`, code: 'bearing', subject: padSubject(p, m.support), quantity: 'pressure',
+    ...figures({ value: m.pressure, limit: allowable, sense: 'at-most' }),
+    slew: m.slew, upperWeight: uw, facts: { force: m.force, underCribbing, liftsOff: m.liftsOff },
   };
 }
 
+/**
+ * The load clears a part when it passes far enough beside it or far enough above it. The figure is the
+ * one that decides: the vertical gap where the load passes over it, else the plan gap, unless only the
+ * vertical gap meets the limit.
+ */
 export function clearanceCheck(c: Clearance, limit: number): Check {
   const beside = c.horizontal >= limit;
   const above = c.vertical >= limit;
-  const ok = beside || above;
-  const what = c.kind === 'body' ? 'truck part' : 'obstacle';
-  let reason: string;
-  if (!c.overlapsInPlan) {
-    reason = `The load passes ${f(c.horizontal, 2)} m from ${what} ${c.target} in plan (nearest at slew ${f(c.slew)}°)` +
-      (beside ? `; limit ${f(limit, 2)} m, within limit.` : above ? ` and ${f(c.vertical, 2)} m above its top; within limit.` : `, ${f(c.vertical, 2)} m above its top; limit ${f(limit, 2)} m, over limit.`);
-  } else {
-    reason = `The load passes over ${what} ${c.target} (from slew ${f(c.slew)}°) with its bottom ${f(c.vertical, 2)} m ${c.vertical >= 0 ? 'above' : 'below'} the top` +
-      (above ? `; limit ${f(limit, 2)} m, within limit.` : c.conflict ? ': the load would strike it, over limit.' : `; limit ${f(limit, 2)} m, over limit.`);
-  }
-  return { id: `clearance:${c.target}`, ok, value: c.overlapsInPlan ? c.vertical : c.horizontal, limit, unit: 'm', reason };
+  const value = c.overlapsInPlan || (!beside && above) ? c.vertical : c.horizontal;
+  const status = !(beside || above) ? 'beyond' : statusOf(Math.max(c.horizontal, c.vertical), limit, 'at-least');
+  return {
+    id: `clearance:${c.target}`, code: 'clearance',
+    subject: { kind: c.kind === 'body' ? 'truck-part' : 'obstacle', ids: [c.target], names: [c.name] }, quantity: 'length',
+    ...figures({ value, limit, sense: 'at-least', status }),
+    slew: c.slew, upperWeight: null,
+    facts: { horizontal: c.horizontal, vertical: c.vertical, overlapsInPlan: c.overlapsInPlan, conflict: c.conflict, part: 'load' },
+  };
 }
 
 export function powerLineCheck(pl: PowerLineClearance): Check {
-  if (pl.required === null) {
-    return {
-      id: `power-line:${pl.id}`, ok: false, value: pl.distance, limit: null, unit: 'm',
-      reason: `The nearest approach to line ${pl.id} is ${f(pl.distance, 2)} m (${pl.nearest}, slew ${f(pl.slew)}°); the required clearance must be set by the utility or a registered engineer (${pl.rule}).`,
-    };
-  }
-  const ok = pl.distance >= pl.required;
   return {
-    id: `power-line:${pl.id}`, ok, value: pl.distance, limit: pl.required, unit: 'm',
-    reason: `The ${pl.nearest} comes within ${f(pl.distance, 2)} m of line ${pl.id} at slew ${f(pl.slew)}°; required ${f(pl.required, 2)} m (${pl.rule}), ${verdict(ok)}.`,
+    id: `power-line:${pl.id}`, code: 'power-line', subject: { kind: 'power-line', ids: [pl.id], names: [pl.name] }, quantity: 'length',
+    ...figures({ value: pl.distance, limit: pl.required, sense: 'at-least' }),
+    slew: pl.slew, upperWeight: null, facts: { nearest: pl.nearest, rule: pl.rule },
   };
 }
 
-export function riggingCheck(r: RiggingVerdict, label = ''): Check {
-  const ok = r.demand <= r.capacity;
-  const what = r.element === 'winch' ? `Line pull on the winch is ${f(r.demand, 0)} kg against a rated pull of` : `${r.element === 'sling' ? 'Sling' : 'Shackle'} ${r.id} carries ${f(r.demand, 0)} kg against a capacity of`;
+export function riggingCheck(r: RiggingVerdict, uw: UpperWeight = null): Check {
   return {
-    id: `rigging:${r.element}:${r.id}${label ? ':upper-weight' : ''}`, ok, value: r.demand, limit: r.capacity, unit: 'kg',
-    reason: `${label}${what} ${f(r.capacity, 0)} kg (${r.detail}); ${verdict(ok)}, ${f((100 * r.demand) / r.capacity, 0)} % used.`,
+    id: `rigging:${r.element}:${r.id}${suffix(uw)}`, code: 'rigging', subject: { kind: r.element, ids: [r.id], names: [r.name] }, quantity: 'mass',
+    ...figures({ value: r.demand, limit: r.capacity, sense: 'at-most' }),
+    slew: null, upperWeight: uw, facts: { ...r.facts, element: r.element },
   };
 }
 
-export function loadChartCheck(look: ChartLookup & { percent: number | null }, radius: number, limit: number, label = ''): Check {
-  const id = `load-chart${label ? ':upper-weight' : ''}`;
-  if (look.percent === null) {
-    return { id, ok: false, value: null, limit, unit: '%', reason: `${label}No rated capacity for this lift: ${look.reason}. A lookup outside the chart is not extrapolated.` };
-  }
-  const ok = look.percent <= limit;
+export function loadChartCheck(look: ChartLookup & { percent: number | null }, radius: number, boomLength: number, limit: number, uw: UpperWeight = null): Check {
   return {
-    id, ok, value: look.percent, limit, unit: '%',
-    reason: `${label}At ${f(radius, 2)} m radius the hook load is ${f(look.percent)} % of the chart's rated ${f(look.rated ?? 0, 0)} kg (read at ${look.radiusUsed} m radius, ${look.boomLengthUsed} m boom, no interpolation); limit ${f(limit, 0)} %, ${verdict(ok)}.`,
+    id: `load-chart${suffix(uw)}`, code: 'load-chart', subject: { kind: 'load-chart', ids: [], names: [] }, quantity: 'percent',
+    ...figures({ value: look.percent, limit, sense: 'at-most' }),
+    slew: null, upperWeight: uw,
+    facts: { rated: look.rated, radiusUsed: look.radiusUsed, boomLengthUsed: look.boomLengthUsed, missing: look.missing, radius, boomLength },
   };
 }

@@ -11,6 +11,8 @@ import { lipschitzMin } from './search';
  */
 export interface Clearance {
   target: string;
+  /** What results call the part or obstacle (the input's name, else its id). */
+  name: string;
   kind: 'body' | 'obstacle';
   /** Smallest plan gap over the swing, m (0 when the outlines overlap in plan). */
   horizontal: number;
@@ -81,7 +83,7 @@ export function clearanceAt(p: PreparedLift, target: Target, deg: number): Clear
 function describe(p: PreparedLift, target: Target, horizontal: number, slew: number): Clearance {
   const vertical = p.loadBottom - target.top;
   const overlapsInPlan = horizontal <= 0;
-  return { target: target.id, kind: target.kind, horizontal, vertical, slew, overlapsInPlan, conflict: overlapsInPlan && vertical < 0 };
+  return { target: target.id, name: target.name, kind: target.kind, horizontal, vertical, slew, overlapsInPlan, conflict: overlapsInPlan && vertical < 0 };
 }
 
 /** The plan's clearance limit is met when the load passes far enough beside it or far enough above it. */

@@ -23,3 +23,4 @@ export * from './result';
 export * from './analyze';
 export * from './at-slew';
 export * from './search';
+export * from './names';

@@ -11,8 +11,11 @@ export interface ChartLookup {
   rated: number | null;
   radiusUsed: number | null;
   boomLengthUsed: number | null;
-  /** Why there is no rating, when there is none. */
-  reason: string | null;
+  /**
+   * Why there is no rating, when there is none: the radius or the boom is beyond the chart, or the chart
+   * leaves that cell empty. `chartLimit` is the chart's largest radius or longest boom (m) for the first two.
+   */
+  missing: { why: 'radius-beyond-chart' | 'boom-beyond-chart' | 'no-rating'; chartLimit: number | null } | null;
 }
 
 const ascending = (xs: readonly number[]) => xs.every((x, i) => i === 0 || x > xs[i - 1]);
@@ -42,17 +45,17 @@ export function chartLookup(chart: LoadChart, radius: number, boomLength: number
   const r = nextAtOrAbove(chart.radii, radius);
   const b = nextAtOrAbove(chart.boomLengths, boomLength);
   if (r < 0) {
-    return { rated: null, radiusUsed: null, boomLengthUsed: b < 0 ? null : chart.boomLengths[b], reason: `radius ${radius.toFixed(2)} m is beyond the chart's largest radius of ${chart.radii[chart.radii.length - 1]} m` };
+    return { rated: null, radiusUsed: null, boomLengthUsed: b < 0 ? null : chart.boomLengths[b], missing: { why: 'radius-beyond-chart', chartLimit: chart.radii[chart.radii.length - 1] } };
   }
   if (b < 0) {
-    return { rated: null, radiusUsed: chart.radii[r], boomLengthUsed: null, reason: `boom length ${boomLength.toFixed(2)} m is beyond the chart's longest boom of ${chart.boomLengths[chart.boomLengths.length - 1]} m` };
+    return { rated: null, radiusUsed: chart.radii[r], boomLengthUsed: null, missing: { why: 'boom-beyond-chart', chartLimit: chart.boomLengths[chart.boomLengths.length - 1] } };
   }
   const rated = chart.rated[b][r];
   return {
     rated,
     radiusUsed: chart.radii[r],
     boomLengthUsed: chart.boomLengths[b],
-    reason: rated === null ? `the chart gives no rating at ${chart.radii[r]} m radius with ${chart.boomLengths[b]} m of boom` : null,
+    missing: rated === null ? { why: 'no-rating', chartLimit: null } : null,
   };
 }
 

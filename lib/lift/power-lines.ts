@@ -20,32 +20,46 @@ const TABLE_A: readonly [maxKV: number, feet: number][] = [
   [1000, 45],
 ];
 
+/**
+ * Which rule set the required clearance: `table-a` (29 CFR 1926.1408 Table A, band up to `upToKV`),
+ * `unknown-voltage-350` (1926.1408(a), voltage unknown but confirmed at most 350 kV), `unknown-voltage`
+ * (1926.1409), `over-table` (over 1 000 kV: the utility or a registered engineer sets it) or `set-for-line`
+ * (given for this line by the utility or a registered engineer). `feet` is the rule's own figure.
+ */
+export interface PowerLineRule {
+  source: 'table-a' | 'unknown-voltage-350' | 'unknown-voltage' | 'over-table' | 'set-for-line';
+  upToKV: number | null;
+  feet: number | null;
+}
+
 export interface RequiredClearance {
   /** Metres, or null when the utility or a registered engineer must set it. */
   required: number | null;
-  rule: string;
+  rule: PowerLineRule;
 }
 
 export function requiredClearance(line: Pick<PowerLine, 'kV' | 'atMost350kV' | 'required'>): RequiredClearance {
-  if (line.required !== undefined) return { required: line.required, rule: 'set for this line by the utility or a registered engineer' };
+  if (line.required !== undefined) return { required: line.required, rule: { source: 'set-for-line', upToKV: null, feet: null } };
   if (line.kV === null) {
     // Unknown voltage: 20 ft when confirmed up to 350 kV, 1926.1408(a); 50 ft otherwise, 1926.1409.
     return line.atMost350kV
-      ? { required: 20 * M_PER_FT, rule: '29 CFR 1926.1408(a), voltage unknown but at most 350 kV: 20 ft' }
-      : { required: 50 * M_PER_FT, rule: '29 CFR 1926.1409, voltage unknown: 50 ft' };
+      ? { required: 20 * M_PER_FT, rule: { source: 'unknown-voltage-350', upToKV: 350, feet: 20 } }
+      : { required: 50 * M_PER_FT, rule: { source: 'unknown-voltage', upToKV: null, feet: 50 } };
   }
   for (const [maxKV, feet] of TABLE_A) {
-    if (line.kV <= maxKV) return { required: feet * M_PER_FT, rule: `29 CFR 1926.1408 Table A, up to ${maxKV} kV: ${feet} ft` };
+    if (line.kV <= maxKV) return { required: feet * M_PER_FT, rule: { source: 'table-a', upToKV: maxKV, feet } };
   }
-  return { required: null, rule: '29 CFR 1926.1408 Table A, over 1 000 kV: set by the utility or a registered engineer' };
+  return { required: null, rule: { source: 'over-table', upToKV: null, feet: null } };
 }
 
 export interface PowerLineClearance {
   id: string;
+  /** What results call the line (the input's name, else its id). */
+  name: string;
   /** Smallest 3D distance from boom, hoist line or load to the line over the swing, m. */
   distance: number;
   required: number | null;
-  rule: string;
+  rule: PowerLineRule;
   slew: number;
   /** Which part came nearest. */
   nearest: 'boom' | 'hoist line' | 'load';
@@ -99,5 +113,5 @@ export function powerLineOver(p: PreparedLift, line: PowerLine): PowerLineCleara
 export function powerLineAt(p: PreparedLift, line: PowerLine, deg: number): PowerLineClearance {
   const distance = powerLineDistanceAt(p, line, deg);
   const req = requiredClearance(line);
-  return { id: line.id, distance, required: req.required, rule: req.rule, slew: deg, nearest };
+  return { id: line.id, name: line.name ?? line.id, distance, required: req.required, rule: req.rule, slew: deg, nearest };
 }

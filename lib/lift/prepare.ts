@@ -5,11 +5,17 @@ import { checkPolygon, parseLiftInput, siteObjects } from './validate';
 import { supportPolygon, type SupportPoint, type TippingLineGeom } from './support-polygon';
 import { footprintLocal, type FootprintLocal } from './footprint';
 
+import { arcOf } from './swing';
+import { normalizeDegrees } from './types';
+
 export { parseLiftInput } from './validate';
+export { arcOf } from './swing';
 
 /** A body part or obstacle as the clearance sweep sees it: a flat polygon in the truck frame. */
 export interface Target {
   id: string;
+  /** What results call it (the input's name, else its id). */
+  name: string;
   kind: 'body' | 'obstacle';
   poly: Float64Array;
   n: number;
@@ -54,15 +60,10 @@ export interface PreparedLift {
   from: number;
   span: number;
   sign: 1 | -1;
+  /** True when the swing covers every slew (see swing.ts for the rule). */
+  fullTurn: boolean;
 }
 
-/** Arc from `from` to `to` in `direction`; a span of exactly 360 is kept as a full turn. */
-export function arcOf(swing: LiftInput['swing']): { from: number; span: number; sign: 1 | -1 } {
-  const sign = swing.direction === 'ccw' ? 1 : -1;
-  const raw = sign * (swing.to - swing.from);
-  const span = raw >= 0 && raw <= 360 ? raw : ((raw % 360) + 360) % 360;
-  return { from: swing.from, span, sign };
-}
 
 /** Validates the input (typed errors) and precomputes what every slew evaluation shares. */
 export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
@@ -81,7 +82,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
 
   const fromSite = siteObjects(input);
   const targets: Target[] = [];
-  const target = (id: string, kind: Target['kind'], poly: Float64Array, top: number): Target => {
+  const target = (id: string, name: string | undefined, kind: Target['kind'], poly: Float64Array, top: number): Target => {
     let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
     for (let i = 0; i < poly.length; i += 2) {
       x0 = Math.min(x0, poly[i]); x1 = Math.max(x1, poly[i]); y0 = Math.min(y0, poly[i + 1]); y1 = Math.max(y1, poly[i + 1]);
@@ -89,14 +90,14 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     const cx = (x0 + x1) / 2, cy = (y0 + y1) / 2;
     let r = 0;
     for (let i = 0; i < poly.length; i += 2) r = Math.max(r, Math.hypot(poly[i] - cx, poly[i + 1] - cy));
-    return { id, kind, poly, n: poly.length / 2, top, cx, cy, r };
+    return { id, name: name ?? id, kind, poly, n: poly.length / 2, top, cx, cy, r };
   };
   input.bodies.forEach((b, i) => {
-    targets.push(target(b.id, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
+    targets.push(target(b.id, b.name, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
   });
   [...input.obstacles, ...fromSite.obstacles].forEach((o, i) => {
     const field = i < input.obstacles.length ? `obstacles.${i}.polygon` : `site.obstacles.${i - input.obstacles.length}.polygon`;
-    targets.push(target(o.id, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
+    targets.push(target(o.id, o.name, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
   });
   if (input.load.footprint.kind === 'polygon') checkPolygon(input.load.footprint.points, 'load.footprint.points', 'The load footprint');
 
@@ -122,7 +123,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
   const hookY0 = pivot.y;
   const tipZ = pivot.z + length * Math.sin(el);
   const loadBottom = tipZ - input.load.hang;
-  const { from, span, sign } = arcOf(input.swing);
+  const { from, span, sign, fullTurn } = arcOf(input.swing);
   return {
     input, hull, lines,
     fixedMass, fixedMx, fixedMy, rotMass, rotMx0, rotMy0,
@@ -135,7 +136,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     supportY: Float64Array.from(input.supports, (s) => s.y),
     targets,
     powerLines: [...input.powerLines, ...fromSite.powerLines],
-    from, span, sign,
+    from, span, sign, fullTurn,
   };
 }
 
@@ -146,7 +147,5 @@ export function withLoadMass(p: PreparedLift, loadMass: number): PreparedLift {
   return { ...p, input, hookLoad: loadMass + input.hook.blockMass + input.hook.riggingMass };
 }
 
-export const slewAt = (p: PreparedLift, t: number) => {
-  const s = (p.from + p.sign * t) % 360;
-  return s < 0 ? s + 360 : s;
-};
+/** Slew at `t` degrees along the planned arc, in [0, 360). */
+export const slewAt = (p: PreparedLift, t: number): number => normalizeDegrees(p.from + p.sign * t);

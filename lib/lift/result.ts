@@ -5,6 +5,7 @@ import type { ChartLookup } from './load-chart';
 import type { PowerLineClearance } from './power-lines';
 import type { SupportReaction } from './reactions';
 import type { RiggingVerdict } from './rigging';
+import type { TruckSide } from './names';
 import type { LineChange, SweepSample } from './sweep';
 
 /** The analysis result. The field names of issue 3's contract are kept; the rest are additions. */
@@ -12,6 +13,9 @@ export interface TippingLineResult {
   id: string;
   from: string;
   to: string;
+  /** Names of the two pads ("left rear", "right rear") and the side of the truck the line lies on. */
+  names: [string, string];
+  side: TruckSide;
   /** Perpendicular distance from the slew axis, m (positive: the axis is inside). */
   distanceFromAxis: number;
   /** Perpendicular distance from the combined CG (hook load included) at the worst-case slew, m (positive inside). */
@@ -36,7 +40,18 @@ export interface UpperWeightResult {
   reactionMaxima: ReactionMaximum[];
 }
 
+/** The arc that was analysed, after the swing rule of swing.ts (from and to normalised to [0, 360)). */
+export interface AnalysedArc {
+  from: number;
+  to: number;
+  direction: 'ccw' | 'cw';
+  /** Degrees swept: 0 for one slew (pick and set the same), 360 for a full turn. */
+  span: number;
+  fullTurn: boolean;
+}
+
 export interface LiftResult {
+  arc: AnalysedArc;
   tippingLines: TippingLineResult[];
   worstCase: WorstCase;
   sweep: SweepSample[];

@@ -11,13 +11,35 @@ import type { ShackleInput, SlingInput, WinchInput } from './schema';
  */
 export interface RiggingVerdict {
   id: string;
+  /** What results call it (the input's name, else its id). */
+  name: string;
   element: 'sling' | 'shackle' | 'winch';
   /** The element's share of the load, kg (line pull for the winch). */
   demand: number;
   /** What it may carry, kg (rated line pull for the winch). */
   capacity: number;
-  detail: string;
+  /** How it is used, as data: legs, hitch and angle; shackle size; parts of line and sheaves. */
+  facts: RiggingFacts;
 }
+
+export interface RiggingFacts {
+  legs: number | null;
+  hitch: SlingInput['hitch'] | null;
+  /** Leg angle from horizontal, degrees. */
+  angleFromHorizontal: number | null;
+  /** Round-sling colour when the rating comes from the colour table. */
+  colour: SlingInput['colour'] | null;
+  /** Nominal shackle size, inches ("5/8"). */
+  size: string | null;
+  parts: number | null;
+  sheaves: WinchInput['sheaves'] | null;
+  leadSheaves: number | null;
+  leadLineFactor: number | null;
+}
+
+const NO_FACTS: RiggingFacts = {
+  legs: null, hitch: null, angleFromHorizontal: null, colour: null, size: null, parts: null, sheaves: null, leadSheaves: null, leadLineFactor: null,
+};
 
 const sinDeg = (d: number) => Math.sin((d * Math.PI) / 180);
 
@@ -36,10 +58,9 @@ export function slingCapacity(s: SlingInput): number {
 }
 
 export function slingVerdict(s: SlingInput, loadMass: number): RiggingVerdict {
-  const how = s.colour ? `${s.colour} round sling` : 'sling';
   return {
-    id: s.id, element: 'sling', demand: loadMass, capacity: slingCapacity(s),
-    detail: `${s.legs} × ${how}, ${s.hitch} hitch at ${s.angleFromHorizontal}° from horizontal`,
+    id: s.id, name: s.name ?? s.id, element: 'sling', demand: loadMass, capacity: slingCapacity(s),
+    facts: { ...NO_FACTS, legs: s.legs, hitch: s.hitch, angleFromHorizontal: s.angleFromHorizontal, colour: s.colour ?? null },
   };
 }
 
@@ -50,8 +71,8 @@ export function shackleVerdict(s: ShackleInput, loadMass: number): RiggingVerdic
     throw new LiftError('invalid-rigging', `Shackle "${s.id}": ${what}.`, 'rigging.shackles');
   }
   return {
-    id: s.id, element: 'shackle', demand: loadMass / (s.legs * sinDeg(s.angleFromHorizontal)), capacity: wll,
-    detail: s.size ? `${s.size} in shackle, one of ${s.legs}` : `shackle, one of ${s.legs}`,
+    id: s.id, name: s.name ?? s.id, element: 'shackle', demand: loadMass / (s.legs * sinDeg(s.angleFromHorizontal)), capacity: wll,
+    facts: { ...NO_FACTS, legs: s.legs, angleFromHorizontal: s.angleFromHorizontal, size: s.size ?? null },
   };
 }
 
@@ -71,7 +92,7 @@ export function winchCapacity(w: WinchInput): number {
 export function winchVerdict(w: WinchInput, hookLoad: number): RiggingVerdict {
   const f = leadLineFactor(w.parts, SHEAVE_K[w.sheaves], w.leadSheaves);
   return {
-    id: 'winch', element: 'winch', demand: hookLoad * f, capacity: w.ratedLinePull,
-    detail: `${w.parts} parts of line over ${w.sheaves} sheaves, ${w.leadSheaves} lead sheave(s), lead-line factor ${f.toFixed(4)}`,
+    id: 'winch', name: 'winch', element: 'winch', demand: hookLoad * f, capacity: w.ratedLinePull,
+    facts: { ...NO_FACTS, parts: w.parts, sheaves: w.sheaves, leadSheaves: w.leadSheaves, leadLineFactor: f },
   };
 }

@@ -11,9 +11,12 @@ const pos = z.number().positive();
 const point2 = z.object({ x: num, y: num });
 const point3 = z.object({ x: num, y: num, z: num });
 const id = z.string().min(1).max(64);
+/** What a person calls the object (a label typed in the editor, "left rear"); results show it instead of the id. */
+const name = z.string().max(120).optional();
 
 export const supportSchema = z.object({
   id,
+  name,
   x: num,
   y: num,
   /** Pad (or tyre contact) area on the ground, m². */
@@ -59,6 +62,11 @@ export const loadSchema = z.object({
   hang: z.number().nonnegative(),
 });
 
+/**
+ * Pick (`from`) and set (`to`) slews, degrees, and the direction of travel. The one rule for turning these
+ * into an arc is lib/lift/swing.ts: a whole number of turns (0→360, 360→0, 0→720, 10→370 cw, within 1e-9°)
+ * or more than a turn is a full turn; only from ≈ to is a single slew.
+ */
 export const swingSchema = z.object({
   from: num,
   to: num,
@@ -67,6 +75,7 @@ export const swingSchema = z.object({
 
 export const prismSchema = z.object({
   id,
+  name,
   polygon: z.array(point2).min(3).max(256),
   /** Height of its top above the ground, m. */
   top: num,
@@ -74,6 +83,7 @@ export const prismSchema = z.object({
 
 export const powerLineSchema = z.object({
   id,
+  name,
   a: point3,
   b: point3,
   /** Nominal phase-to-phase voltage; null when unknown. */
@@ -89,6 +99,7 @@ export const roundSlingColours = ['purple', 'green', 'yellow', 'tan', 'red', 'wh
 
 export const slingSchema = z.object({
   id,
+  name,
   /** Vertical rated capacity, kg. Give this or a round-sling colour. */
   verticalRating: pos.optional(),
   colour: z.enum(roundSlingColours).optional(),
@@ -102,6 +113,7 @@ export const slingSchema = z.object({
 
 export const shackleSchema = z.object({
   id,
+  name,
   /** Nominal size code, e.g. "5/8" or "1-1/4" (inches). Give this or wll. */
   size: z.string().optional(),
   /** Working load limit, kg. */

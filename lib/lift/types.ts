@@ -38,10 +38,11 @@ export const truckPoint3 = (x: number, y: number, z: number) => ({ x, y, z }) as
 export const toRadians = (d: Degrees): Radians => ((d * Math.PI) / 180) as Radians;
 export const toDegrees = (r: Radians): Degrees => ((r * 180) / Math.PI) as Degrees;
 
-/** Normalises to [0, 360). */
+/** Normalises to [0, 360) (a tiny negative remainder would round up to 360 itself: that is 0). */
 export function normalizeDegrees(d: number): Degrees {
   const r = d % 360;
-  return (r < 0 ? r + 360 : r) as Degrees;
+  const n = r < 0 ? r + 360 : r;
+  return (n >= 360 || n === 0 ? 0 : n) as Degrees;
 }
 
 /** Where the truck stands in the site frame: position of its slew axis and heading of its +x (deg, CCW). */

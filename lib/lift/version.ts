@@ -1,6 +1,7 @@
 /**
  * The engine's version, stored with every server-computed result (a submission keeps the figures a
  * supervisor judged together with the engine that produced them). Bump it whenever a change alters any
- * figure the engine reports: the golden fixtures in tests/lift/fixtures regenerating is the sign.
+ * figure the engine reports, or the shape of its result: the golden fixtures in tests/lift/fixtures
+ * regenerating is the sign. 2026.12.2-b: checks became typed records (same figures, no sentences).
  */
-export const ENGINE_VERSION = '2026.12.2';
+export const ENGINE_VERSION = '2026.12.2-b';

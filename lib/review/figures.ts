@@ -36,8 +36,8 @@ export interface PlanFigures {
   riggingPercent: number | null;
   /** Over 100 % of tipping, of the load chart or of a rigging item's WLL, inside Table A, a pad over the allowable. */
   hardLimits: LimitBreach[];
-  /** Checks beyond the plan's own limits that are not hard limits. */
-  beyondPlan: { id: string; reason: string }[];
+  /** Ids of the checks beyond the plan's own limits that are not hard limits (the checks are stored beside). */
+  beyondPlan: string[];
 }
 
 const name = (names: Record<string, string>, id: string) => names[id] ?? id;
@@ -57,11 +57,11 @@ export function hardLimitBreaches(result: LiftResult, allowable: number, names: 
   if (chart && (chart.rated === null || (chart.percent ?? 0) > 100)) out.push({ id: 'load-chart', kind: 'load-chart', subject: 'load chart', value: chart.percent, limit: 100, unit: '%' });
   for (const r of result.rigging) {
     const pct = (100 * r.demand) / r.capacity;
-    if (pct > 100) out.push({ id: `rigging:${r.element}:${r.id}`, kind: 'rigging', subject: `${r.element} ${r.id}`, value: pct, limit: 100, unit: '%' });
+    if (pct > 100) out.push({ id: `rigging:${r.element}:${r.id}`, kind: 'rigging', subject: `${r.element} ${r.name || r.id}`, value: pct, limit: 100, unit: '%' });
   }
   for (const l of result.powerLines) {
     // No Table A distance (over 350 kV): only the utility or an engineer can set one, so it cannot be approved here.
-    if (l.required === null || l.distance < l.required) out.push({ id: `power-line:${l.id}`, kind: 'power-line', subject: name(names, l.id), value: l.distance, limit: l.required, unit: 'm' });
+    if (l.required === null || l.distance < l.required) out.push({ id: `power-line:${l.id}`, kind: 'power-line', subject: l.name || name(names, l.id), value: l.distance, limit: l.required, unit: 'm' });
   }
   return out;
 }
@@ -81,11 +81,11 @@ export function planFigures(result: LiftResult, input: { soil: { allowable: numb
     tippingSlew: result.worstCase.slew,
     tippingLimit: input.limits?.percentOfTipping ?? 85,
     ground: top ? { support: top.support, pressure: top.pressure, allowable, percent: (100 * top.pressure) / allowable } : null,
-    leastClearance: least ? { target: least.c.target, name: name(names, least.c.target), distance: least.d, limit: input.limits?.clearance ?? 0.3 } : null,
-    powerLine: line ? { id: line.id, name: name(names, line.id), distance: line.distance, required: line.required } : null,
+    leastClearance: least ? { target: least.c.target, name: least.c.name || name(names, least.c.target), distance: least.d, limit: input.limits?.clearance ?? 0.3 } : null,
+    powerLine: line ? { id: line.id, name: line.name || name(names, line.id), distance: line.distance, required: line.required } : null,
     loadChartPercent: result.loadChart?.percent ?? null,
     riggingPercent: rigging.length ? Math.max(...rigging) : null,
     hardLimits,
-    beyondPlan: result.checks.filter((c) => !c.ok && !hard.has(c.id)).map((c) => ({ id: c.id, reason: c.reason })),
+    beyondPlan: result.checks.filter((c) => c.status === 'beyond' && !hard.has(c.id)).map((c) => c.id),
   };
 }

@@ -1,11 +1,13 @@
-import { formatLength, formatPressure, type UnitSystem } from '@/lib/units';
+import { formatAngle, formatLength, formatPercent as percent, formatPressure } from '@/lib/format/quantity';
+import type { UnitSystem } from '@/lib/units';
 import type { LimitBreach, PlanFigures } from './figures';
 
 /**
- * Words for the review desk's figures (queue, review page, e-mail), in the viewer's units. Kept in this one
- * place so it can follow the app-wide check formatter when that lands.
+ * Words for the review desk's headline figures and hard-limit breaches (queue, review page, e-mail), in the
+ * viewer's units, through the app's one quantity formatter (lib/format). Checks themselves are written by
+ * lib/format/checks.
  */
-export const formatPercent = (n: number) => `${n.toFixed(1)} %`;
+export const formatPercent = (n: number) => percent(n, 1);
 
 export function formatBreach(b: LimitBreach, units: UnitSystem): string {
   const v = (x: number | null) => (x === null ? 'no rating' : b.unit === '%' ? formatPercent(x) : b.unit === 'm' ? formatLength(x, units) : formatPressure(x, units));
@@ -27,7 +29,7 @@ export function formatBreach(b: LimitBreach, units: UnitSystem): string {
 
 /** The headline figures as short lines (queue cells, e-mail bodies). */
 export function figureLines(f: PlanFigures, units: UnitSystem): string[] {
-  const lines = [`Worst case ${formatPercent(f.percentOfTipping)} of tipping about line ${f.tippingLine} at slew ${f.tippingSlew.toFixed(1)}° (plan limit ${f.tippingLimit} %)`];
+  const lines = [`Worst case ${formatPercent(f.percentOfTipping)} of tipping about line ${f.tippingLine} at slew ${formatAngle(f.tippingSlew)} (plan limit ${f.tippingLimit} %)`];
   if (f.ground) lines.push(`Highest ground pressure ${formatPercent(f.ground.percent)} of allowable (pad ${f.ground.support}: ${formatPressure(f.ground.pressure, units)} of ${formatPressure(f.ground.allowable, units)})`);
   if (f.leastClearance) lines.push(`Least clearance ${formatLength(f.leastClearance.distance, units)} to ${f.leastClearance.name} (plan limit ${formatLength(f.leastClearance.limit, units)})`);
   if (f.powerLine) lines.push(`Nearest power line ${formatLength(f.powerLine.distance, units)} from ${f.powerLine.name}${f.powerLine.required !== null ? ` (Table A: ${formatLength(f.powerLine.required, units)})` : ''}`);

@@ -12,6 +12,8 @@ import { transition, type PlanEvent } from '@/lib/review/lifecycle';
 import { planFigures, type LimitBreach, type PlanFigures } from '@/lib/review/figures';
 import { decisionRefusal, mayManagePlan } from '@/lib/review/permissions';
 import { figureLines, formatBreach } from '@/lib/review/format';
+import { describeCheck } from '@/lib/format/checks';
+import type { Check } from '@/lib/lift';
 import { analyseSavedScene } from './scene-analysis';
 import { notifyPeople } from './review-notify';
 import { kickOutbox } from './mail/outbox-worker';
@@ -106,7 +108,11 @@ export async function decidePlan(db: Db, user: CurrentUser, id: number, d: Decis
       return fail(422, `Approval refused: ${figures.hardLimits.length === 1 ? 'a figure is' : `${figures.hardLimits.length} figures are`} beyond a hard limit (${figures.hardLimits.map((b) => b.id).join(', ')}). Return the plan with a note instead.`, { checks: figures.hardLimits.map(breachJson) });
     }
     if (figures.beyondPlan.length && !d.reason?.trim()) {
-      return fail(422, `reason: the plan is beyond its own limits (${figures.beyondPlan.map((c) => c.id).join(', ')}); approving it needs a written reason`, { issues: [{ path: 'reason', message: 'Required when the plan is beyond its own limits' }], checks: figures.beyondPlan });
+      const beyond = (pending.checks as Check[]).filter((c) => figures.beyondPlan.includes(c.id));
+      return fail(422, `reason: the plan is beyond its own limits (${figures.beyondPlan.join(', ')}); approving it needs a written reason`, {
+        issues: [{ path: 'reason', message: 'Required when the plan is beyond its own limits' }],
+        checks: beyond.map((c) => ({ ...c, message: describeCheck(c, 'metric').sentence })),
+      });
     }
   } else if (!d.note?.trim() && (await countOpenComments(db, user.organisationId, id)) === 0) {
     return fail(422, 'note: returning a plan needs a note or an open comment saying what to change', { issues: [{ path: 'note', message: 'Required without an open comment' }] });

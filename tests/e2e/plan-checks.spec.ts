@@ -94,11 +94,13 @@ test('results panel: in the imperial view every check sentence is in feet-inches
   const texts = await sentences.allTextContents();
   expect(texts.length).toBeGreaterThan(5);
   for (const t of texts) expect(t).not.toMatch(/\d (m|kg|kPa|kN)(?![\p{L}\p{N}])/u);
-  const bearing = texts.find((t) => t.startsWith('Support '));
-  expect(bearing).toMatch(/presses [\d,]+ psf on the ground .* allowable [\d,]+ psf/);
+  const bearing = texts.find((t) => / pad presses /.test(t));
+  expect(bearing).toMatch(/^The (left|right) (front|rear) pad presses [\d,]+ psf on the ground .* allowable [\d,]+ psf/);
+  // Names, never ids: no object id or check id reaches the words.
+  for (const t of texts) expect(t).not.toMatch(/obstacle-[a-z0-9]{4,}|trailer-[a-z0-9]{4,}|[a-z-]+:[A-Z]{1,4}(:|\b)/);
   // The sentence agrees with its own value column.
   const bearingRow = page.locator('[data-testid^="check-bearing:"]').first();
-  const value = (await bearingRow.locator('span.tabular-nums > span.font-semibold').textContent())!;
+  const value = (await bearingRow.getByTestId('check-value').textContent())!;
   await expect(bearingRow.locator('[data-testid^="check-sentence-"]')).toContainText(`presses ${value}`);
   await screens(page, 'editor-results-imperial', ['laptop', 'tablet-portrait']);
 });

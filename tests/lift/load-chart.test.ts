@@ -26,7 +26,7 @@ describe('load chart lookup, no upward interpolation', () => {
   it('a radius beyond the chart fails the check instead of extrapolating', () => {
     const look = chartLookup(chart, 7.5, 8);
     expect(look.rated).toBeNull();
-    expect(look.reason).toMatch(/beyond the chart's largest radius/);
+    expect(look.missing).toEqual({ why: 'radius-beyond-chart', chartLimit: 7 });
     const r = analyzeLift(squareOfPads({ loadChart: chart, boom: { pivot: { x: 0, y: 0, z: 2 }, length: 7.5, elevation: 0, mass: 0, cgFraction: 0.5 } }));
     const check = r.checks.find((c) => c.id === 'load-chart');
     expect(check).toMatchObject({ ok: false, value: null });

@@ -3,6 +3,7 @@ import { getDb } from '@/db';
 import { createScene, softDeleteScene } from '@/db/repositories/scenes';
 import { createUser, findUserById } from '@/db/repositories/users';
 import { createEquipmentProfile, retireEquipmentProfile } from '@/db/repositories/equipment';
+import { createLesson } from '@/db/repositories/lessons';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
 import { storeSceneUpload } from '@/lib/background/store-scene-upload';
@@ -25,6 +26,7 @@ export const TITLES = {
   ownSubmitted: 'Submitted: wheel loader off the verge, Brock Road',
 } as const;
 export const TRUCKS = { harrow: 'HR-7', cobalt: 'CF-2', retired: 'HR-1' } as const;
+export const LESSONS = { harrow: 'Harrow lesson: reading tipping lines', cobalt: 'Cobalt lesson: embankment pulls' } as const;
 
 async function asCurrentUser(db: DB, id: number): Promise<CurrentUser> {
   const u = (await findUserById(db, id))!;
@@ -50,6 +52,13 @@ export async function addAccessFixtures(db: DB): Promise<void> {
   const submitted = await createScene(db, op, { title: TITLES.ownSubmitted, document: draft.document });
   const out = await submitPlan(db, op, submitted.id, 1);
   if (out.status !== 200) throw new Error(`fixture submit failed: ${JSON.stringify(out.body)}`);
+  // A lesson in each organisation (the Cobalt one is written directly: its scene is not in a training set).
+  const trainer = await db.selectFrom('users').select('id').where('email', '=', 'trainer@harrow.example').executeTakeFirstOrThrow();
+  const reefer = await sceneIdByTitle(TITLES.ownApproved, db);
+  await createLesson(db, await asCurrentUser(db, trainer.id), { title: LESSONS.harrow, steps: [{ sceneId: reefer, revision: 1, notes: 'Where does the boom cross the rear tipping line?' }] });
+  const cobaltOp = await db.selectFrom('users').select(['id', 'organisation_id']).where('email', '=', 'operator@cobalt.example').executeTakeFirstOrThrow();
+  const lesson = await db.insertInto('lessons').values({ organisation_id: cobaltOp.organisation_id, author_id: cobaltOp.id, title: LESSONS.cobalt }).returning('id').executeTakeFirstOrThrow();
+  await db.insertInto('lesson_steps').values({ lesson_id: lesson.id, position: 0, scene_id: await sceneIdByTitle(TITLES.otherOrg, db), revision: 1, question: null, answer: null }).execute();
   // A site background image on the operator's draft and on the other organisation's scene.
   const png = makePng(4, 3);
   for (const title of [TITLES.ownDraft, TITLES.otherOrg]) {

@@ -3,6 +3,7 @@ vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import * as scenes from '@/app/api/scenes/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import * as training from '@/app/api/scenes/[id]/training/route';
+import * as planDetails from '@/app/api/scenes/[id]/details/route';
 import * as equipment from '@/app/api/equipment/route';
 import * as equipmentOne from '@/app/api/equipment/[id]/route';
 import * as duplicate from '@/app/api/equipment/[id]/duplicate/route';
@@ -26,15 +27,19 @@ import * as commentOne from '@/app/api/scenes/[id]/comments/[commentId]/route';
 import * as notifications from '@/app/api/notifications/route';
 import * as notificationsRead from '@/app/api/notifications/read/route';
 import { REVIEW_TITLES } from '@/db/seed/demo-review-scenes';
+import * as revisions from '@/app/api/scenes/[id]/revisions/route';
+import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
 import * as background from '@/app/api/scenes/[id]/background/route';
 import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { makePng } from '@/tests/fixtures/images';
 import { squareOfPads } from '@/tests/lift/scenarios';
 import * as me from '@/app/api/me/route';
+import * as lessons from '@/app/api/lessons/route';
+import * as lesson from '@/app/api/lessons/[id]/route';
 import { getDb } from '@/db';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
-import { describeMatrix, type MatrixRoute, type TargetResolver } from '@/tests/setup/route-matrix';
-import { PEER_EMAIL, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';
+import { describeMatrix, type MatrixRoute, type Target, type TargetResolver } from '@/tests/setup/route-matrix';
+import { LESSONS, PEER_EMAIL, TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';
 
 /**
  * Who may do what, for every route. Columns, in order:
@@ -70,6 +75,12 @@ const pngForm = () => {
   form.append('file', new Blob([makePng(8, 6)], { type: 'image/png' }), 'site.png');
   return { body: form };
 };
+const lessonTarget = (title: string): TargetResolver => async () => {
+  const row = await getDb().selectFrom('lessons').select('id').where('title', '=', title).executeTakeFirstOrThrow();
+  return { id: String(row.id), sceneId: await sceneIdByTitle(TITLES.ownApproved) };
+};
+/** A lesson body on Harrow's training-set scene; other organisations see that scene as unknown (400). */
+const lessonBody = (t: Target) => ({ title: 'Matrix: lesson', steps: [{ sceneId: t.sceneId, revision: 1, notes: 'Watch the rear pads.' }] });
 const today = () => new Date().toISOString().slice(0, 10);
 
 const targets: Record<string, TargetResolver> = {
@@ -95,7 +106,12 @@ const targets: Record<string, TargetResolver> = {
     const c = await getDb().selectFrom('scene_comments').select('id').where('scene_id', '=', id).executeTakeFirstOrThrow();
     return { id: String(id), commentId: String(c.id) };
   },
+  'Harrow: lesson': lessonTarget(LESSONS.harrow),
+  'Cobalt: lesson': lessonTarget(LESSONS.cobalt),
+  'Harrow: training scene': async () => ({ sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
+  'unknown lesson': async () => ({ id: '987654', sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
 };
+const lessonWrites = ['lessons', 'lesson_steps', 'audit_log'];
 
 const sceneWrites = ['scenes', 'scene_revisions', 'audit_log'];
 /** Every profile change also keeps the new version in the history. */
@@ -184,6 +200,29 @@ const routes: MatrixRoute[] = [
       'Cobalt: scene’s image': [401, 404, 404, 404, 404, 200],
     },
   },
+  {
+    method: 'GET', path: '/api/scenes/[id]/details', handler: planDetails.GET,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/scenes/[id]/details', handler: planDetails.PUT, writes: [...sceneWrites, 'scene_plan_details'],
+    body: (t) => ({ revision: t.revision, details: { job: { customer: 'Matrix customer' } } }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 200],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
   { method: 'POST', path: '/api/analyze', handler: analyze.POST, body: () => squareOfPads(), expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
     // The peer's scenes are empty sketches: whoever may read them gets 422 (nothing to compute), not 404.
@@ -193,6 +232,29 @@ const routes: MatrixRoute[] = [
       'Harrow: operator’s approved': [401, 200, 200, 200, 200, 404],
       'Harrow: peer’s draft': [401, 404, 422, 422, 422, 404],
       'Harrow: peer’s approved': [401, 422, 422, 422, 422, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    // Lists answer 200 for whoever may read the scene, with null figures where there is nothing to compute.
+    method: 'GET', path: '/api/scenes/[id]/revisions', handler: revisions.GET, checkId: false,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/revisions/[revision]', handler: revisionOne.GET, checkId: false,
+    params: (t) => ({ id: t.id!, revision: String(t.revision ?? 1) }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
       'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
       'Cobalt: scene': [401, 404, 404, 404, 404, 200],
       'unknown id': [401, 404, 404, 404, 404, 404],
@@ -392,6 +454,36 @@ const routes: MatrixRoute[] = [
   },
   { method: 'GET', path: '/api/notifications', handler: notifications.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   { method: 'POST', path: '/api/notifications/read', handler: notificationsRead.POST, body: () => ({ ids: [] }), expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  // ── lessons ─────────────────────────────────────────────────────────────
+  { method: 'GET', path: '/api/lessons', handler: lessons.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  {
+    method: 'POST', path: '/api/lessons', handler: lessons.POST, writes: lessonWrites, body: lessonBody,
+    expect: { 'Harrow: training scene': [401, 403, 403, 201, 201, 403] },
+  },
+  {
+    method: 'GET', path: '/api/lessons/[id]', handler: lesson.GET,
+    expect: {
+      'Harrow: lesson': [401, 200, 200, 200, 200, 404],
+      'Cobalt: lesson': [401, 404, 404, 404, 404, 200],
+      'unknown lesson': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PUT', path: '/api/lessons/[id]', handler: lesson.PUT, writes: lessonWrites, body: lessonBody,
+    expect: {
+      'Harrow: lesson': [401, 403, 403, 200, 200, 403],
+      'Cobalt: lesson': [401, 403, 403, 404, 404, 403],
+      'unknown lesson': [401, 403, 403, 404, 404, 403],
+    },
+  },
+  {
+    method: 'DELETE', path: '/api/lessons/[id]', handler: lesson.DELETE, writes: lessonWrites,
+    expect: {
+      'Harrow: lesson': [401, 403, 403, 200, 200, 403],
+      'Cobalt: lesson': [401, 403, 403, 404, 404, 403],
+      'unknown lesson': [401, 403, 403, 404, 404, 403],
+    },
+  },
   // ── users and the signed-in user ───────────────────────────────────────
   { method: 'GET', path: '/api/users', handler: users.GET, expect: { '-': [401, 403, 403, 403, 200, 403] } },
   {
@@ -407,8 +499,8 @@ const routes: MatrixRoute[] = [
   },
 ];
 
-const harrowMarkers = [TITLES.ownDraft, TITLES.ownApproved, TITLES.peerDraft, TITLES.peerApproved, 'harrow.example', 'Harrow Ridge', TRUCKS.harrow, TRUCKS.retired];
-const cobaltMarkers = [TITLES.otherOrg, 'cobalt.example', 'Cobalt Flats', TRUCKS.cobalt];
+const harrowMarkers = [LESSONS.harrow, TITLES.ownDraft, TITLES.ownApproved, TITLES.peerDraft, TITLES.peerApproved, 'harrow.example', 'Harrow Ridge', TRUCKS.harrow, TRUCKS.retired];
+const cobaltMarkers = [TITLES.otherOrg, 'cobalt.example', 'Cobalt Flats', TRUCKS.cobalt, LESSONS.cobalt];
 
 describeMatrix('authorisation matrix', routes, targets, {
   'signed out': [...harrowMarkers, ...cobaltMarkers],

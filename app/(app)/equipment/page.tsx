@@ -10,7 +10,7 @@ import { Badge } from '@/components/ui/badge';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { truckSpecShape } from '@/lib/equipment/truck-spec';
-import { formatLength, formatMass } from '@/lib/units';
+import { formatLength, formatMass } from '@/lib/format/quantity';
 
 export const metadata: Metadata = { title: 'Equipment' };
 

@@ -5,7 +5,7 @@ import { updateObject } from '../../commands/objects';
 import { LengthField, MassField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
 import { loadMass } from '../../shapes/load/geometry';
-import { formatMass } from '@/lib/units';
+import { formatMass } from '@/lib/format/quantity';
 import { RiggingPicker } from './rigging-picker';
 
 /** The load's shape, weight (given or estimated), hang and rigging. */

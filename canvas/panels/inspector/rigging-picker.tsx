@@ -4,7 +4,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LoadObject, RiggingPick } from '../../document/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
-import { formatMass } from '@/lib/units';
+import { formatMass } from '@/lib/format/quantity';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { NumberField, SelectField } from '../fields';
 import { addVerdict, firstRating, isOverdue, pickNotices, type InventoryStatus, type RiggingNotice } from './rigging-status';

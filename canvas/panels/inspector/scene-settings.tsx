@@ -4,9 +4,19 @@ import { setDocumentFields, setSwing } from '../../commands/truck';
 import { NumberField, SelectField } from '../fields';
 import { Section } from './section';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
+import { arcOf } from '@/lib/lift/swing';
 import { BackgroundPanel } from '../../background/background-panel';
 import { screenToWorld } from '../../editor/camera';
-import { formatPressure, inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
+import { formatPressure } from '@/lib/format/quantity';
+
+/** What the engine will analyse for these fields (lib/lift/swing.ts), so 0° → 360° is never read as one slew. */
+export function arcWords(swing: { from: number; to: number; direction: 'ccw' | 'cw' }): string {
+  const a = arcOf(swing);
+  if (a.fullTurn) return 'Checked over a full turn: every slew.';
+  if (a.span === 0) return 'Pick and set are the same slew: checked at that one slew only.';
+  return `Checked over ${Math.round(a.span * 10) / 10}° ${a.sign === 1 ? 'counter-clockwise' : 'clockwise'}.`;
+}
 
 /** The swing plan, the ground and the plan's limits (nothing selected). */
 export function SceneSettings() {
@@ -36,6 +46,9 @@ export function SceneSettings() {
             onCommit={(direction) => run(setSwing({ direction }))}
           />
         </div>
+        <p className="col-span-2 text-xs text-ink-muted" data-testid="swing-arc">
+          {arcWords(doc.swing)}
+        </p>
       </Section>
       <Section title="Ground">
         <div className="col-span-2">

@@ -6,7 +6,8 @@ import { updateObject } from '../../commands/objects';
 import { maxExtension } from '../../truck/truck-model';
 import { LengthField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
-import { formatLength, ft2ToM2, kgToLb, lbToKg, m2ToFt2 } from '@/lib/units';
+import { ft2ToM2, kgToLb, lbToKg, m2ToFt2 } from '@/lib/units';
+import { formatLength } from '@/lib/format/quantity';
 import { truckModelFromProfile } from '../../truck/from-spec';
 import { currentProfile, currentProfiles } from '../../truck/profile-versions';
 

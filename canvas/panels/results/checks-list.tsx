@@ -1,64 +1,47 @@
 'use client';
-import type { Check, LiftResult } from '@/lib/lift';
-import { formatLength, formatMass, formatPressure, type UnitSystem } from '@/lib/units';
-import { checkSentence } from './check-sentence';
+import type { Check, CheckStatus } from '@/lib/lift';
+import { describeCheck, groupChecks } from '@/lib/format/checks';
+import type { UnitSystem } from '@/lib/units';
 
-const GROUPS: { title: string; test: (id: string) => boolean }[] = [
-  { title: 'Stability', test: (id) => id.startsWith('stability') || id.startsWith('tipping') },
-  { title: 'Ground', test: (id) => id.startsWith('bearing') || id.startsWith('pad') },
-  { title: 'Clearances', test: (id) => id.startsWith('clearance') },
-  { title: 'Power lines', test: (id) => id.startsWith('power-line') },
-  { title: 'Rigging', test: (id) => id.startsWith('rigging') || id.startsWith('sling') || id.startsWith('shackle') || id.startsWith('winch') },
-  { title: 'Load chart', test: (id) => id.startsWith('load-chart') || id.startsWith('chart') },
-];
+const TONE: Record<CheckStatus, { row: string; word: string; mark: string }> = {
+  within: { row: 'border-within', word: 'text-within', mark: '✓' },
+  near: { row: 'border-signal bg-signal-light', word: 'text-signal-dark', mark: '!' },
+  beyond: { row: 'border-over bg-over-light', word: 'text-over', mark: '✗' },
+};
 
-function show(v: number | null, unit: Check['unit'], units: UnitSystem): string {
-  if (v === null) return '—';
-  if (unit === 'm') return formatLength(v, units);
-  if (unit === 'kg') return formatMass(v, units);
-  if (unit === 'kPa') return formatPressure(v, units);
-  return `${v.toFixed(1)} %`;
+function CheckRow({ check, units }: { check: Check; units: UnitSystem }) {
+  const w = describeCheck(check, units);
+  const tone = TONE[check.status];
+  return (
+    <li className={`rounded-md border-l-4 bg-paper p-2 text-sm ${tone.row}`} data-testid={`check-${check.id}`} data-ok={check.ok} data-status={check.status}>
+      <div className="flex flex-wrap items-baseline justify-between gap-x-2">
+        <span className="font-semibold">
+          <span aria-hidden>{tone.mark}</span> {w.title}
+        </span>
+        <span className="tabular-nums">
+          <span className="font-semibold" data-testid="check-value">{w.value}</span> <span className="text-ink-muted">{w.limit}</span>{' '}
+          <span className={`font-bold ${tone.word}`}>{check.status === 'beyond' ? 'OVER LIMIT' : w.status}</span>
+        </span>
+      </div>
+      <p className="mt-0.5 text-xs text-ink-soft" data-testid={`check-sentence-${check.id}`}>{w.sentence}</p>
+    </li>
+  );
 }
 
-/** Every check, grouped, each with value, limit, unit and the engine's sentence in the user's units. */
-export function ChecksList({ result, units, names }: { result: LiftResult; units: UnitSystem; names: Record<string, string> }) {
-  const used = new Set<string>();
-  const sections = GROUPS.map((g) => {
-    const items = result.checks.filter((c) => !used.has(c.id) && g.test(c.id));
-    items.forEach((c) => used.add(c.id));
-    return { title: g.title, items };
-  });
-  const rest = result.checks.filter((c) => !used.has(c.id));
-  if (rest.length) sections.push({ title: 'Other', items: rest });
-  const label = (id: string) => {
-    const [, target] = id.split(':');
-    return target && names[target] ? `${id.split(':')[0]}: ${names[target]}` : id;
-  };
+/** Every check, grouped, each in words from the one check formatter (lib/format/checks.ts). */
+export function ChecksList({ checks, units }: { checks: readonly Check[]; units: UnitSystem }) {
   return (
     <div className="mt-4 space-y-3" data-testid="checks">
-      {sections
-        .filter((s) => s.items.length)
-        .map((s) => (
-          <section key={s.title}>
-            <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-muted">{s.title}</h3>
-            <ul className="space-y-1.5">
-              {s.items.map((c) => (
-                <li key={c.id} className={`rounded-md border-l-4 bg-paper p-2 text-sm ${c.ok ? 'border-within' : 'border-over bg-over-light'}`} data-testid={`check-${c.id}`} data-ok={c.ok}>
-                  <div className="flex flex-wrap items-baseline justify-between gap-x-2">
-                    <span className="font-semibold">
-                      {c.ok ? '✓' : '✗'} {label(c.id)}
-                    </span>
-                    <span className="tabular-nums">
-                      <span className="font-semibold">{show(c.value, c.unit, units)}</span> <span className="text-ink-muted">limit {show(c.limit, c.unit, units)}</span>{' '}
-                      <span className={`font-bold ${c.ok ? 'text-within' : 'text-over'}`}>{c.ok ? 'within limit' : 'OVER LIMIT'}</span>
-                    </span>
-                  </div>
-                  <p className="mt-0.5 text-xs text-ink-soft" data-testid={`check-sentence-${c.id}`}>{checkSentence(c, units)}</p>
-                </li>
-              ))}
-            </ul>
-          </section>
-        ))}
+      {groupChecks(checks).map((g) => (
+        <section key={g.title}>
+          <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-muted">{g.title}</h3>
+          <ul className="space-y-1.5">
+            {g.checks.map((c) => (
+              <CheckRow key={c.id} check={c} units={units} />
+            ))}
+          </ul>
+        </section>
+      ))}
     </div>
   );
 }

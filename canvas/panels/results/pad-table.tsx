@@ -1,6 +1,7 @@
 'use client';
 import type { LiftResult, SlewSnapshot } from '@/lib/lift';
-import { formatForce, formatPressure, m2ToFt2, type UnitSystem } from '@/lib/units';
+import type { UnitSystem } from '@/lib/units';
+import { formatAngle, formatForce, formatPressure } from '@/lib/format/quantity';
 
 /** Pad reactions: the most each pad carries over the swing, and what it carries at the slew on screen. */
 export function PadTable({ result, snapshot, units, allowable }: { result: LiftResult; snapshot: SlewSnapshot | null; units: UnitSystem; allowable: number }) {
@@ -26,12 +27,12 @@ export function PadTable({ result, snapshot, units, allowable }: { result: LiftR
               return (
                 <tr key={m.support} className="border-b border-paper-line">
                   <td className="py-1 pr-2 font-semibold">
-                    {m.support}
+                    {m.name}
                     <span className="block text-[11px] font-normal text-ink-muted">{crib(m.support) ? 'on cribbing' : 'pad only'}</span>
                   </td>
                   <td className="py-1 pr-2">{now ? (now.inContact ? formatForce(now.force, units) : 'lifts off') : '—'}</td>
                   <td className="py-1 pr-2">
-                    {formatForce(m.force, units)} ({m.slew.toFixed(0)}°){m.liftsOff && <span className="block text-[11px] text-over">lifts off somewhere on the swing</span>}
+                    {formatForce(m.force, units)} ({formatAngle(m.slew, 0)}){m.liftsOff && <span className="block text-[11px] text-over">lifts off somewhere on the swing</span>}
                   </td>
                   <td className="py-1 pr-2">{formatPressure(m.pressure, units)}</td>
                   <td className={`py-1 font-semibold ${ok ? 'text-within' : 'text-over'}`}>
@@ -43,7 +44,7 @@ export function PadTable({ result, snapshot, units, allowable }: { result: LiftR
           </tbody>
         </table>
       </div>
-      <p className="mt-1 text-xs text-ink-muted">Pressure over the cribbing where there is cribbing (its own weight included), otherwise over the pad{units === 'metric' ? '' : `; 1 m² = ${m2ToFt2(1).toFixed(2)} ft²`}.</p>
+      <p className="mt-1 text-xs text-ink-muted">Pressure over the cribbing where there is cribbing (its own weight included), otherwise over the pad.</p>
     </section>
   );
 }

@@ -129,7 +129,7 @@ describe('truckToLiftParts: setup errors name the field', () => {
 describe('load chart lookup: no upward interpolation (common practice, no published source)', () => {
   const chart = HR7_SPEC.loadChart;
   it('takes the next greater radius', () => {
-    expect(lookupRated(chart, 4.5, 10.4)).toEqual({ rated: 20000, radiusUsed: 5, boomLengthUsed: 10.4, reason: null });
+    expect(lookupRated(chart, 4.5, 10.4)).toEqual({ rated: 20000, radiusUsed: 5, boomLengthUsed: 10.4, missing: null });
     expect(lookupRated(chart, 4.01, 14.6).rated).toBe(16000);
   });
   it('takes the next longer boom', () => {
@@ -142,14 +142,14 @@ describe('load chart lookup: no upward interpolation (common practice, no publis
     expect(lookupRated(chart, 6.0004, 14.6004).rated).toBe(13500);
   });
   it('uses the first row and column below the chart', () => {
-    expect(lookupRated(chart, 1.0, 5.0)).toEqual({ rated: 45000, radiusUsed: 2.5, boomLengthUsed: 6.4, reason: null });
+    expect(lookupRated(chart, 1.0, 5.0)).toEqual({ rated: 45000, radiusUsed: 2.5, boomLengthUsed: 6.4, missing: null });
   });
   it('gives no rating beyond the chart, with the reason', () => {
-    expect(lookupRated(chart, 12.5, 14.6)).toEqual({ rated: null, radiusUsed: null, boomLengthUsed: 14.6, reason: "radius 12.50 m is beyond the chart's largest radius of 12 m" });
-    expect(lookupRated(chart, 5, 15)).toEqual({ rated: null, radiusUsed: 5, boomLengthUsed: null, reason: "boom length 15.00 m is beyond the chart's longest boom of 14.6 m" });
+    expect(lookupRated(chart, 12.5, 14.6)).toEqual({ rated: null, radiusUsed: null, boomLengthUsed: 14.6, missing: { why: 'radius-beyond-chart', chartLimit: 12 } });
+    expect(lookupRated(chart, 5, 15)).toEqual({ rated: null, radiusUsed: 5, boomLengthUsed: null, missing: { why: 'boom-beyond-chart', chartLimit: 14.6 } });
   });
   it('gives no rating where the chart cell is empty', () => {
-    expect(lookupRated(chart, 6, 6.4)).toEqual({ rated: null, radiusUsed: 6, boomLengthUsed: 6.4, reason: 'the chart gives no rating at 6 m radius with 6.4 m of boom' });
+    expect(lookupRated(chart, 6, 6.4)).toEqual({ rated: null, radiusUsed: 6, boomLengthUsed: 6.4, missing: { why: 'no-rating', chartLimit: null } });
   });
   it("transposes to the engine's rated[boom][radius]", () => {
     const e = toEngineLoadChart(chart);

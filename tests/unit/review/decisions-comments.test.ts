@@ -52,13 +52,15 @@ describe('approval rules', () => {
   it('needs a written reason beyond the plan’s own stricter limits, and keeps it', async () => {
     // Tighten the pending submission's figures as a stricter plan limit would: 20 % of tipping.
     const sub = await getDb().selectFrom('scene_submissions').select(['id', 'figures']).where('scene_id', '=', awaiting).where('state', '=', 'pending').executeTakeFirstOrThrow();
-    const figures = { ...(sub.figures as Record<string, unknown>), beyondPlan: [{ id: 'stability', reason: 'over the plan’s 20 % limit' }] };
+    const figures = { ...(sub.figures as Record<string, unknown>), beyondPlan: ['stability'] };
     await getDb().updateTable('scene_submissions').set({ figures: JSON.stringify(figures) }).where('id', '=', sub.id).execute();
     signInAs(await demoUser('supervisor@harrow.example'));
     const revision = await rev(awaiting);
     const bare = await post(decision.POST, awaiting, { decision: 'approve', revision });
     expect(bare.status).toBe(422);
     expect(bare.json.issues?.[0].path).toBe('reason');
+    expect((bare.json.checks as { id: string; message: string }[]).map((c) => c.id)).toEqual(['stability']);
+    expect((bare.json.checks as { message: string }[])[0].message).toMatch(/%/);
     const ok = await post(decision.POST, awaiting, { decision: 'approve', revision, reason: 'Spotter on the scale house side; the yard is closed.', conditions: 'Spotter at the pin.' });
     expect(ok.status, ok.text).toBe(200);
     const decided = await getDb().selectFrom('scene_submissions').select(['state', 'reason', 'conditions']).where('id', '=', sub.id).executeTakeFirstOrThrow();

@@ -1,0 +1,40 @@
+import { getDb } from '@/db';
+import { inTransaction } from '@/db/transaction';
+import { getScene } from '@/db/repositories/scenes';
+import { planDetailsAt, savePlanDetails } from '@/db/repositories/plan-details';
+import { idParams, route } from '@/lib/api/route';
+import { HttpError } from '@/lib/api/errors';
+import { planRevisionQuery, savePlanDetailsSchema } from '@/lib/validations/plan';
+import { planRevision } from '../plan-revision';
+
+export const runtime = 'nodejs';
+
+/** The plan details that go with a revision (default: the approved revision, else the latest). */
+export const GET = route({ params: idParams, query: planRevisionQuery }, async ({ user, params, query }) => {
+  const db = getDb();
+  const { scene, revision } = await planRevision(db, user, params.id, query.revision);
+  const stored = await planDetailsAt(db, scene.id, revision);
+  return { id: scene.id, revision, savedAt: stored.savedAt, savedBy: stored.savedBy, details: stored.details };
+});
+
+/** Saves the details as a new revision of the scene (the sketch is carried over unchanged). */
+export const PUT = route({ roles: ['operator'], params: idParams, body: savePlanDetailsSchema }, async ({ user, params, body }) => {
+  const outcome = await inTransaction(getDb(), async (trx) => {
+    const scene = await getScene(trx, user, params.id);
+    if (!scene) throw new HttpError(404, 'Scene not found');
+    if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit its plan details');
+    return savePlanDetails(trx, user, params.id, body.revision, body.details);
+  });
+  if (outcome.kind === 'missing') throw new HttpError(404, 'Scene not found');
+  if (outcome.kind === 'stale') {
+    return Response.json(
+      {
+        error: `revision: these details were based on revision ${body.revision}, but the scene is now at revision ${outcome.current}`,
+        issues: [{ path: 'revision', message: 'Stale revision' }],
+        currentRevision: outcome.current,
+      },
+      { status: 409 },
+    );
+  }
+  return { id: outcome.scene.id, revision: outcome.scene.revision, savedAt: outcome.scene.revision, savedBy: user.name, details: body.details };
+});
