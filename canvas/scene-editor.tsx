@@ -1,7 +1,8 @@
 'use client';
 import { useEffect, useMemo, useState } from 'react';
 import { createEditorStore } from './store/editor-store';
-import { Editor } from './editor/editor';
+import type { Editor } from './editor/editor';
+import { createEditor } from './editor/create-editor';
 import { EditorContext } from './editor-context';
 import { PlanView } from './view/plan-view';
 import { ToolRail } from './panels/tool-rail';
@@ -12,8 +13,8 @@ import { ScaleBar } from './view/scale-bar';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
 import { attachLiveAnalysis } from './analysis/live-analysis';
-import type { SceneDocument } from './document/schema';
-import type { TruckProfileInput } from './truck/from-spec';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { EditorStore } from './store/editor-store';
 
@@ -40,7 +41,7 @@ const typing = (t: EventTarget | null) => t instanceof HTMLElement && (t.isConte
 export function SceneEditor(props: SceneEditorProps) {
   const [ctx] = useState(() => {
     const store = createEditorStore({ sceneId: props.scene.id, document: props.document, revision: props.scene.revision, readOnly: props.readOnly, units: props.units, profiles: props.profiles });
-    return { store, editor: new Editor(store) };
+    return { store, editor: createEditor(store) };
   });
   const value = useMemo(() => ctx, [ctx]);
 

@@ -1,11 +1,5 @@
-import { PLAN_STATUSES, type PlanStatus } from '@/lib/review/lifecycle';
 import type { ColumnType, Generated, Insertable, JSONColumnType, Selectable, Updateable } from 'kysely';
-
-export type Role = 'operator' | 'supervisor' | 'trainer' | 'admin';
-export const ROLES: readonly Role[] = ['operator', 'supervisor', 'trainer', 'admin'] as const;
-
-export type SceneStatus = PlanStatus;
-export const SCENE_STATUSES: readonly SceneStatus[] = PLAN_STATUSES;
+import type { RiggingKind, RiggingStatus, Role, SceneStatus } from '@/lib/domain';
 
 /** ISO-8601 text timestamps: SQLite has no date type, and text sorts correctly. */
 type Timestamp = ColumnType<string, string | undefined, string>;
@@ -107,11 +101,6 @@ export interface EquipmentProfileVersionTable {
   author_id: number | null;
   created_at: Timestamp;
 }
-
-export type RiggingKind = 'round-sling' | 'web-sling' | 'wire-rope-sling' | 'chain' | 'shackle' | 'snatch-block' | 'hook' | 'recovery-strap';
-export const RIGGING_KINDS: readonly RiggingKind[] = ['round-sling', 'web-sling', 'wire-rope-sling', 'chain', 'shackle', 'snatch-block', 'hook', 'recovery-strap'] as const;
-export type RiggingStatus = 'in_service' | 'tagged_out' | 'retired';
-export const RIGGING_STATUSES: readonly RiggingStatus[] = ['in_service', 'tagged_out', 'retired'] as const;
 
 export interface RiggingItemTable {
   id: Generated<number>;

@@ -1,4 +1,4 @@
-import type { Role } from '@/db/schema';
+import type { Role } from '@/lib/domain';
 import 'next-auth';
 import 'next-auth/jwt';
 

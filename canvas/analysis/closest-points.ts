@@ -1,4 +1,4 @@
-import type { Polygon, Pt } from '../geometry/vec';
+import type { Polygon, Pt } from '@/lib/scene/geometry/vec';
 
 function closestOnSegment(p: Pt, a: Pt, b: Pt): Pt {
   const dx = b.x - a.x;

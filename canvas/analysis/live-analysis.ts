@@ -1,22 +1,10 @@
 import { analyzePrepared, analyzeAtSlew, isLiftError, prepareLift, type LiftResult, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
-import type { SceneDocument } from '../document/schema';
-import type { TruckObject } from '../document/objects';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { TruckObject } from '@/lib/scene/objects';
 import type { EditorStore } from '../store/editor-store';
-import type { TruckModel } from '../truck/truck-model';
-import { sceneToLiftInput, type SceneLift } from './scene-to-lift';
-
-/** The engine's view of the scene: prepared once per edit, a snapshot per slew, the full result when idle. */
-export interface LiveAnalysis {
-  lift: SceneLift;
-  prepared: PreparedLift | null;
-  /** analyzeLift over the planned swing; null while a drag is in progress or on an engine error. */
-  result: LiftResult | null;
-  /** The engine's typed error, in its words. */
-  error: { code: string; message: string } | null;
-  /** At the slew the view shows. */
-  snapshot: SlewSnapshot | null;
-  slew: number | null;
-}
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
+import type { LiveAnalysis } from './live-analysis-types';
 
 const truckOf = (d: SceneDocument) => d.objects.find((o): o is TruckObject => o.kind === 'truck');
 

@@ -1,11 +1,11 @@
-import type { SceneDocument } from '../document/schema';
-import type { LoadObject, TruckObject } from '../document/objects';
-import type { TruckModel } from '../truck/truck-model';
-import type { LiveAnalysis } from './live-analysis';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { LoadObject, TruckObject } from '@/lib/scene/objects';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
+import type { LiveAnalysis } from './live-analysis-types';
 import { sideOf, type LiftResult, type PreparedLift, type TruckSide } from '@/lib/lift';
-import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '../geometry/vec';
-import { hookSitePoint, hookRadius } from '../shapes/truck/geometry';
-import { loadLocalOutline } from '../shapes/load/geometry';
+import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '@/lib/scene/geometry/vec';
+import { hookSitePoint, hookRadius } from '@/lib/scene/geometry/truck';
+import { loadLocalOutline } from '@/lib/scene/geometry/load';
 import { arcOf } from '@/lib/lift/prepare';
 import { closestPoints } from './closest-points';
 

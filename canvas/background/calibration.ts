@@ -6,7 +6,7 @@ export interface ImagePoint {
   y: number;
 }
 
-/** The background fields of the scene document (canvas/document backgroundSchema). */
+/** The background fields of the scene document (lib/scene backgroundSchema). */
 export interface BackgroundPlacement {
   uploadId: string;
   /** Site position of the image's top-left corner, m (x east, y north). */

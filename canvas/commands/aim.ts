@@ -1,7 +1,7 @@
-import type { SceneDocument } from '../document/schema';
-import type { TruckObject } from '../document/objects';
-import { DEG, bearing, wrap360, type Pt } from '../geometry/vec';
-import type { TruckModel } from '../truck/truck-model';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { TruckObject } from '@/lib/scene/objects';
+import { DEG, bearing, wrap360, type Pt } from '@/lib/scene/geometry/vec';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 
 /** Slew angle (truck frame) that points the boom at a site point. */
 export function slewToward(truck: TruckObject, p: Pt): number {

@@ -1,4 +1,4 @@
-import type { SceneDocument } from '../document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 
 /**
  * An edit is a command: it takes the document and returns the next one, saying how the change meets the

@@ -1,5 +1,5 @@
-import type { SceneDocument } from '../document/schema';
-import type { SceneObject } from '../document/objects';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { SceneObject } from '@/lib/scene/objects';
 import { type Capture, type Command } from './command';
 
 const mapSelected = (doc: SceneDocument, ids: readonly string[], f: (o: SceneObject) => SceneObject): SceneDocument => {

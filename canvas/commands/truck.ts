@@ -1,7 +1,7 @@
-import type { SceneDocument, Swing } from '../document/schema';
-import type { TruckObject } from '../document/objects';
+import type { SceneDocument, Swing } from '@/lib/scene/schema';
+import type { TruckObject } from '@/lib/scene/objects';
 import type { Capture, Command } from './command';
-import { maxExtension, type TruckModel } from '../truck/truck-model';
+import { maxExtension, type TruckModel } from '@/lib/scene/truck/truck-model';
 
 const mapTruck = (doc: SceneDocument, f: (t: TruckObject) => TruckObject): SceneDocument => ({
   ...doc,

@@ -1,11 +1,12 @@
 import { cloneObjects, deleteObjects, setLocked, addObjects } from '../commands/objects';
 import { setSlew } from '../commands/truck';
-import type { TruckObject } from '../document/objects';
-import { boundsOf } from '../geometry/vec';
-import { footprintsOf } from '../shapes/geometry';
-import { hookSitePoint } from '../shapes/truck/geometry';
+import type { TruckObject } from '@/lib/scene/objects';
+import { boundsOf } from '@/lib/scene/geometry/vec';
+import { footprintsOf } from '@/lib/scene/geometry/footprints';
+import { hookSitePoint } from '@/lib/scene/geometry/truck';
 import { fitBounds, zoomAround } from './camera';
-import { newId, type Editor } from './editor';
+import type { Editor } from './editor';
+import { newId } from '@/lib/scene/ids';
 
 /** Editing actions shared by the keyboard, the toolbar and the tests. */
 export const PASTE_OFFSET_M = 1;

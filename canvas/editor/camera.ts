@@ -1,5 +1,5 @@
 import type { Camera } from '../store/types';
-import type { Bounds, Pt } from '../geometry/vec';
+import type { Bounds, Pt } from '@/lib/scene/geometry/vec';
 import { BASE_PX_PER_M, MAX_ZOOM, MIN_ZOOM } from '../store/editor-store';
 
 /** Site (m, y north) ↔ screen (px, y down) for a camera centred on (camera.x, camera.y). */

@@ -1,34 +1,73 @@
 import type { EditorStore } from '../store/editor-store';
-import type { EditorState, PlaceKind } from '../store/types';
+import type { EditorState } from '../store/types';
+import type { PlaceKind } from '@/lib/scene/factories';
 import type { Command } from '../commands/command';
-import type { SceneObject } from '../document/objects';
-import type { KeyInfo, PointerInfo, ToolState } from '../tools/tool-state';
-import { TOOL_STATES } from '../tools/registry';
-import { objectAt, type GeometryContext } from '../shapes/geometry';
+import type { SceneObject } from '@/lib/scene/objects';
+import { objectAt, type GeometryContext } from '@/lib/scene/geometry/footprints';
 import { handleAt, handlesFor, type Handle } from './handles';
-import { runShortcut } from './shortcuts';
 import { screenToWorld } from './camera';
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 
-let idCounter = 0;
-/** Short unique ids: a time-based prefix keeps pasted copies from colliding across sessions. */
-export function newId(kind: string): string {
-  idCounter += 1;
-  return `${kind}-${Date.now().toString(36).slice(-5)}${idCounter.toString(36)}`;
+export interface PointerInfo {
+  /** Site frame, m. */
+  world: Pt;
+  /** Screen pixels inside the canvas. */
+  screen: Pt;
+  shift: boolean;
+  alt: boolean;
+  /** Ctrl or Cmd. */
+  mod: boolean;
+  button: number;
+  pointerType: 'mouse' | 'pen' | 'touch';
 }
+
+export interface KeyInfo {
+  key: string;
+  shift: boolean;
+  alt: boolean;
+  mod: boolean;
+}
+
+/**
+ * One state of a tool. A tool is a small machine: each state handles the events it cares about and names
+ * the next state with editor.transition("tool.state", info).
+ */
+export interface ToolState {
+  id: string;
+  enter?(ed: Editor, info?: unknown): void;
+  exit?(ed: Editor): void;
+  pointerDown?(ed: Editor, e: PointerInfo): void;
+  pointerMove?(ed: Editor, e: PointerInfo): void;
+  pointerUp?(ed: Editor, e: PointerInfo): void;
+  doubleClick?(ed: Editor, e: PointerInfo): void;
+  /** Return true when the key was used. */
+  keyDown?(ed: Editor, e: KeyInfo): boolean | void;
+  keyUp?(ed: Editor, e: KeyInfo): void;
+  /** Escape, a second finger landing, or the tool being switched. */
+  cancel?(ed: Editor): void;
+}
+
+/** Keyboard shortcuts the states left unused; true when one ran. */
+export type ShortcutRunner = (ed: Editor, e: KeyInfo) => boolean;
 
 /**
  * The editor's event hub: it routes pointer and key events to the current tool state and offers the
  * states what they share (hit-testing, snapping, running commands). The store holds the state path.
  */
 export class Editor {
-  private states = new Map<string, ToolState>(TOOL_STATES.map((s) => [s.id, s]));
+  private states: Map<string, ToolState>;
   private current: ToolState;
   /** Set by states that track a press (pointing, dragging...). */
   memo: Record<string, unknown> = {};
   spaceHeld = false;
 
-  constructor(readonly store: EditorStore) {
+  /** The states and shortcuts come in from create-editor.ts, so neither has to import this class's module back. */
+  constructor(
+    readonly store: EditorStore,
+    states: readonly ToolState[],
+    private readonly runShortcut: ShortcutRunner,
+  ) {
+    this.states = new Map(states.map((s) => [s.id, s]));
     this.current = this.states.get(store.getState().toolPath) ?? this.states.get('select.idle')!;
   }
 
@@ -134,7 +173,7 @@ export class Editor {
       return true;
     }
     if (this.current.keyDown?.(this, e)) return true;
-    return runShortcut(this, e);
+    return this.runShortcut(this, e);
   }
   keyUp(e: KeyInfo) {
     if (e.key === ' ') this.spaceHeld = false;

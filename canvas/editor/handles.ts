@@ -1,9 +1,9 @@
-import type { SceneObject, TruckObject } from '../document/objects';
-import { placePoint, type Pt } from '../geometry/vec';
-import type { GeometryContext } from '../shapes/geometry';
-import { objectBounds } from '../shapes/geometry';
-import { hookSitePoint, truckPads } from '../shapes/truck/geometry';
-import type { TruckModel } from '../truck/truck-model';
+import type { SceneObject, TruckObject } from '@/lib/scene/objects';
+import { placePoint, type Pt } from '@/lib/scene/geometry/vec';
+import type { GeometryContext } from '@/lib/scene/geometry/footprints';
+import { objectBounds } from '@/lib/scene/geometry/footprints';
+import { hookSitePoint, truckPads } from '@/lib/scene/geometry/truck';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 
 /** Grab points drawn over the selection; hit-tested before the objects themselves. */
 export type Handle =

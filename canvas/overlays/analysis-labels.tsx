@@ -5,7 +5,7 @@ import { tippingLineShort, tippingMargin } from '@/lib/format/checks';
 import { formatAngle, formatLength, formatPercent } from '@/lib/format/quantity';
 import { PAL } from '../view/palette';
 import type { OverlayGeometry } from '../analysis/overlay-geometry';
-import type { Pt } from '../geometry/vec';
+import type { Pt } from '@/lib/scene/geometry/vec';
 import type { LabelBox } from './label-placement';
 
 

@@ -1,7 +1,7 @@
 'use client';
 import { useState } from 'react';
 import { useEditorContext, useEditorState } from '../editor-context';
-import type { PlaceKind } from '../store/types';
+import type { PlaceKind } from '@/lib/scene/factories';
 import { Icon } from './icons';
 
 type ToolChoice = 'select' | 'hand' | 'tape' | PlaceKind;

@@ -5,7 +5,7 @@ import { fitToScene, zoomBy } from '../editor/actions';
 import { zoomPercent } from '../editor/camera';
 import { ToolButton } from './button';
 import { SceneSaveBar } from '../persistence/scene-save-bar';
-import { parseSceneDocument } from '../document/parse';
+import { parseSceneDocument } from '@/lib/scene/parse';
 
 /** Scene title and status, undo/redo, snapping and zoom. */
 export function TopBar({ scene, user }: { scene: { id: number; title: string; status: string; revision: number; updatedAt: string }; user: { name: string; role: string } }) {

@@ -1,8 +1,8 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import type { SceneDocument } from '../document/schema';
-import { emptySceneDocument } from '../document/empty';
-import { truckModelFromProfile, type TruckProfileInput } from '../truck/from-spec';
-import type { TruckModel } from '../truck/truck-model';
+import type { SceneDocument } from '@/lib/scene/schema';
+import { emptySceneDocument } from '@/lib/scene/empty';
+import { truckModelFromProfile, type TruckProfileInput } from '@/lib/scene/truck/from-spec';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 import type { UnitSystem } from '@/lib/units';
 import type { EditorState } from './types';
 

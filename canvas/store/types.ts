@@ -1,10 +1,11 @@
-import type { SceneDocument } from '../document/schema';
-import type { SceneObject } from '../document/objects';
-import type { TruckModel } from '../truck/truck-model';
-import type { TruckProfileInput } from '../truck/from-spec';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { SceneObject } from '@/lib/scene/objects';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
+import type { PlaceKind } from '@/lib/scene/factories';
 import type { UnitSystem } from '@/lib/units';
 import type { Command } from '../commands/command';
-import type { LiveAnalysis } from '../analysis/live-analysis';
+import type { LiveAnalysis } from '../analysis/live-analysis-types';
 
 /** The world point at the centre of the view and the scale. 100 % zoom = BASE_PX_PER_M pixels per metre. */
 export interface Camera {
@@ -20,21 +21,6 @@ export interface Marquee {
   y1: number;
 }
 
-/** What the place tool puts down next. */
-export type PlaceKind =
-  | 'truck'
-  | 'load-coil'
-  | 'load-box'
-  | 'load-vehicle'
-  | 'trailer'
-  | 'obstacle-rect'
-  | 'obstacle-circle'
-  | 'obstacle-polygon'
-  | 'pole'
-  | 'tree'
-  | 'traffic-lane'
-  | 'power-line'
-  | 'note';
 
 export interface EditorState {
   sceneId: number | null;

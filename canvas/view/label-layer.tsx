@@ -4,7 +4,7 @@ import { Label, Tag, Text } from 'react-konva';
 import { useEditorState } from '../editor-context';
 import { worldToScreen } from '../editor/camera';
 import { formatLength } from '@/lib/format/quantity';
-import { tapeLength } from '../shapes/tape/geometry';
+import { tapeLength } from '@/lib/scene/geometry/tape';
 import { PAL } from './palette';
 import { analysisPillItems, Pill, PILL_FONT, PILL_PAD, type PillItem } from '../overlays/analysis-labels';
 import { useOverlayGeometry } from '../overlays/use-overlay';

@@ -3,12 +3,12 @@ import { Circle, Line, Rect, Group } from 'react-konva';
 import { useEditorContext, useEditorState } from '../editor-context';
 import { BoomShape } from '../shapes/truck/boom-shape';
 import { LoadHangingShape } from '../shapes/load/load-shape';
-import { hookSitePoint } from '../shapes/truck/geometry';
-import { footprintsOf } from '../shapes/geometry';
+import { hookSitePoint } from '@/lib/scene/geometry/truck';
+import { footprintsOf } from '@/lib/scene/geometry/footprints';
 import { PAL } from './palette';
 import { useDisplaySlew } from './use-display-slew';
 import { AnalysisOverlays } from '../overlays/analysis-overlays';
-import type { LoadObject, TruckObject } from '../document/objects';
+import type { LoadObject, TruckObject } from '@/lib/scene/objects';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 

@@ -1,6 +1,6 @@
 'use client';
 import { useEditorState } from '../editor-context';
-import type { TruckObject } from '../document/objects';
+import type { TruckObject } from '@/lib/scene/objects';
 
 /** The slew the view shows: a read-only viewer's scrub, else the document's. */
 export function useDisplaySlew(): number | null {

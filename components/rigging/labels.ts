@@ -1,4 +1,4 @@
-import type { RiggingKind, RiggingStatus } from '@/db/schema';
+import type { RiggingKind, RiggingStatus } from '@/lib/domain';
 import { addDays, DUE_SOON_DAYS } from '@/lib/dates';
 
 export const KIND_LABEL: Record<RiggingKind, string> = {

@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
-import { RIGGING_KINDS, RIGGING_STATUSES } from '@/db/schema';
+import { RIGGING_KINDS, RIGGING_STATUSES } from '@/lib/domain';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

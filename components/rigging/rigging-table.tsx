@@ -5,7 +5,7 @@ import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, 
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import type { RiggingItem } from '@/db/repositories/rigging';
-import { RIGGING_KINDS, RIGGING_STATUSES } from '@/db/schema';
+import { RIGGING_KINDS, RIGGING_STATUSES } from '@/lib/domain';
 import { Badge } from '@/components/ui/badge';
 import { ButtonLink, buttonClasses } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';

@@ -5,7 +5,7 @@ import { createColumnHelper, getCoreRowModel, useReactTable, type SortingState }
 import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import type { SceneSummary } from '@/db/repositories/scenes';
-import { SCENE_STATUSES, type SceneStatus } from '@/db/schema';
+import { SCENE_STATUSES, type SceneStatus } from '@/lib/domain';
 import { StatusPill, statusLabel } from '@/components/ui/badge';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { Wordmark } from '@/components/logo';
 import { SignOutButton } from '@/components/sign-out-button';
 import { AppNav, type NavItem } from './app-nav';

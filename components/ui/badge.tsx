@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { SceneStatus } from '@/db/schema';
+import type { SceneStatus } from '@/lib/domain';
 import { cx } from './cx';
 import { AppIcon, type IconName } from './icons';
 

@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import type { FieldIssue } from '@/lib/api/errors';
 import type { LessonInput } from '@/lib/validations/lessons';
 import { inTransaction } from '../transaction';

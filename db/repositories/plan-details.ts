@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { emptyPlanDetails, planDetailsSchema, type PlanDetails } from '@/lib/plan-details/schema';
 import { updateScene, type UpdateOutcome } from './scenes';
 import { inTransaction } from '../transaction';

@@ -1,5 +1,6 @@
 import type { Kysely } from 'kysely';
-import type { Database, RiggingItemRow, RiggingKind, RiggingStatus } from '../schema';
+import type { Database, RiggingItemRow } from '../schema';
+import type { RiggingKind, RiggingStatus } from '@/lib/domain';
 import type { ResolvedRiggingItem } from '@/lib/equipment/rigging-item';
 import { addDays, DUE_SOON_DAYS } from '@/lib/dates';
 

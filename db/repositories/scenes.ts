@@ -1,6 +1,7 @@
 import { sql, type Kysely } from 'kysely';
-import type { Database, SceneRow, SceneStatus } from '../schema';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { Database, SceneRow } from '../schema';
+import type { SceneStatus } from '@/lib/domain';
+import type { CurrentUser } from '@/lib/domain';
 import { canReadAllScenes } from '@/lib/auth/roles';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';

@@ -1,5 +1,6 @@
 import type { Kysely } from 'kysely';
-import type { Database, SceneStatus, SceneSubmissionRow, SubmissionState } from '../schema';
+import type { SceneStatus } from '@/lib/domain';
+import type { Database, SceneSubmissionRow, SubmissionState } from '../schema';
 
 type Db = Kysely<Database>;
 

@@ -1,5 +1,6 @@
 import type { Kysely } from 'kysely';
-import type { Database, NewUser, Role } from '../schema';
+import type { Database, NewUser } from '../schema';
+import type { Role } from '@/lib/domain';
 
 type Db = Kysely<Database>;
 

@@ -1,5 +1,5 @@
-import type { SceneStatus } from '../schema';
-import { sceneDocumentSchema, type SceneDocumentIn } from '@/canvas/document/schema';
+import type { SceneStatus } from '@/lib/domain';
+import { sceneDocumentSchema, type SceneDocumentIn } from '@/lib/scene/schema';
 import { coilTransfer, reefer } from './demo-scenes';
 
 /**

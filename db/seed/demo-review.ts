@@ -1,8 +1,8 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import { parseSceneDocument } from '@/canvas/document/parse';
-import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
-import { truckModelFromProfile } from '@/canvas/truck/from-spec';
+import { parseSceneDocument } from '@/lib/scene/parse';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 import { analyzeLift } from '@/lib/lift';
 import { ENGINE_VERSION } from '@/lib/lift/version';
 import { planFigures } from '@/lib/review/figures';

@@ -1,5 +1,5 @@
-import type { SceneStatus } from '../schema';
-import { sceneDocumentSchema, type SceneDocumentIn } from '@/canvas/document/schema';
+import type { SceneStatus } from '@/lib/domain';
+import { sceneDocumentSchema, type SceneDocumentIn } from '@/lib/scene/schema';
 import { standardRating } from '@/lib/equipment/rigging-ratings';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
 

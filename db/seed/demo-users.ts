@@ -1,4 +1,4 @@
-import type { Role } from '../schema';
+import type { Role } from '@/lib/domain';
 
 /** Invented demo organisations and people. The README's sign-in table lists these. */
 export const DEMO_PASSWORD = 'arcline-demo-2026';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { Role } from '@/db/schema';
+import type { Role } from '@/lib/domain';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 import { AccessError, assertRole } from '@/lib/auth/roles';
 import { HttpError, describeIssues, jsonError, zodIssues } from './errors';

@@ -1,17 +1,9 @@
 import { getDb } from '@/db';
 import { findUserById } from '@/db/repositories/users';
-import type { Role } from '@/db/schema';
+import type { CurrentUser } from '@/lib/domain';
 import { getSessionUserId } from './session-claims';
 
-export interface CurrentUser {
-  id: number;
-  organisationId: number;
-  organisationName: string;
-  role: Role;
-  name: string;
-  email: string;
-  units: 'imperial' | 'metric';
-}
+export type { CurrentUser };
 
 /**
  * The signed-in user as the database knows them now. The role and organisation are read

@@ -1,5 +1,4 @@
-import type { Role } from '@/db/schema';
-import type { CurrentUser } from './current-user';
+import type { CurrentUser, Role } from '@/lib/domain';
 
 export class AccessError extends Error {
   constructor(

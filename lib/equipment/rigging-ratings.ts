@@ -1,7 +1,7 @@
 import { KG_PER_LB } from '@/lib/units';
 import { roundSlingRating, shackleWll, SHACKLE_SIZES, type RoundSlingColour } from '@/lib/lift/rigging-tables';
 import { roundSlingColours } from '@/lib/lift/schema';
-import type { RiggingKind } from '@/db/schema';
+import type { RiggingKind } from '@/lib/domain';
 
 /**
  * Ratings filled in from built-in standard tables where one applies. Every table lives in the engine

@@ -1,8 +1,5 @@
 import type { z } from 'zod';
-import type { TruckSpec } from './truck-spec';
-
-/** The named parts of the body outline, rear to front. */
-export const BODY_PART_IDS = ['tailboard', 'body', 'cab'] as const;
+import { BODY_PART_IDS, truckSpecShape, type TruckSpec } from './truck-spec';
 
 /** Rounds for messages: a person reads "12.2 m", not "12.199999999 m". */
 const m = (v: number) => `${Math.round(v * 1000) / 1000} m`;
@@ -126,3 +123,6 @@ export function checkTruckSpec(spec: TruckSpec, ctx: z.RefinementCtx) {
   chartRules(spec, out);
   for (const i of out) ctx.addIssue({ code: 'custom', path: i.path, message: i.message });
 }
+
+/** The validated truck profile: shapes first (truck-spec.ts), then the rules that tie fields together. */
+export const truckSpecSchema = truckSpecShape.superRefine(checkTruckSpec);

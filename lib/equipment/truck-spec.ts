@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { BODY_PART_IDS, checkTruckSpec } from './truck-spec-rules';
 
-export { BODY_PART_IDS };
+/** The named parts of the body outline, rear to front. */
+export const BODY_PART_IDS = ['tailboard', 'body', 'cab'] as const;
 
 /**
  * A truck profile's numbers, SI inside (m, kg, degrees).
@@ -132,7 +132,5 @@ export const truckSpecShape = z.object({
   loadChart: loadChartSchema,
 });
 
-/** The validated truck profile: shapes first, then the rules that tie fields together (truck-spec-rules.ts). */
-export const truckSpecSchema = truckSpecShape.superRefine(checkTruckSpec);
 export type TruckSpec = z.infer<typeof truckSpecShape>;
 export type TruckSpecInput = z.input<typeof truckSpecShape>;

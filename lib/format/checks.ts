@@ -68,7 +68,7 @@ const planPercent = (pct: number) => formatPercent(pct, Number.isInteger(pct) ? 
 const cap = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 const slewWords = (slew: number | null) => (slew === null ? '' : formatAngle(slew));
 
-function powerRuleWords(rule: PowerLineRule, required: string): string {
+export function powerRuleWords(rule: PowerLineRule, required: string): string {
   switch (rule.source) {
     case 'table-a':
       return `29 CFR 1926.1408 Table A requires ${required} up to ${formatNumber(rule.upToKV ?? 0)} kV`;

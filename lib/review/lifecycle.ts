@@ -4,8 +4,10 @@
  * operator may withdraw a submitted plan; an approved plan is frozen until someone starts a new revision,
  * which is a draft with no approval. Who may fire an event is decided by ./permissions, not here.
  */
-export const PLAN_STATUSES = ['draft', 'submitted', 'approved', 'returned', 'archived'] as const;
-export type PlanStatus = (typeof PLAN_STATUSES)[number];
+import { SCENE_STATUSES, type SceneStatus } from '@/lib/domain';
+
+export const PLAN_STATUSES = SCENE_STATUSES;
+export type PlanStatus = SceneStatus;
 
 export const PLAN_EVENTS = ['edit', 'submit', 'withdraw', 'approve', 'return', 'new-revision'] as const;
 export type PlanEvent = (typeof PLAN_EVENTS)[number];

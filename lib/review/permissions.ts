@@ -1,4 +1,4 @@
-import type { Role } from '@/db/schema';
+import type { Role } from '@/lib/domain';
 
 /**
  * Who may do what on the review desk. Pure: the user's id and role, the scene's owner. Routes, pages and the

@@ -6,7 +6,7 @@ import { recordAudit } from '@/db/repositories/audit';
 import { findComment, insertComment, listComments, setCommentResolved, type CommentAnchor, type SceneComment } from '@/db/repositories/comments';
 import { usersWithRole } from '@/db/repositories/notifications';
 import { findUserById } from '@/db/repositories/users';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { insideExtent, objectIds, sceneExtent } from '@/lib/review/extent';
 import { mayComment } from '@/lib/review/permissions';
 import type { Outcome } from './review';

@@ -7,7 +7,7 @@ import { closeSubmission, insertSubmission, moveSceneStatus, pendingSubmission }
 import { countOpenComments } from '@/db/repositories/comments';
 import { usersWithRole } from '@/db/repositories/notifications';
 import { findUserById } from '@/db/repositories/users';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { transition, type PlanEvent } from '@/lib/review/lifecycle';
 import { planFigures, type LimitBreach, type PlanFigures } from '@/lib/review/figures';
 import { decisionRefusal, mayManagePlan } from '@/lib/review/permissions';

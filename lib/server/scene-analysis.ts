@@ -2,12 +2,12 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import { getScene } from '@/db/repositories/scenes';
 import { findProfileVersion } from '@/db/repositories/equipment';
-import type { CurrentUser } from '@/lib/auth/current-user';
+import type { CurrentUser } from '@/lib/domain';
 import { analyzeLift, isLiftError, type LiftInputIn, type LiftResult } from '@/lib/lift';
 import { ENGINE_VERSION } from '@/lib/lift/version';
-import { parseSceneDocument } from '@/canvas/document/parse';
-import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
-import { truckModelFromProfile } from '@/canvas/truck/from-spec';
+import { parseSceneDocument } from '@/lib/scene/parse';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 
 /**
  * The engine's result for a saved revision of a scene, computed on the server exactly as the editor does:

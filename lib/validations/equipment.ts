@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { pathId } from './path-id';
-import { truckSpecSchema } from '@/lib/equipment/truck-spec';
+import { truckSpecSchema } from '@/lib/equipment/truck-spec-rules';
 
 /** A truck profile as the API and the profile form take it: identity fields plus the validated spec. */
 export const equipmentProfileSchema = z.object({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { RIGGING_KINDS, RIGGING_STATUSES, type RiggingKind, type RiggingStatus } from '@/db/schema';
+import { RIGGING_KINDS, RIGGING_STATUSES, type RiggingKind, type RiggingStatus } from '@/lib/domain';
 
 /** A calendar date, YYYY-MM-DD, that exists. */
 export const isoDate = (label: string) =>

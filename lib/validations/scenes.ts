@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { SCENE_STATUSES } from '@/db/schema';
-import { storedSceneDocumentSchema } from '@/canvas/document/parse';
+import { SCENE_STATUSES } from '@/lib/domain';
+import { storedSceneDocumentSchema } from '@/lib/scene/parse';
 
 /** Largest scene document accepted, as serialised JSON. */
 export const MAX_DOCUMENT_CHARS = 1_500_000;
@@ -12,7 +12,7 @@ export const sceneTitle = z
   .max(120, 'Title can be at most 120 characters');
 
 /**
- * The scene document: the editor's versioned schema (canvas/document), shared by client and server.
+ * The scene document: the versioned schema of the scene model (lib/scene), shared by client and server.
  * Older versions are migrated before validation; error paths name the field ("document.objects.2.height").
  */
 export const sceneDocument = z
@@ -21,7 +21,7 @@ export const sceneDocument = z
   .refine((d) => typeof d !== 'object' || JSON.stringify(d).length <= MAX_DOCUMENT_CHARS, 'Document is larger than 1.5 MB')
   .pipe(storedSceneDocumentSchema);
 
-export const sceneStatus = z.enum(SCENE_STATUSES as [string, ...string[]]) as z.ZodType<(typeof SCENE_STATUSES)[number]>;
+export const sceneStatus = z.enum(SCENE_STATUSES);
 
 export const createSceneSchema = z.object({
   title: sceneTitle,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/db/schema';
+import { ROLES } from '@/lib/domain';
 
 export const roleSchema = z.enum(ROLES as unknown as [string, ...string[]], {
   error: `Role must be one of ${ROLES.join(', ')}`,

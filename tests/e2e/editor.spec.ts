@@ -1,8 +1,8 @@
 import { expect, test, type Page } from '@playwright/test';
 import { createSceneViaApi, screens, signIn } from './helpers';
-import { parseSceneDocument } from '@/canvas/document/parse';
-import { truckModelFromProfile } from '@/canvas/truck/from-spec';
-import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
+import { parseSceneDocument } from '@/lib/scene/parse';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
 import { analyzeLift } from '@/lib/lift';
 import { describeCheck } from '@/lib/format/checks';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { TestEditor } from './test-editor';
 import { attachLiveAnalysis } from '@/canvas/analysis/live-analysis';
-import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
 import { analyzeLift, analyzeAtSlew, prepareLift } from '@/lib/lift';
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
 import { setSlew } from '@/canvas/commands/truck';

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { CURRENT_VERSION, sceneDocumentSchema } from '@/canvas/document/schema';
-import { emptySceneDocument } from '@/canvas/document/empty';
-import { migrateDocument, parseSceneDocument } from '@/canvas/document';
+import { CURRENT_VERSION, sceneDocumentSchema } from '@/lib/scene/schema';
+import { emptySceneDocument } from '@/lib/scene/empty';
+import { migrateDocument, parseSceneDocument } from '@/lib/scene';
 import { updateSceneSchema } from '@/lib/validations/scenes';
-import { emptySceneDocument as serverEmpty } from '@/lib/scene-document';
+import { emptySceneDocument as serverEmpty } from '@/lib/scene';
 import { TestEditor } from './test-editor';
 
 function sketched() {

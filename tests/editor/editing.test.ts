@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { TestEditor } from './test-editor';
-import { sceneDocumentSchema } from '@/canvas/document/schema';
-import { hookSitePoint } from '@/canvas/shapes/truck/geometry';
-import { maxExtension } from '@/canvas/truck/truck-model';
+import { sceneDocumentSchema } from '@/lib/scene/schema';
+import { hookSitePoint } from '@/lib/scene/geometry/truck';
+import { maxExtension } from '@/lib/scene/truck/truck-model';
 
 /** A scene with the truck at the origin heading east and an obstacle to its north-east. */
 function withTruckAndShed() {

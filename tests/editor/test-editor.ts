@@ -1,10 +1,11 @@
 import { expect } from 'vitest';
 import { createEditorStore, type EditorStoreOptions } from '@/canvas/store/editor-store';
-import { Editor } from '@/canvas/editor/editor';
+import type { Editor } from '@/canvas/editor/editor';
+import { createEditor } from '@/canvas/editor/create-editor';
 import { worldToScreen } from '@/canvas/editor/camera';
 import type { PointerInfo } from '@/canvas/tools/tool-state';
-import type { SceneObject } from '@/canvas/document/objects';
-import type { TruckProfileInput } from '@/canvas/truck/from-spec';
+import type { SceneObject } from '@/lib/scene/objects';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 
 type Mods = Partial<Pick<PointerInfo, 'shift' | 'alt' | 'mod' | 'pointerType' | 'button'>>;
 
@@ -21,7 +22,7 @@ export class TestEditor {
 
   constructor(opts: EditorStoreOptions = {}) {
     this.store = createEditorStore({ profiles: [TEST_PROFILE], ...opts });
-    this.editor = new Editor(this.store);
+    this.editor = createEditor(this.store);
     this.store.getState().set({ viewport: { width: 1000, height: 800 }, camera: { x: 0, y: 0, pxPerM: 20 } });
   }
 

@@ -6,7 +6,7 @@ import { createEquipmentProfile, retireEquipmentProfile } from '@/db/repositorie
 import { createLesson } from '@/db/repositories/lessons';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { HR4_SPEC } from '@/db/seed/demo-trucks';
-import { storeSceneUpload } from '@/lib/background/store-scene-upload';
+import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { sniffImage } from '@/lib/image-sniff';
 import { makePng } from '@/tests/fixtures/images';
 import { submitPlan } from '@/lib/server/review';

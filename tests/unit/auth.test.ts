@@ -5,7 +5,7 @@ const session = vi.hoisted(() => ({ userId: null as number | null }));
 vi.mock('@/lib/auth/session-claims', () => ({ getSessionUserId: async () => session.userId }));
 
 import { getDb } from '@/db';
-import { ROLES, type Role } from '@/db/schema';
+import { ROLES, type Role } from '@/lib/domain';
 import { DEMO_PASSWORD } from '@/db/seed/demo-users';
 import { AccessError, assertRole, canEditScenes, canReadAllScenes } from '@/lib/auth/roles';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';

@@ -4,6 +4,7 @@ import * as scenes from '@/app/api/scenes/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import * as training from '@/app/api/scenes/[id]/training/route';
 import * as planDetails from '@/app/api/scenes/[id]/details/route';
+import * as planPdf from '@/app/api/scenes/[id]/plan.pdf/route';
 import * as equipment from '@/app/api/equipment/route';
 import * as equipmentOne from '@/app/api/equipment/[id]/route';
 import * as duplicate from '@/app/api/equipment/[id]/duplicate/route';
@@ -207,6 +208,16 @@ const routes: MatrixRoute[] = [
       'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
       'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
       'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/plan.pdf', handler: planPdf.GET, checkId: false,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: peer’s approved': [401, 200, 200, 200, 200, 404],
       'Cobalt: scene': [401, 404, 404, 404, 404, 200],
       'unknown id': [401, 404, 404, 404, 404, 404],
     },

@@ -7,7 +7,7 @@ import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { POST } from '@/app/api/scenes/[id]/background/route';
 import { GET } from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { storageRoot } from '@/lib/storage';
-import { storeSceneUpload } from '@/lib/background/store-scene-upload';
+import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { sniffImage } from '@/lib/image-sniff';
 import { getDb } from '@/db';
 import { makeGifHeader, makePng } from '@/tests/fixtures/images';

@@ -10,8 +10,8 @@ import { buildTemplate, resetToTemplate } from '@/tests/setup/template-db';
 import { TRUCKS, truckIdByUnit } from '@/tests/setup/fixtures';
 import { rowCount, snapshotDb } from '@/tests/setup/snapshot';
 import { call } from '@/tests/setup/call';
-import { storedSceneDocumentSchema } from '@/canvas/document/parse';
-import { emptySceneDocument } from '@/lib/scene-document';
+import { storedSceneDocumentSchema } from '@/lib/scene/parse';
+import { emptySceneDocument } from '@/lib/scene';
 
 /**
  * Generated bodies, ids and queries. The oracle for "valid" is written out here from the rules (title 3–120

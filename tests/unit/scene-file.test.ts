@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildSceneFile, parseSceneFile, sceneFileName, serializeSceneFile } from '@/canvas/persistence/scene-file';
-import { emptySceneDocument, parseSceneDocument } from '@/canvas/document';
+import { emptySceneDocument, parseSceneDocument } from '@/lib/scene';
 
 const good = () => serializeSceneFile(buildSceneFile('Coil transfer, Route 9 weigh station', emptySceneDocument(), new Date('2026-12-01T21:30:00Z')));
 

@@ -9,8 +9,8 @@ import { signInAs } from '@/tests/setup/auth-mock';
 import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { TRUCKS, truckIdByUnit } from '@/tests/setup/fixtures';
 import { call } from '@/tests/setup/call';
-import { emptySceneDocument } from '@/lib/scene-document';
-import { documentTruckPin } from '@/lib/api/truck-pin';
+import { emptySceneDocument } from '@/lib/scene';
+import { documentTruckPin } from '@/lib/server/truck-pin';
 
 /**
  * The scene record says which truck profile version the plan was made with (the equipment issue's rule:

@@ -2,9 +2,9 @@ import { getDb } from '@/db';
 import { inTransaction } from '@/db/transaction';
 import { createScene, listScenes } from '@/db/repositories/scenes';
 import { route } from '@/lib/api/route';
-import { scenePin } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/server/truck-pin';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
-import { emptySceneDocument } from '@/lib/scene-document';
+import { emptySceneDocument } from '@/lib/scene';
 
 export const runtime = 'nodejs';
 

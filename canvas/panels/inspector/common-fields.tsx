@@ -1,5 +1,5 @@
 'use client';
-import type { SceneObject } from '../../document/objects';
+import type { SceneObject } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { LengthField, NumberField, TextField } from '../fields';

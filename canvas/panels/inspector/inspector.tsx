@@ -9,7 +9,7 @@ import { updateObject } from '../../commands/objects';
 import { LengthField, TextField } from '../fields';
 import { Section } from './section';
 import { deleteSelection, duplicate } from '../../editor/actions';
-import type { SceneObject } from '../../document/objects';
+import type { SceneObject } from '@/lib/scene/objects';
 
 const KIND_NAMES: Record<SceneObject['kind'], string> = { truck: 'Truck', load: 'Load', trailer: 'Receiving trailer', obstacle: 'Obstacle', note: 'Note', tape: 'Measuring tape' };
 

@@ -1,10 +1,10 @@
 'use client';
-import type { LoadObject, LoadShape } from '../../document/objects';
+import type { LoadObject, LoadShape } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { LengthField, MassField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
-import { loadMass } from '../../shapes/load/geometry';
+import { loadMass } from '@/lib/scene/geometry/load';
 import { formatMass } from '@/lib/format/quantity';
 import { RiggingPicker } from './rigging-picker';
 

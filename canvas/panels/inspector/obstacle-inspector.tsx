@@ -1,6 +1,6 @@
 'use client';
-import type { ObstacleObject } from '../../document/objects';
-import { OBSTACLE_KINDS } from '../../document/objects';
+import type { ObstacleObject } from '@/lib/scene/objects';
+import { OBSTACLE_KINDS } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { LengthField, NumberField, SelectField } from '../fields';

@@ -1,7 +1,7 @@
 'use client';
 import { useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import type { LoadObject, RiggingPick } from '../../document/objects';
+import type { LoadObject, RiggingPick } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { formatMass } from '@/lib/format/quantity';

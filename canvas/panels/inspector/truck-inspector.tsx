@@ -1,15 +1,15 @@
 'use client';
-import type { TruckObject } from '../../document/objects';
+import type { TruckObject } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { moveTruckToProfileVersion, setBoom, setLegCribbing, setLegExtension } from '../../commands/truck';
 import { updateObject } from '../../commands/objects';
-import { maxExtension } from '../../truck/truck-model';
+import { maxExtension } from '@/lib/scene/truck/truck-model';
 import { LengthField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
 import { ft2ToM2, kgToLb, lbToKg, m2ToFt2 } from '@/lib/units';
 import { formatLength } from '@/lib/format/quantity';
-import { truckModelFromProfile } from '../../truck/from-spec';
-import { currentProfile, currentProfiles } from '../../truck/profile-versions';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
+import { currentProfile, currentProfiles } from '@/lib/scene/truck/profile-versions';
 
 /** Profile, boom and each leg's extension and cribbing. */
 export function TruckInspector({ truck }: { truck: TruckObject }) {

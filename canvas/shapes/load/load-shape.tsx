@@ -1,10 +1,10 @@
 'use client';
 import { memo } from 'react';
 import { Circle, Group, Line } from 'react-konva';
-import type { LoadObject } from '../../document/objects';
-import { placePolygon } from '../../geometry/vec';
+import type { LoadObject } from '@/lib/scene/objects';
+import { placePolygon } from '@/lib/scene/geometry/vec';
 import { PAL, DASH_PLAN } from '../../view/palette';
-import { loadLocalOutline } from './geometry';
+import { loadLocalOutline } from '@/lib/scene/geometry/load';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 

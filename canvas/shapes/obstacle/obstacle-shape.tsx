@@ -1,9 +1,9 @@
 'use client';
 import { memo } from 'react';
 import { Group, Line } from 'react-konva';
-import type { ObstacleObject } from '../../document/objects';
+import type { ObstacleObject } from '@/lib/scene/objects';
 import { PAL } from '../../view/palette';
-import { obstacleFootprints, wireEnds } from './geometry';
+import { obstacleFootprints, wireEnds } from '@/lib/scene/geometry/obstacle';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 

@@ -1,6 +1,6 @@
 'use client';
 import { Group, Line, Circle } from 'react-konva';
-import type { TapeObject } from '../../document/objects';
+import type { TapeObject } from '@/lib/scene/objects';
 import { PAL } from '../../view/palette';
 
 /** A measuring tape: a line with end ticks (its length label is drawn in screen space). */

@@ -1,10 +1,10 @@
 'use client';
 import { memo } from 'react';
 import { Group, Line } from 'react-konva';
-import type { TrailerObject } from '../../document/objects';
-import { placePolygon, rectPolygon } from '../../geometry/vec';
+import type { TrailerObject } from '@/lib/scene/objects';
+import { placePolygon, rectPolygon } from '@/lib/scene/geometry/vec';
 import { PAL } from '../../view/palette';
-import { trailerFootprints } from './geometry';
+import { trailerFootprints } from '@/lib/scene/geometry/trailer';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 

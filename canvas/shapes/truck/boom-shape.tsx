@@ -1,9 +1,9 @@
 'use client';
 import { Group, Line, Circle } from 'react-konva';
-import type { TruckObject } from '../../document/objects';
-import type { TruckModel } from '../../truck/truck-model';
+import type { TruckObject } from '@/lib/scene/objects';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 import { PAL } from '../../view/palette';
-import { hookSitePoint, pivotSitePoint } from './geometry';
+import { hookSitePoint, pivotSitePoint } from '@/lib/scene/geometry/truck';
 
 /** The boom in plan at a slew angle, from pivot to tip, with the hook. */
 export function BoomShape({ truck, model, slew, pxPerM }: { truck: TruckObject; model: TruckModel; slew: number; pxPerM: number }) {

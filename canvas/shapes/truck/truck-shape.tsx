@@ -1,10 +1,10 @@
 'use client';
 import { memo } from 'react';
 import { Group, Line, Circle } from 'react-konva';
-import type { TruckObject } from '../../document/objects';
-import type { TruckModel } from '../../truck/truck-model';
+import type { TruckObject } from '@/lib/scene/objects';
+import type { TruckModel } from '@/lib/scene/truck/truck-model';
 import { PAL } from '../../view/palette';
-import { truckPads, truckPartFootprints } from './geometry';
+import { truckPads, truckPartFootprints } from '@/lib/scene/geometry/truck';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 

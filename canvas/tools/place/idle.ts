@@ -1,8 +1,8 @@
 import { addObjects } from '../../commands/objects';
 import { aimBoom } from '../../commands/aim';
-import { newObject } from '../../document/factories';
-import { newId } from '../../editor/editor';
-import { truckModelFromProfile } from '../../truck/from-spec';
+import { newObject } from '@/lib/scene/factories';
+import { newId } from '@/lib/scene/ids';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 import type { ToolState } from '../tool-state';
 
 /** Waiting for the press that puts the chosen kind of object down; then back to selecting it. */

@@ -1,6 +1,6 @@
 import { addObjects } from '../../commands/objects';
 import type { Editor } from '../../editor/editor';
-import { newId } from '../../editor/editor';
+import { newId } from '@/lib/scene/ids';
 import type { ToolState } from '../tool-state';
 
 /** Press near the first corner (this many px) to close the outline. */

@@ -1,4 +1,4 @@
-import { objectBounds } from '../../shapes/geometry';
+import { objectBounds } from '@/lib/scene/geometry/footprints';
 import type { PointerInfo, ToolState } from '../tool-state';
 
 /** Shift-drag on empty ground draws a box; objects wholly inside it join the selection. */

@@ -1,7 +1,7 @@
 import type { Capture } from '../../commands/command';
 import { moveObjects } from '../../commands/objects';
 import { aimBoom } from '../../commands/aim';
-import type { SceneDocument } from '../../document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 import type { Editor } from '../../editor/editor';
 import type { PointerInfo, ToolState } from '../tool-state';
 import { gestureHandlers } from './gesture';

@@ -1,9 +1,9 @@
 import type { Capture } from '../../commands/command';
 import { setLegExtension } from '../../commands/truck';
-import type { TruckObject } from '../../document/objects';
+import type { TruckObject } from '@/lib/scene/objects';
 import type { Editor } from '../../editor/editor';
-import { DEG, rotate } from '../../geometry/vec';
-import { maxExtension } from '../../truck/truck-model';
+import { DEG, rotate } from '@/lib/scene/geometry/vec';
+import { maxExtension } from '@/lib/scene/truck/truck-model';
 import type { PointerInfo, ToolState } from '../tool-state';
 import { gestureHandlers } from './gesture';
 

@@ -1,8 +1,8 @@
 import type { Capture } from '../../commands/command';
 import { rotateObjects } from '../../commands/objects';
-import type { SceneDocument } from '../../document/schema';
+import type { SceneDocument } from '@/lib/scene/schema';
 import type { Editor } from '../../editor/editor';
-import { bearing, wrap180 } from '../../geometry/vec';
+import { bearing, wrap180 } from '@/lib/scene/geometry/vec';
 import type { PointerInfo, ToolState } from '../tool-state';
 import { gestureHandlers } from './gesture';
 

@@ -1,7 +1,7 @@
 import type { Capture } from '../../commands/command';
 import { setSlew } from '../../commands/truck';
 import { slewToward } from '../../commands/aim';
-import type { TruckObject } from '../../document/objects';
+import type { TruckObject } from '@/lib/scene/objects';
 import type { Editor } from '../../editor/editor';
 import type { PointerInfo, ToolState } from '../tool-state';
 import { gestureHandlers } from './gesture';

@@ -1,4 +1,4 @@
-import { newId } from '../../editor/editor';
+import { newId } from '@/lib/scene/ids';
 import type { ToolState } from '../tool-state';
 
 /** The measuring tape: press at one end, drag to the other. */

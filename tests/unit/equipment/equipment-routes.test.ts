@@ -9,7 +9,7 @@ import { GET as version } from '@/app/api/equipment/[id]/versions/[version]/rout
 import { POST as duplicate } from '@/app/api/equipment/[id]/duplicate/route';
 import { POST as retire } from '@/app/api/equipment/[id]/retire/route';
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
-import { truckSpecSchema } from '@/lib/equipment/truck-spec';
+import { truckSpecSchema } from '@/lib/equipment/truck-spec-rules';
 
 const ctx = (params: Record<string, string>) => ({ params: Promise.resolve(params) });
 const json = (method: string, body: unknown) => ({ method, body: JSON.stringify(body), headers: { 'content-type': 'application/json' } });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { truckSpecSchema, type TruckSpec } from '@/lib/equipment/truck-spec';
+import type { TruckSpec } from '@/lib/equipment/truck-spec';
+import { truckSpecSchema } from '@/lib/equipment/truck-spec-rules';
 import { CF2_SPEC, DEMO_TRUCKS, HR4_SPEC, HR7_SPEC } from '@/db/seed/demo-trucks';
 
 const clone = (): TruckSpec => structuredClone(HR7_SPEC);

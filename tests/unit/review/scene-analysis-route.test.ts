@@ -7,9 +7,9 @@ import { findEquipmentProfile, findProfileVersion, updateEquipmentProfile } from
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
 import { analyzeLift } from '@/lib/lift';
 import { ENGINE_VERSION } from '@/lib/lift/version';
-import { parseSceneDocument } from '@/canvas/document/parse';
-import { sceneToLiftInput } from '@/canvas/analysis/scene-to-lift';
-import { truckModelFromProfile } from '@/canvas/truck/from-spec';
+import { parseSceneDocument } from '@/lib/scene/parse';
+import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
+import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 import { signInAs } from '@/tests/setup/auth-mock';
 import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { TITLES, TRUCKS, sceneIdByTitle, truckIdByUnit } from '@/tests/setup/fixtures';

@@ -3,10 +3,10 @@ import type { Metadata } from 'next';
 import { getDb } from '@/db';
 import { getScene } from '@/db/repositories/scenes';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { parseSceneDocument } from '@/canvas/document/parse';
+import { parseSceneDocument } from '@/lib/scene/parse';
 import { SceneEditorLoader } from '@/canvas/scene-editor-loader';
-import type { TruckProfileInput } from '@/canvas/truck/from-spec';
-import { loadSceneProfiles } from '@/canvas/truck/load-profiles';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
+import { loadSceneProfiles } from '@/lib/server/load-profiles';
 
 export const metadata: Metadata = { title: 'Scene editor' };
 

@@ -3,7 +3,7 @@ import { inTransaction } from '@/db/transaction';
 import { getScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
-import { scenePin } from '@/lib/api/truck-pin';
+import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
 import { isEditable, transition } from '@/lib/review/lifecycle';
 

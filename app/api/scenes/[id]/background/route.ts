@@ -3,7 +3,7 @@ import { getScene } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError, zodIssues, describeIssues } from '@/lib/api/errors';
 import { ACCEPTED_IMAGE_TYPES, sniffImage } from '@/lib/image-sniff';
-import { storeSceneUpload } from '@/lib/background/store-scene-upload';
+import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { MAX_BACKGROUND_BYTES, MULTIPART_OVERHEAD_BYTES, backgroundUploadForm } from '@/lib/validations/uploads';
 
 export const runtime = 'nodejs';

@@ -1,7 +1,22 @@
 import type { SceneObject, TruckObject } from './objects';
-import type { PlaceKind } from '../store/types';
-import type { TruckModel } from '../truck/truck-model';
-import { maxExtension } from '../truck/truck-model';
+import type { TruckModel } from './truck/truck-model';
+import { maxExtension } from './truck/truck-model';
+
+/** What the place tool puts down next. */
+export type PlaceKind =
+  | 'truck'
+  | 'load-coil'
+  | 'load-box'
+  | 'load-vehicle'
+  | 'trailer'
+  | 'obstacle-rect'
+  | 'obstacle-circle'
+  | 'obstacle-polygon'
+  | 'pole'
+  | 'tree'
+  | 'traffic-lane'
+  | 'power-line'
+  | 'note';
 
 /** Default objects the place tool puts down: plausible roadside sizes (m, kg), all editable afterwards. */
 export function newObject(kind: PlaceKind, id: string, at: { x: number; y: number }, truck: { profileId: number; profileVersion: number; model: TruckModel | null } | null): SceneObject | null {

@@ -1,5 +1,5 @@
-import type { ObstacleObject } from '../../document/objects';
-import { circlePolygon, placePoint, placePolygon, rectPolygon, type Polygon, type Pt } from '../../geometry/vec';
+import type { ObstacleObject } from '../objects';
+import { circlePolygon, placePoint, placePolygon, rectPolygon, type Polygon, type Pt } from './vec';
 
 /** Drawn width of a power-line corridor in plan, m (for hit-testing only; the wire itself is a line). */
 export const WIRE_HIT_WIDTH = 0.6;

@@ -1,5 +1,5 @@
-import type { LoadObject, LoadShape } from '../../document/objects';
-import { circlePolygon, placePolygon, rectPolygon, type Polygon } from '../../geometry/vec';
+import type { LoadObject, LoadShape } from '../objects';
+import { circlePolygon, placePolygon, rectPolygon, type Polygon } from './vec';
 
 /** Plan outline of the load, local frame (x along the object's rotation), centred on its CG column. */
 export function loadLocalOutline(shape: LoadShape): Polygon {

@@ -1,4 +1,4 @@
-import type { Point } from '../document/primitives';
+import type { Point } from '../primitives';
 
 /** Small plane-geometry helpers for the editor (site frame, metres, degrees CCW). */
 export type Pt = Point;

@@ -1,12 +1,12 @@
-import type { SceneObject } from '../document/objects';
-import { boundsOf, distanceToPolygonEdge, pointInPolygon, type Bounds, type Polygon, type Pt } from '../geometry/vec';
+import type { SceneObject } from '../objects';
+import { boundsOf, distanceToPolygonEdge, pointInPolygon, type Bounds, type Polygon, type Pt } from './vec';
 import type { TruckModel } from '../truck/truck-model';
-import { loadFootprints } from './load/geometry';
-import { noteFootprints } from './note/geometry';
-import { obstacleFootprints } from './obstacle/geometry';
-import { tapeFootprints } from './tape/geometry';
-import { trailerFootprints } from './trailer/geometry';
-import { truckFootprints } from './truck/geometry';
+import { loadFootprints } from './load';
+import { noteFootprints } from './note';
+import { obstacleFootprints } from './obstacle';
+import { tapeFootprints } from './tape';
+import { trailerFootprints } from './trailer';
+import { truckFootprints } from './truck';
 
 /** What footprint geometry depends on besides the object: the truck profile and the screen scale. */
 export interface GeometryContext {

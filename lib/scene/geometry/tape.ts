@@ -1,5 +1,5 @@
-import type { TapeObject } from '../../document/objects';
-import type { Polygon } from '../../geometry/vec';
+import type { TapeObject } from '../objects';
+import type { Polygon } from './vec';
 
 export const tapeLength = (t: TapeObject) => Math.hypot(t.x2 - t.x, t.y2 - t.y);
 

@@ -1,5 +1,5 @@
-import type { NoteObject } from '../../document/objects';
-import { placePolygon, type Polygon } from '../../geometry/vec';
+import type { NoteObject } from '../objects';
+import { placePolygon, type Polygon } from './vec';
 
 /** A note's box in metres at the given screen scale (text is drawn at a fixed pixel size). */
 export function noteFootprints(n: NoteObject, pxPerM: number): Polygon[] {

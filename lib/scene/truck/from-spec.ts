@@ -1,4 +1,5 @@
-import { truckSpecSchema, type TruckSpec } from '@/lib/equipment/truck-spec';
+import type { TruckSpec } from '@/lib/equipment/truck-spec';
+import { truckSpecSchema } from '@/lib/equipment/truck-spec-rules';
 import { bodyPolygons, toTruckFrame } from '@/lib/equipment/to-lift-input';
 import { exampleTruckModel } from './example-truck';
 import type { TruckModel } from './truck-model';

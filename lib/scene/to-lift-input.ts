@@ -1,12 +1,12 @@
 import type { LiftInputIn } from '@/lib/lift/schema';
 import { truckToLiftParts, TruckSetupError, type TruckSetup } from '@/lib/equipment/to-lift-input';
-import type { SceneDocument } from '../document/schema';
-import type { LoadObject, ObstacleObject, TrailerObject, TruckObject } from '../document/objects';
-import type { TruckModel } from '../truck/truck-model';
-import { loadHeight, loadLocalOutline, loadMass } from '../shapes/load/geometry';
-import { obstacleFootprints, wireEnds } from '../shapes/obstacle/geometry';
-import { trailerFootprints } from '../shapes/trailer/geometry';
-import { rotate } from '../geometry/vec';
+import type { SceneDocument } from './schema';
+import type { LoadObject, ObstacleObject, TrailerObject, TruckObject } from './objects';
+import type { TruckModel } from './truck/truck-model';
+import { loadHeight, loadLocalOutline, loadMass } from './geometry/load';
+import { obstacleFootprints, wireEnds } from './geometry/obstacle';
+import { trailerFootprints } from './geometry/trailer';
+import { rotate } from './geometry/vec';
 
 /** Why there is nothing to analyse yet, in words for the results panel. */
 export type SceneProblem = { kind: 'incomplete' | 'setup'; message: string; field?: string };

@@ -1,7 +1,7 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import { findEquipmentProfile, profileVersionStatus } from '@/db/repositories/equipment';
-import { HttpError } from './errors';
+import { HttpError } from '@/lib/api/errors';
 
 /**
  * The version of a truck profile a scene is pinned to. Another organisation's profile answers the same as

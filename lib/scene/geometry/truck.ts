@@ -1,6 +1,6 @@
-import type { TruckObject } from '../../document/objects';
-import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '../../geometry/vec';
-import { padCentre, padPolygon, type TruckModel } from '../../truck/truck-model';
+import type { TruckObject } from '../objects';
+import { DEG, placePoint, placePolygon, type Polygon, type Pt } from './vec';
+import { padCentre, padPolygon, type TruckModel } from '../truck/truck-model';
 
 const pose = (t: TruckObject) => ({ x: t.x, y: t.y, rotation: t.rotation });
 

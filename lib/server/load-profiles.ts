@@ -1,8 +1,8 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import { findEquipmentProfile, findProfileVersion, listEquipmentProfiles } from '@/db/repositories/equipment';
-import type { SceneDocument } from '../document/schema';
-import type { TruckProfileInput } from './from-spec';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 
 /**
  * The truck profiles the editor offers: the organisation's trucks at their current versions, the scene's
