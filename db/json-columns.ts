@@ -1,3 +1,4 @@
+import { gunzipSync } from 'node:zlib';
 import type { KyselyPlugin, PluginTransformQueryArgs, PluginTransformResultArgs, QueryResult, RootOperationNode, UnknownRow } from 'kysely';
 
 /**
@@ -20,7 +21,10 @@ export class JsonColumnsPlugin implements KyselyPlugin {
     for (const row of args.result.rows) {
       for (const key of Object.keys(row)) {
         const v = row[key];
-        if (typeof v === 'string' && JSON_COLUMNS.has(key)) row[key] = JSON.parse(v);
+        if (!JSON_COLUMNS.has(key)) continue;
+        if (typeof v === 'string') row[key] = JSON.parse(v);
+        // A compressed snapshot (an autosave revision: db/repositories/revision-storage.ts) comes back as bytes.
+        else if (v instanceof Uint8Array) row[key] = JSON.parse(gunzipSync(v).toString('utf8'));
       }
     }
     return args.result;

@@ -50,6 +50,8 @@ export interface SceneTable {
   equipment_profile_id: number | null;
   equipment_profile_version: number | null;
   in_training_set: Generated<number>;
+  location: string | null;
+  notes: string | null;
   created_at: Timestamp;
   updated_at: Timestamp;
   deleted_at: string | null;
@@ -59,8 +61,11 @@ export interface SceneRevisionTable {
   id: Generated<number>;
   scene_id: number;
   revision: number;
-  document: JSONColumnType<Record<string, unknown>>;
+  /** JSON text for kept revisions; gzip bytes for autosaves (inflated on read by db/json-columns.ts). */
+  document: JSONColumnType<Record<string, unknown>, string | Buffer, string | Buffer>;
   author_id: number;
+  /** 1 for a submitted or approved revision: a full snapshot that thinning never removes. */
+  kept: Generated<number>;
   created_at: Timestamp;
 }
 

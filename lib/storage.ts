@@ -3,9 +3,11 @@ import fs from 'node:fs';
 import fsp from 'node:fs/promises';
 import path from 'node:path';
 import { Readable } from 'node:stream';
+import { s3Delete, s3Enabled, s3Get, s3Put, s3Stream } from './storage-s3';
 
 /**
- * The one module that touches uploaded files on local disk. Callers hold only an opaque key that this
+ * The one module that stores uploaded files: on local disk by default, or in an S3-compatible bucket when
+ * S3_BUCKET is set (lib/storage-s3.ts). Callers hold only an opaque key that this
  * module generated; a key is never a path, so no caller can reach outside the storage root.
  */
 
@@ -40,6 +42,11 @@ function fileFor(key: string): string {
   return file;
 }
 
+function checkedKey(key: string): string {
+  if (!isStorageKey(key)) throw new StorageKeyError(key);
+  return key;
+}
+
 export function newStorageKey(): string {
   return randomUUID();
 }
@@ -47,6 +54,10 @@ export function newStorageKey(): string {
 /** Writes the bytes under a new key and returns it. Written to a temp name then renamed, so a reader never sees half a file. */
 export async function putObject(bytes: Uint8Array): Promise<string> {
   const key = newStorageKey();
+  if (s3Enabled()) {
+    await s3Put(key, bytes);
+    return key;
+  }
   const file = fileFor(key);
   await fsp.mkdir(path.dirname(file), { recursive: true });
   const tmp = `${file}.${process.pid}.tmp`;
@@ -57,6 +68,7 @@ export async function putObject(bytes: Uint8Array): Promise<string> {
 
 /** The whole object, or null when there is none under this key. */
 export async function getObject(key: string): Promise<Buffer | null> {
+  if (s3Enabled()) return s3Get(checkedKey(key));
   try {
     return await fsp.readFile(fileFor(key));
   } catch (err) {
@@ -67,6 +79,7 @@ export async function getObject(key: string): Promise<Buffer | null> {
 
 /** A web stream of the object plus its size, or null when there is none. */
 export async function openObjectStream(key: string): Promise<{ stream: ReadableStream<Uint8Array>; bytes: number } | null> {
+  if (s3Enabled()) return s3Stream(checkedKey(key));
   const file = fileFor(key);
   try {
     const stat = await fsp.stat(file);
@@ -80,6 +93,7 @@ export async function openObjectStream(key: string): Promise<{ stream: ReadableS
 
 /** Removes the object; true if something was removed. */
 export async function deleteObject(key: string): Promise<boolean> {
+  if (s3Enabled()) return s3Delete(checkedKey(key));
   try {
     await fsp.unlink(fileFor(key));
     return true;

@@ -21,15 +21,3 @@ export const kpaToPsf = (kpa: number) => (kpa * 1000) / PA_PER_PSF;
 export const psfToKpa = (psf: number) => (psf * PA_PER_PSF) / 1000;
 export const m2ToFt2 = (m2: number) => m2 / (M_PER_FT * M_PER_FT);
 export const ft2ToM2 = (ft2: number) => ft2 * M_PER_FT * M_PER_FT;
-
-/** Parses 41' 6", 41'6, 41 ft 6 in, 41.5 (feet) or 498" (inches) into metres; null when unreadable. */
-export function parseFeetInches(text: string): number | null {
-  const t = text.trim().replace(/[′’]/g, "'").replace(/[″”]/g, '"');
-  const m = t.match(/^(-?\d+(?:\.\d+)?)\s*(?:'|ft)\s*(?:(\d+(?:\.\d+)?)\s*(?:"|in)?)?$/i);
-  if (m) return ftToM(Number(m[1])) + inToM(Number(m[2] ?? 0)) * Math.sign(Number(m[1]) || 1);
-  const inches = t.match(/^(-?\d+(?:\.\d+)?)\s*(?:"|in)$/i);
-  if (inches) return inToM(Number(inches[1]));
-  const bare = t.match(/^-?\d+(?:\.\d+)?$/);
-  if (bare) return ftToM(Number(t));
-  return null;
-}

@@ -5,6 +5,8 @@ import * as equipmentLibrary from './2026-12-01T23-00_equipment-library';
 import * as reviewDesk from './2026-12-02T11-00_review-desk';
 import * as planDetails from './2026-12-02T12-00_plan-details';
 import * as lessons from './2026-12-02T13-00_lessons';
+import * as sceneList from './2026-12-02T14-00_scene-list';
+import * as revisionStorage from './2026-12-02T14-30_revision-storage';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -17,4 +19,6 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02T11-00_review-desk': reviewDesk,
   '2026-12-02T12-00_plan-details': planDetails,
   '2026-12-02T13-00_lessons': lessons,
+  '2026-12-02T14-00_scene-list': sceneList,
+  '2026-12-02T14-30_revision-storage': revisionStorage,
 };

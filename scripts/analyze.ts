@@ -4,7 +4,7 @@
  * Bad input: a message naming the field on stderr, exit code 2.
  */
 import fs from 'node:fs';
-import { analyzeLift, isLiftError, liftInputSchema } from '@/lib/lift';
+import { analyzeLift, isLiftError, liftInputSchema, MIN_STEP } from '@/lib/lift';
 
 function fail(message: string): never {
   process.stderr.write(`analyze: ${message}\n`);
@@ -14,7 +14,7 @@ function fail(message: string): never {
 const args = process.argv.slice(2);
 const stepAt = args.indexOf('--step');
 const step = stepAt >= 0 ? Number(args.splice(stepAt, 2)[1]) : undefined;
-if (step !== undefined && !(step > 0 && step <= 1)) fail('--step must be a number of degrees greater than 0 and at most 1');
+if (step !== undefined && !(step >= MIN_STEP && step <= 1)) fail(`--step must be a number of degrees from ${MIN_STEP} to 1`);
 const file = args[0];
 if (!file) fail('usage: npm run analyze -- scene.json [--step 0.1]');
 

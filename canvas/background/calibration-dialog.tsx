@@ -2,12 +2,13 @@
 
 import { useEffect, useRef, useState } from 'react';
 import { mToIn, type UnitSystem } from '@/lib/units';
+import { formatNumber } from '@/lib/format/number';
 import { formatLength } from '@/lib/format/quantity';
 import { BodyPortal } from '../persistence/portal';
 import { applyCalibration, CalibrationError, parseDistance, type BackgroundPlacement, type ImagePoint } from './calibration';
 
 /** A pixel's size in units people can picture: centimetres or inches. */
-const pixelScale = (mpp: number, units: UnitSystem) => (units === 'metric' ? `${(mpp * 100).toFixed(2)} cm` : `${mToIn(mpp).toFixed(2)} in`);
+const pixelScale = (mpp: number, units: UnitSystem) => (units === 'metric' ? `${formatNumber(mpp * 100, 2)} cm` : `${formatNumber(mToIn(mpp), 2)} in`);
 
 interface Props {
   imageUrl: string;

@@ -1,4 +1,5 @@
-import { parseFeetInches, type UnitSystem } from '@/lib/units';
+import type { UnitSystem } from '@/lib/units';
+import { parseLength } from '@/lib/format/parse';
 
 export interface ImagePoint {
   /** Image pixels from the top-left corner, x right, y down. */
@@ -44,13 +45,7 @@ export function metresPerPixel(a: ImagePoint, b: ImagePoint, distanceM: number):
  * (12.65 or 12.65 m) for metric. Null when unreadable or not positive.
  */
 export function parseDistance(text: string, units: UnitSystem): number | null {
-  const t = text.trim();
-  if (units === 'metric') {
-    const m = t.match(/^(\d+(?:[.,]\d+)?)\s*m?$/i);
-    const v = m ? Number(m[1].replace(',', '.')) : NaN;
-    return v > 0 ? v : null;
-  }
-  const v = parseFeetInches(t);
+  const v = parseLength(text, units);
   return v !== null && v > 0 ? v : null;
 }
 

@@ -1,6 +1,7 @@
+import { wrap360 } from '@/lib/angles';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckObject } from '@/lib/scene/objects';
-import { DEG, bearing, wrap360, type Pt } from '@/lib/scene/geometry/vec';
+import { DEG, bearing, type Pt } from '@/lib/scene/geometry/vec';
 import type { TruckModel } from '@/lib/scene/truck/truck-model';
 
 /** Slew angle (truck frame) that points the boom at a site point. */

@@ -1,3 +1,4 @@
+import { wrap360 } from '@/lib/angles';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { SceneObject } from '@/lib/scene/objects';
 import { type Capture, type Command } from './command';
@@ -59,10 +60,7 @@ export const rotateObjects =
     };
   };
 
-const normalise = (d: number) => {
-  const r = ((d % 360) + 360) % 360;
-  return Math.round(r * 1e9) / 1e9;
-};
+const normalise = (d: number) => Math.round(wrap360(d) * 1e9) / 1e9;
 
 export const deleteObjects =
   (ids: readonly string[]): Command =>

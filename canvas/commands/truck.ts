@@ -1,3 +1,4 @@
+import { wrap360 } from '@/lib/angles';
 import type { SceneDocument, Swing } from '@/lib/scene/schema';
 import type { TruckObject } from '@/lib/scene/objects';
 import type { Capture, Command } from './command';
@@ -8,7 +9,7 @@ const mapTruck = (doc: SceneDocument, f: (t: TruckObject) => TruckObject): Scene
   objects: doc.objects.map((o) => (o.kind === 'truck' ? f(o) : o)),
 });
 
-export const wrapSlew = (d: number) => Math.round((((d % 360) + 360) % 360) * 1e6) / 1e6;
+export const wrapSlew = (d: number) => Math.round(wrap360(d) * 1e6) / 1e6;
 
 export const setSlew =
   (slew: number, capture: Capture): Command =>

@@ -1,3 +1,4 @@
+import { wrap360 } from '@/lib/angles';
 import { cloneObjects, deleteObjects, setLocked, addObjects } from '../commands/objects';
 import { setSlew } from '../commands/truck';
 import type { TruckObject } from '@/lib/scene/objects';
@@ -58,7 +59,7 @@ export function nudgeSlew(ed: Editor, by: number) {
   if (!truck) return;
   if (ed.state.readOnly) {
     const cur = ed.state.scrubSlew ?? truck.boom.slew;
-    return ed.set({ scrubSlew: (((cur + by) % 360) + 360) % 360 });
+    return ed.set({ scrubSlew: wrap360(cur + by) });
   }
   ed.run(setSlew(truck.boom.slew + by, 'commit'));
 }

@@ -1,6 +1,8 @@
 'use client';
 import { useEffect, useState } from 'react';
-import { kgToLb, lbToKg, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { kgToLb, type UnitSystem } from '@/lib/units';
+import { formatNumber } from '@/lib/format/number';
+import { parseLength, parseMass, parseNumber } from '@/lib/format/parse';
 import { formatFeetInches } from '@/lib/format/quantity';
 
 interface FieldProps<T> {
@@ -55,12 +57,6 @@ function ParsedField<T>({ label, value, onCommit, disabled, hint, testId, format
   );
 }
 
-const num = (s: string) => {
-  const t = s.trim().replace(/,/g, '');
-  if (t === '' || !/^-?\d*\.?\d+(e-?\d+)?$/i.test(t)) return null;
-  return Number(t);
-};
-
 export function LengthField(p: FieldProps<number> & { units: UnitSystem; min?: number }) {
   const metric = p.units === 'metric';
   return (
@@ -68,9 +64,9 @@ export function LengthField(p: FieldProps<number> & { units: UnitSystem; min?: n
       {...p}
       hint={metric ? 'metres, e.g. 4.25' : `feet and inches, e.g. 14' 6"`}
       suffix={metric ? 'm' : undefined}
-      format={(v) => (metric ? v.toFixed(2) : formatFeetInches(v))}
+      format={(v) => (metric ? formatNumber(v, 2) : formatFeetInches(v))}
       parse={(s) => {
-        const v = metric ? num(s.replace(/m$/i, '')) : parseFeetInches(s);
+        const v = parseLength(s, p.units);
         return v === null || (p.min !== undefined && v < p.min) ? null : v;
       }}
     />
@@ -83,10 +79,10 @@ export function MassField(p: FieldProps<number> & { units: UnitSystem }) {
     <ParsedField
       {...p}
       suffix={metric ? 'kg' : 'lb'}
-      format={(v) => Math.round(metric ? v : kgToLb(v)).toLocaleString('en-US')}
+      format={(v) => formatNumber(metric ? v : kgToLb(v))}
       parse={(s) => {
-        const v = num(s);
-        return v === null || v < 0 ? null : metric ? v : lbToKg(v);
+        const v = parseMass(s, p.units);
+        return v === null || v < 0 ? null : v;
       }}
     />
   );
@@ -96,9 +92,9 @@ export function NumberField(p: FieldProps<number> & { suffix?: string; min?: num
   return (
     <ParsedField
       {...p}
-      format={(v) => (p.digits === undefined ? String(Math.round(v * 10) / 10) : v.toFixed(p.digits))}
+      format={(v) => (p.digits === undefined ? String(Math.round(v * 10) / 10) : formatNumber(v, p.digits))}
       parse={(s) => {
-        const v = num(s.replace(/[°%]$/, ''));
+        const v = parseNumber(s.replace(/\s*[°%]$/, ''));
         return v === null || (p.min !== undefined && v < p.min) || (p.max !== undefined && v > p.max) ? null : v;
       }}
     />

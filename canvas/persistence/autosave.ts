@@ -122,7 +122,7 @@ export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
       return set({ status: 'conflict', serverRevision: theirs?.revision ?? outcome.currentRevision ?? undefined });
     }
     if (outcome.kind === 'refused') return set({ status: 'error', message: outcome.message });
-    accepted(doc, outcome.scene.revision);
+    accepted(doc, outcome.revision);
   }
 
   /** The server holds `doc` at `revision`: saved, unless the user edited on while it was on its way. */

@@ -11,7 +11,7 @@ export interface SavedScene {
 }
 
 export type PutOutcome =
-  | { kind: 'saved'; scene: SavedScene }
+  | { kind: 'saved'; revision: number; savedAt: string }
   | { kind: 'conflict'; currentRevision: number | null; message: string }
   /** The request never reached the server (no connection, DNS, reset). */
   | { kind: 'network' }
@@ -37,7 +37,11 @@ export async function putSceneDocument(fetchFn: Fetch, sceneId: number, revision
   } catch {
     return { kind: 'network' };
   }
-  if (res.ok) return { kind: 'saved', scene: (await res.json()) as SavedScene };
+  if (res.ok) {
+    // A save answers only what changed: the new revision and when it was saved.
+    const saved = (await res.json()) as { revision: number; savedAt: string };
+    return { kind: 'saved', revision: saved.revision, savedAt: saved.savedAt };
+  }
   if (res.status === 409) {
     const body = (await res.json().catch(() => ({}))) as { error?: string; currentRevision?: number };
     return { kind: 'conflict', currentRevision: body.currentRevision ?? null, message: body.error ?? 'Someone else saved this scene first' };

@@ -117,7 +117,7 @@ export function PlanView() {
 }
 
 /** Site metres (y north) inside, screen pixels (y down) outside. */
-function WorldGroup({ children }: { children: React.ReactNode }) {
+export function WorldGroup({ children }: { children: React.ReactNode }) {
   const camera = useEditorState((s) => s.camera);
   const vp = useEditorState((s) => s.viewport);
   return (

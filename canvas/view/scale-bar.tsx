@@ -1,13 +1,14 @@
 'use client';
 import { useEditorState } from '../editor-context';
 import { M_PER_FT } from '@/lib/units';
+import { formatNumber } from '@/lib/format/number';
 
 /** A round length 80–200 px long at the current scale. */
 export function niceScale(pxPerM: number, metric: boolean): { metres: number; label: string } {
   const unit = metric ? 1 : M_PER_FT;
   const steps = [1, 2, 5, 10, 20, 25, 50, 100, 200, 250, 500, 1000, 2000, 5000];
   const n = steps.find((s) => s * unit * pxPerM >= 80) ?? steps[steps.length - 1];
-  return { metres: n * unit, label: `${n.toLocaleString('en-US')} ${metric ? 'm' : 'ft'}` };
+  return { metres: n * unit, label: `${formatNumber(n)} ${metric ? 'm' : 'ft'}` };
 }
 
 /** Scale bar (bottom left) and north arrow (top right); the site frame has north up. */
@@ -24,7 +25,7 @@ export function ScaleBar() {
           <div style={{ width: w }} className="h-2 border-x-2 border-b-2 border-ink" />
           <span className="font-semibold tabular-nums">{label}</span>
         </div>
-        <div className="mt-0.5 text-[11px] text-ink-muted">Grid {metric ? `${grid.toFixed(2)} m` : `${(grid / M_PER_FT).toFixed(1)} ft`}</div>
+        <div className="mt-0.5 text-[11px] text-ink-muted">Grid {metric ? `${formatNumber(grid, 2)} m` : `${formatNumber(grid / M_PER_FT, 1)} ft`}</div>
       </div>
       <div className="pointer-events-none absolute right-3 top-3 flex flex-col items-center rounded-full bg-paper-raised/90 p-1.5 shadow-sm" aria-label="North is up">
         <svg width="28" height="34" viewBox="0 0 28 34" aria-hidden="true">

@@ -1,15 +1,22 @@
 'use client';
 
-import { useQuery } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { useState } from 'react';
-import type { Role } from '@/lib/domain';
+import { ROLES, type Role } from '@/lib/domain';
+import { Button } from '@/components/ui/button';
+import { controlClasses } from '@/components/ui/field';
+import { cx } from '@/components/ui/cx';
 import { Badge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Notice } from '@/components/ui/notice';
 import { LocalTime } from '@/components/local-time';
 import { fetchJson } from '@/lib/client/fetch-json';
+
+const ROLE_LABEL: Record<Role, string> = { operator: 'Operator', supervisor: 'Supervisor', trainer: 'Trainer', admin: 'Admin' };
+
+type Change = { id: number; role?: Role; active?: boolean };
 
 export interface UserListItem {
   id: number;
@@ -21,25 +28,81 @@ export interface UserListItem {
   created_at: string;
 }
 
-const ROLE_TONE = { operator: 'neutral', supervisor: 'teal', trainer: 'signal', admin: 'ink' } as const;
 
 const col = createColumnHelper<UserListItem>();
-const columns = [
-  col.accessor('name', { header: 'Name', cell: (c) => <span className="font-semibold">{c.getValue()}</span> }),
-  col.accessor('email', { header: 'E-mail', cell: (c) => <span className="whitespace-nowrap">{c.getValue()}</span> }),
-  col.accessor('role', { header: 'Role', cell: (c) => <Badge tone={ROLE_TONE[c.getValue()]}>{c.getValue()}</Badge> }),
-  col.accessor('active', {
-    header: 'Account',
-    cell: (c) => (c.getValue() ? <Badge tone="within" glyph="check">Active</Badge> : <Badge tone="over" glyph="cross">Deactivated</Badge>),
-    meta: { className: 'hidden lg:table-cell' },
-  }),
-  col.accessor('created_at', { header: 'Added', cell: (c) => <LocalTime iso={c.getValue()} />, meta: { className: 'hidden xl:table-cell' } }),
-];
+
+/** The columns, with the row actions bound to the mutation that changes a user. */
+function makeColumns(change: (c: Change) => void, busyId: number | null) {
+  return [
+    col.accessor('name', {
+      header: 'Name',
+      cell: (c) => (
+        <div className="min-w-[9rem]">
+          <span className="font-semibold">{c.getValue()}</span>
+          <p className="break-all text-caption text-ink-muted">{c.row.original.email}</p>
+        </div>
+      ),
+    }),
+    col.accessor('role', {
+      header: 'Role',
+      cell: (c) => (
+        <label className="flex items-center gap-2">
+          <span className="sr-only">Role of {c.row.original.name}</span>
+          <select
+            className={cx(controlClasses(false), 'min-h-touch w-[9.5rem] appearance-none bg-[length:16px] bg-[right_0.6rem_center] bg-no-repeat pr-8', CHEVRON)}
+            value={c.getValue()}
+            disabled={busyId === c.row.original.id}
+            onChange={(e) => change({ id: c.row.original.id, role: e.target.value as Role })}
+          >
+            {ROLES.map((r) => (
+              <option key={r} value={r}>
+                {ROLE_LABEL[r]}
+              </option>
+            ))}
+          </select>
+        </label>
+      ),
+    }),
+    col.accessor('active', {
+      header: 'Account',
+      cell: (c) => (
+        <div className="flex flex-wrap items-center gap-2">
+          {c.getValue() ? <Badge tone="within" glyph="check">Active</Badge> : <Badge tone="over" glyph="cross">Deactivated</Badge>}
+          <Button
+            variant={c.getValue() ? 'danger' : 'secondary'}
+            disabled={busyId === c.row.original.id}
+            onClick={() => change({ id: c.row.original.id, active: !c.getValue() })}
+            aria-label={`${c.getValue() ? 'Deactivate' : 'Reactivate'} ${c.row.original.name}`}
+          >
+            {c.getValue() ? 'Deactivate' : 'Reactivate'}
+          </Button>
+        </div>
+      ),
+    }),
+    col.accessor('created_at', { header: 'Added', cell: (c) => <LocalTime iso={c.getValue()} />, meta: { className: 'hidden xl:table-cell' } }),
+  ];
+}
+
+const CHEVRON =
+  "bg-[url(\"data:image/svg+xml,%3Csvg xmlns='http://www.w3.org/2000/svg' viewBox='0 0 16 16'%3E%3Cpath d='M3 6l5 5 5-5' fill='none' stroke='%2315202B' stroke-width='2.2' stroke-linecap='round'/%3E%3C/svg%3E\")]";
 
 /** The organisation's users; a short list, so sorting happens in the browser. */
 export function UsersTable() {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'name', desc: false }]);
   const users = useQuery({ queryKey: ['users'], queryFn: () => fetchJson<{ items: UserListItem[] }>('/api/users') });
+  const client = useQueryClient();
+  const mutation = useMutation({
+    mutationFn: ({ id, ...body }: Change) => fetchJson<UserListItem>(`/api/users/${id}`, { method: 'PATCH', body: JSON.stringify(body) }),
+    onSettled: () => client.invalidateQueries({ queryKey: ['users'] }),
+  });
+  const change = (c: Change) => {
+    if (c.active === false) {
+      const name = users.data?.items.find((u) => u.id === c.id)?.name ?? 'this user';
+      if (!window.confirm(`Deactivate ${name}? They are signed out at once and cannot sign in until reactivated.`)) return;
+    }
+    mutation.mutate(c);
+  };
+  const columns = makeColumns(change, mutation.isPending ? (mutation.variables?.id ?? null) : null);
   const table = useReactTable({
     data: users.data?.items ?? [],
     columns,
@@ -51,6 +114,7 @@ export function UsersTable() {
   return (
     <div className="flex flex-col gap-3">
       {users.isError && <Notice tone="error" title="Could not load users">{users.error.message}</Notice>}
+      {mutation.isError && <Notice tone="error" title="That change was not made">{mutation.error.message}</Notice>}
       <DataTable table={table} caption="Users in your organisation" loading={users.isPending} empty={<EmptyState title="No users yet" />} />
     </div>
   );

@@ -3,7 +3,8 @@
 import { useEffect, useId, useState } from 'react';
 import { FieldFrame, controlClasses, describedBy } from '@/components/ui/field';
 import { cx } from '@/components/ui/cx';
-import { inToM, kgToLb, lbToKg, mToIn, parseFeetInches, type UnitSystem } from '@/lib/units';
+import { inToM, kgToLb, mToIn, type UnitSystem } from '@/lib/units';
+import { parseLength, parseMass, parseNumber } from '@/lib/format/parse';
 import { formatFeetInches } from '@/lib/format/quantity';
 
 export type Quantity = 'length' | 'diameter' | 'mass' | 'angle' | 'fraction' | 'count' | 'area';
@@ -22,10 +23,10 @@ export function displayValue(q: Quantity, si: number | null | undefined, units: 
 export function parseValue(q: Quantity, text: string, units: UnitSystem): number | null {
   const t = text.trim();
   if (t === '') return null;
-  if (q === 'length' && units === 'imperial') return parseFeetInches(t) ?? NaN;
-  const n = Number(t.replace(/,/g, ''));
-  if (!Number.isFinite(n)) return NaN;
-  if (q === 'mass' && units === 'imperial') return lbToKg(n);
+  if (q === 'length') return parseLength(t, units) ?? NaN;
+  if (q === 'mass') return parseMass(t, units) ?? NaN;
+  const n = parseNumber(t);
+  if (n === null) return NaN;
   if (q === 'diameter') return units === 'metric' ? n / 1000 : inToM(n);
   return n;
 }

@@ -1,20 +1,41 @@
 import { Button } from '@/components/ui/button';
 
-export function Pager({ page, pageSize, total, onPage, busy }: { page: number; pageSize: number; total: number; onPage: (p: number) => void; busy?: boolean }) {
-  const pages = Math.max(1, Math.ceil(total / pageSize));
-  const first = (page - 1) * pageSize + 1;
-  const last = Math.min(total, page * pageSize);
+const count = new Intl.NumberFormat();
+
+/** Previous / next by keyset cursor; the total is counted up to a cap and then shown as "10,000+". */
+export function Pager({
+  shown,
+  total,
+  totalCapped,
+  onPrev,
+  onNext,
+  onFirst,
+  busy,
+}: {
+  shown: number;
+  total: number;
+  totalCapped: boolean;
+  onPrev?: () => void;
+  onNext?: () => void;
+  onFirst?: () => void;
+  busy?: boolean;
+}) {
+  const of = totalCapped ? `${count.format(total)}+` : count.format(total);
   return (
     <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3">
       <p className="text-body text-ink-soft" aria-live="polite">
-        Showing <strong className="text-ink">{first}–{last}</strong> of <strong className="text-ink">{total}</strong> {total === 1 ? 'scene' : 'scenes'} · page {page} of{' '}
-        {pages}
+        Showing <strong className="text-ink">{shown}</strong> of <strong className="text-ink">{of}</strong> {total === 1 && !totalCapped ? 'scene' : 'scenes'}
       </p>
-      <div className="flex gap-2">
-        <Button variant="secondary" onClick={() => onPage(page - 1)} disabled={page <= 1 || busy}>
+      <div className="flex flex-wrap gap-2">
+        {onFirst && (
+          <Button variant="secondary" onClick={onFirst} disabled={busy}>
+            First page
+          </Button>
+        )}
+        <Button variant="secondary" onClick={onPrev} disabled={!onPrev || busy}>
           ← Previous
         </Button>
-        <Button variant="secondary" onClick={() => onPage(page + 1)} disabled={page >= pages || busy}>
+        <Button variant="secondary" onClick={onNext} disabled={!onNext || busy}>
           Next →
         </Button>
       </div>

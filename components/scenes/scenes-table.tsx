@@ -3,8 +3,9 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { createColumnHelper, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import Link from 'next/link';
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
-import type { SceneSummary } from '@/db/repositories/scenes';
+import type { ScenePage, SceneSummary } from '@/db/repositories/scene-list';
 import { SCENE_STATUSES, type SceneStatus } from '@/lib/domain';
 import { StatusPill, statusLabel } from '@/components/ui/badge';
 import { Button, ButtonLink } from '@/components/ui/button';
@@ -16,13 +17,6 @@ import { SelectField } from '@/components/ui/select';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { formatWhen } from './format';
 import { Pager } from './pager';
-
-interface ScenePage {
-  items: SceneSummary[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
 
 const col = createColumnHelper<SceneSummary>();
 
@@ -39,6 +33,7 @@ const columns = [
         <p className="mt-0.5 text-caption text-ink-muted lg:hidden">
           {c.row.original.ownerName} · rev. {c.row.original.revision}
         </p>
+        {c.row.original.location && <p className="mt-0.5 text-caption text-ink-muted">{c.row.original.location}</p>}
       </div>
     ),
   }),
@@ -73,25 +68,59 @@ function useDebounced<T>(value: T, ms: number) {
   return v;
 }
 
-export function ScenesTable({ canCreate }: { canCreate: boolean }) {
-  const [titleInput, setTitleInput] = useState('');
-  const title = useDebounced(titleInput.trim(), 250);
-  const [status, setStatus] = useState<SceneStatus | ''>('');
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
-  const [page, setPage] = useState(1);
+const SORTS = ['updatedAt', 'title', 'status', 'ownerName', 'revision'];
 
-  useEffect(() => setPage(1), [title, status, sorting]);
+/**
+ * The list's state lives in the URL (search, status, sort and the keyset cursor), so a link to page 3 of a
+ * filtered list opens that same page for a colleague.
+ */
+export function ScenesTable({ canCreate }: { canCreate: boolean }) {
+  const router = useRouter();
+  const pathname = usePathname();
+  const search = useSearchParams();
+  const [qInput, setQInput] = useState(search.get('q') ?? '');
+  const q = useDebounced(qInput.trim(), 250);
+  const status = (search.get('status') ?? '') as SceneStatus | '';
+  const sortId = SORTS.includes(search.get('sort') ?? '') ? search.get('sort')! : 'updatedAt';
+  const sorting: SortingState = [{ id: sortId, desc: search.get('dir') !== 'asc' }];
+  const after = search.get('after');
+  const before = search.get('before');
+
+  /** A new URL from the current one; changing a filter or the order goes back to the first page. */
+  const navigate = (changes: Record<string, string | null>, keepCursor = false) => {
+    const p = new URLSearchParams(search.toString());
+    if (!keepCursor) {
+      p.delete('after');
+      p.delete('before');
+    }
+    for (const [k, v] of Object.entries(changes)) {
+      if (v === null || v === '') p.delete(k);
+      else p.set(k, v);
+    }
+    const qs = p.toString();
+    router.replace(qs ? `${pathname}?${qs}` : pathname, { scroll: false });
+  };
+
+  useEffect(() => {
+    if ((search.get('q') ?? '') !== q) navigate({ q });
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only the debounced text drives this
+  }, [q]);
+
+  const setStatus = (s: SceneStatus | '') => navigate({ status: s });
+  const setSorting = (updater: SortingState | ((old: SortingState) => SortingState)) => {
+    const next = typeof updater === 'function' ? updater(sorting) : updater;
+    navigate({ sort: next[0]?.id ?? null, dir: next[0] ? (next[0].desc ? 'desc' : 'asc') : null });
+  };
 
   const params = useMemo(() => {
-    const p = new URLSearchParams({ page: String(page), pageSize: String(PAGE_SIZE) });
-    if (title) p.set('title', title);
+    const p = new URLSearchParams({ pageSize: String(PAGE_SIZE), sort: sortId, dir: sorting[0].desc ? 'desc' : 'asc' });
+    const sq = search.get('q');
+    if (sq) p.set('q', sq);
     if (status) p.set('status', status);
-    if (sorting[0]) {
-      p.set('sort', sorting[0].id);
-      p.set('dir', sorting[0].desc ? 'desc' : 'asc');
-    }
+    if (after) p.set('after', after);
+    else if (before) p.set('before', before);
     return p.toString();
-  }, [page, title, status, sorting]);
+  }, [search, sortId, sorting, status, after, before]);
 
   const query = useQuery({
     queryKey: ['scenes', params],
@@ -113,7 +142,7 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
     rowCount: data?.total ?? 0,
   });
 
-  const filtered = Boolean(title || status);
+  const filtered = Boolean(search.get('q') || status);
   const empty = filtered ? (
     <EmptyState
       title="No scenes match these filters"
@@ -121,15 +150,15 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
         <Button
           variant="secondary"
           onClick={() => {
-            setTitleInput('');
-            setStatus('');
+            setQInput('');
+            navigate({ q: null, status: null });
           }}
         >
           Clear filters
         </Button>
       }
     >
-      Clear the title search or pick another status.
+      Clear the search or pick another status.
     </EmptyState>
   ) : (
     <EmptyState title="No scenes yet" action={canCreate ? <ButtonLink href="/scenes/new" variant="signal">New scene</ButtonLink> : undefined}>
@@ -140,7 +169,7 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
   return (
     <div className="flex flex-col gap-4">
       <div className="grid gap-4 sm:grid-cols-[1fr_15rem]" role="search" aria-label="Filter scenes">
-        <TextField label="Search titles" type="search" placeholder="e.g. coil, embankment" value={titleInput} onChange={(e) => setTitleInput(e.target.value)} />
+        <TextField label="Search title, location and notes" type="search" placeholder="e.g. coil, Route 9" value={qInput} onChange={(e) => setQInput(e.target.value)} />
         <SelectField label="Status" value={status} onChange={(e) => setStatus(e.target.value as SceneStatus | '')}>
           <option value="">Any status</option>
           {SCENE_STATUSES.map((s) => (
@@ -152,7 +181,17 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
       </div>
       {query.isError && <Notice tone="error" title="Could not load scenes">{query.error.message}</Notice>}
       <DataTable table={table} caption="Scenes" empty={empty} loading={query.isPending} />
-      {data && data.total > 0 && <Pager page={data.page} pageSize={data.pageSize} total={data.total} onPage={setPage} busy={query.isFetching} />}
+      {data && data.total > 0 && (
+        <Pager
+          shown={data.items.length}
+          total={data.total}
+          totalCapped={data.totalCapped}
+          onPrev={data.prevCursor ? () => navigate({ before: data.prevCursor, after: null }, true) : undefined}
+          onNext={data.nextCursor ? () => navigate({ after: data.nextCursor, before: null }, true) : undefined}
+          onFirst={after || before ? () => navigate({}) : undefined}
+          busy={query.isFetching}
+        />
+      )}
     </div>
   );
 }

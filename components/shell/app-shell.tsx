@@ -19,6 +19,7 @@ export function navItemsFor(user: CurrentUser): NavItem[] {
     { href: '/scenes', label: 'Scenes', icon: 'scenes' },
     { href: '/equipment', label: 'Equipment', icon: 'equipment' },
     { href: '/rigging', label: 'Rigging', icon: 'rigging' },
+    { href: '/lessons', label: 'Lessons', icon: 'scenes' },
   ];
   if (user.role === 'admin') items.push({ href: '/admin/users', label: 'Users', icon: 'users' });
   items.push({ href: '/settings', label: 'Settings', icon: 'settings' });

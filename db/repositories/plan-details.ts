@@ -53,7 +53,7 @@ export async function savePlanDetails(db: Db, user: CurrentUser, sceneId: number
       .values({
         organisation_id: user.organisationId,
         scene_id: sceneId,
-        revision: outcome.scene.revision,
+        revision: outcome.revision,
         details: JSON.stringify(details),
         author_id: user.id,
         created_at: new Date().toISOString(),

@@ -1,29 +1,23 @@
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import type { Database, SceneRow } from '../schema';
-import type { SceneStatus } from '@/lib/domain';
-import type { CurrentUser } from '@/lib/domain';
+import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { canReadAllScenes } from '@/lib/auth/roles';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
+import { compressedSnapshot } from './revision-storage';
+
+import type { SceneSummary } from './scene-list';
+
+export type { SceneSummary } from './scene-list';
 
 type Db = Kysely<Database>;
-
-export interface SceneSummary {
-  id: number;
-  title: string;
-  status: SceneStatus;
-  revision: number;
-  ownerId: number;
-  ownerName: string;
-  updatedAt: string;
-  inTrainingSet: boolean;
-}
 
 export interface Scene extends SceneSummary {
   organisationId: number;
   document: Record<string, unknown>;
   equipmentProfileId: number | null;
   equipmentProfileVersion: number | null;
+  notes: string | null;
   createdAt: string;
 }
 
@@ -42,6 +36,8 @@ function toScene(row: SceneWithOwner): Scene {
     equipmentProfileId: row.equipment_profile_id,
     equipmentProfileVersion: row.equipment_profile_version,
     inTrainingSet: row.in_training_set === 1,
+    location: row.location,
+    notes: row.notes,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
   };
@@ -60,48 +56,6 @@ function visibleTo(db: Db, user: CurrentUser) {
   return q;
 }
 
-export interface ListScenesOptions {
-  page: number;
-  pageSize: number;
-  title?: string;
-  status?: SceneStatus;
-  sort?: 'updatedAt' | 'title' | 'status' | 'ownerName' | 'revision';
-  dir?: 'asc' | 'desc';
-}
-
-const SORT_COLUMNS = {
-  updatedAt: 'scenes.updated_at',
-  title: 'scenes.title',
-  status: 'scenes.status',
-  ownerName: 'users.name',
-  revision: 'scenes.revision',
-} as const;
-
-export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOptions) {
-  let q = visibleTo(db, user);
-  if (opts.title) q = q.where(sql<boolean>`instr(lower(scenes.title), ${opts.title.toLowerCase()}) > 0`);
-  if (opts.status) q = q.where('scenes.status', '=', opts.status);
-  const total = await q.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
-  const rows = await q
-    .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'users.name as owner_name'])
-    .orderBy(SORT_COLUMNS[opts.sort ?? 'updatedAt'], opts.dir ?? 'desc')
-    .orderBy('scenes.id', opts.dir ?? 'desc')
-    .limit(opts.pageSize)
-    .offset((opts.page - 1) * opts.pageSize)
-    .execute();
-  const items: SceneSummary[] = rows.map((r) => ({
-    id: r.id,
-    title: r.title,
-    status: r.status,
-    revision: r.revision,
-    ownerId: r.owner_id,
-    ownerName: r.owner_name,
-    updatedAt: r.updated_at,
-    inTrainingSet: r.in_training_set === 1,
-  }));
-  return { items, total: Number(total.n), page: opts.page, pageSize: opts.pageSize };
-}
-
 export async function getScene(db: Db, user: CurrentUser, id: number): Promise<Scene | undefined> {
   const row = await visibleTo(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
   return row ? toScene(row as SceneWithOwner) : undefined;
@@ -109,6 +63,8 @@ export async function getScene(db: Db, user: CurrentUser, id: number): Promise<S
 
 export interface NewSceneInput {
   title: string;
+  location?: string | null;
+  notes?: string | null;
   document: Record<string, unknown>;
   equipmentProfileId?: number | null;
   equipmentProfileVersion?: number | null;
@@ -125,6 +81,8 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
         organisation_id: user.organisationId,
         owner_id: user.id,
         title: input.title,
+        location: input.location ?? null,
+        notes: input.notes ?? null,
         document: doc,
         revision: 1,
         equipment_profile_id: input.equipmentProfileId ?? null,
@@ -143,6 +101,8 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
 export interface SceneChanges {
   revision: number;
   title?: string;
+  location?: string | null;
+  notes?: string | null;
   document?: Record<string, unknown>;
   status?: SceneStatus;
   equipmentProfileId?: number | null;
@@ -150,22 +110,36 @@ export interface SceneChanges {
 }
 
 /** `missing`: no such scene in the user's organisation (or it was deleted); nothing about it is revealed. */
-export type UpdateOutcome = { kind: 'ok'; scene: Scene } | { kind: 'stale'; current: number } | { kind: 'missing' };
+export type UpdateOutcome = { kind: 'ok'; revision: number; savedAt: string } | { kind: 'stale'; current: number } | { kind: 'missing' };
+
+/** What a save needs to know before it writes: who owns the scene, its status and pin. No document. */
+export async function sceneForSave(db: Db, user: CurrentUser, id: number) {
+  return db
+    .selectFrom('scenes')
+    .select(['owner_id as ownerId', 'status', 'revision', 'equipment_profile_id as equipmentProfileId'])
+    .where('id', '=', id)
+    .where('organisation_id', '=', user.organisationId)
+    .where('deleted_at', 'is', null)
+    .executeTakeFirst();
+}
 
 /**
  * Saves a new revision if `changes.revision` is the current one. The revision check and the write happen
- * in the same statement, so two saves based on the same revision cannot both win.
+ * in the same statement, so two saves based on the same revision cannot both win. The document is written
+ * once as JSON on the scene row; the revision row holds a compressed snapshot (db/repositories/revision-storage.ts).
  */
 export async function updateScene(db: Db, user: CurrentUser, id: number, changes: SceneChanges): Promise<UpdateOutcome> {
   return inTransaction(db, async (trx): Promise<UpdateOutcome> => {
     const now = new Date().toISOString();
     const next = changes.revision + 1;
-    const updated = await trx
+    const base = trx
       .updateTable('scenes')
       .set({
         revision: next,
         updated_at: now,
         ...(changes.title !== undefined && { title: changes.title }),
+        ...(changes.location !== undefined && { location: changes.location }),
+        ...(changes.notes !== undefined && { notes: changes.notes }),
         ...(changes.status !== undefined && { status: changes.status }),
         ...(changes.document !== undefined && { document: JSON.stringify(changes.document) }),
         ...(changes.equipmentProfileId !== undefined && { equipment_profile_id: changes.equipmentProfileId }),
@@ -174,9 +148,9 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       .where('id', '=', id)
       .where('organisation_id', '=', user.organisationId)
       .where('deleted_at', 'is', null)
-      .where('revision', '=', changes.revision)
-      .returning(['document'])
-      .executeTakeFirst();
+      .where('revision', '=', changes.revision);
+    // Only a save without a document (a rename) reads the stored one back, to snapshot it.
+    const updated = changes.document !== undefined ? await base.returning('id').executeTakeFirst() : await base.returning(['id', 'document']).executeTakeFirst();
     if (!updated) {
       const cur = await trx
         .selectFrom('scenes')
@@ -187,9 +161,10 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
         .executeTakeFirst();
       return cur ? { kind: 'stale', current: cur.revision } : { kind: 'missing' };
     }
+    const snapshot = changes.document ?? (updated as unknown as { document: Record<string, unknown> }).document;
     await trx
       .insertInto('scene_revisions')
-      .values({ scene_id: id, revision: next, document: JSON.stringify(updated.document), author_id: user.id, created_at: now })
+      .values({ scene_id: id, revision: next, document: compressedSnapshot(snapshot), author_id: user.id, created_at: now })
       .execute();
     await recordAudit(trx, {
       organisationId: user.organisationId,
@@ -198,7 +173,7 @@ export async function updateScene(db: Db, user: CurrentUser, id: number, changes
       action: 'scene.update',
       detail: { revision: next, fields: changedFields(changes) },
     });
-    return { kind: 'ok', scene: (await getScene(trx, user, id))! };
+    return { kind: 'ok', revision: next, savedAt: now };
   });
 }
 

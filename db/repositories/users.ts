@@ -43,3 +43,26 @@ export function setUserRole(db: Db, organisationId: number, id: number, role: Ro
 export function setUserUnits(db: Db, id: number, units: 'imperial' | 'metric') {
   return db.updateTable('users').set({ units }).where('id', '=', id).executeTakeFirst();
 }
+
+/** Active admins of an organisation other than `exceptId`: an organisation must always keep one. */
+export async function otherActiveAdmins(db: Db, organisationId: number, exceptId: number): Promise<number> {
+  const row = await db
+    .selectFrom('users')
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .where('organisation_id', '=', organisationId)
+    .where('role', '=', 'admin')
+    .where('active', '=', 1)
+    .where('id', '!=', exceptId)
+    .executeTakeFirstOrThrow();
+  return Number(row.n);
+}
+
+export function updateUser(db: Db, organisationId: number, id: number, changes: { role?: Role; active?: boolean }) {
+  return db
+    .updateTable('users')
+    .set({ ...(changes.role !== undefined && { role: changes.role }), ...(changes.active !== undefined && { active: changes.active ? 1 : 0 }) })
+    .where('id', '=', id)
+    .where('organisation_id', '=', organisationId)
+    .returning(['id', 'organisation_id', 'email', 'name', 'role', 'units', 'active', 'created_at'])
+    .executeTakeFirst();
+}

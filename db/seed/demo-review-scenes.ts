@@ -19,7 +19,7 @@ export const REVIEW_TITLES = {
   beyond: 'Loaded livestock trailer on its side, Pell Lane',
 } as const;
 
-export const REVIEW_SCENES: { org: 'harrow-ridge'; owner: string; title: string; status: SceneStatus; truck: string; inTrainingSet?: boolean; document: Record<string, unknown> }[] = [
+export const REVIEW_SCENES: { org: 'harrow-ridge'; owner: string; title: string; status: SceneStatus; truck: string; inTrainingSet?: boolean; history?: Record<string, unknown>[]; document: Record<string, unknown> }[] = [
   {
     org: 'harrow-ridge', owner: 'operator2@harrow.example', title: REVIEW_TITLES.awaiting, status: 'submitted', truck: 'HR-7',
     document: sceneDocumentSchema.parse(withLoad(coilTransfer, { shape: { kind: 'coil', eye: 'horizontal', outerDiameter: 1.4, innerDiameter: 0.6, width: 1.2 }, label: 'Pipe bundle (estimated)' })),

@@ -152,6 +152,23 @@ const embankment: SceneDocumentIn = {
   limits: { percentOfTipping: 85, clearance: 0.3, percentOfRated: 100 },
 };
 
+/**
+ * How the reefer plan got to its approved form, for the replay's timeline: revision 1 had the right-hand
+ * outriggers only part out (0.6 m) and a purple sling pair at 45°; revision 2 moved them out to 1.1 m;
+ * revision 3 (the approved plan) re-rigged the load on the red sling pair at 55°.
+ */
+function reeferHistory(): Record<string, unknown>[] {
+  const withLegs = (doc: SceneDocumentIn, right: number): SceneDocumentIn => ({
+    ...doc,
+    objects: doc.objects.map((o) => (o.kind === 'truck' ? { ...o, legs: { ...o.legs, FR: { ...o.legs!.FR, extension: right }, RR: { ...o.legs!.RR, extension: right } } } : o)),
+  });
+  const rigged = (doc: SceneDocumentIn): SceneDocumentIn => ({
+    ...doc,
+    objects: doc.objects.map((o) => (o.kind === 'load' ? { ...o, rigging: [roundSling('HR-RS-01', 'purple', 2, 45)] } : o)),
+  });
+  return [sceneDocumentSchema.parse(rigged(withLegs(reefer, 0.6))), sceneDocumentSchema.parse(rigged(reefer))];
+}
+
 /** Puts the seeded profile's id and version on the document's truck. */
 export function withTruckProfile(document: Record<string, unknown>, truck: { id: number; version: number } | undefined): Record<string, unknown> {
   if (!truck || !Array.isArray(document.objects)) return document;
@@ -165,9 +182,11 @@ export const DEMO_SCENES: {
   status: SceneStatus;
   truck?: string;
   inTrainingSet?: boolean;
+  /** Earlier saves, oldest first; `document` is the latest revision. */
+  history?: Record<string, unknown>[];
   document: Record<string, unknown>;
 }[] = [
   { org: 'harrow-ridge', owner: 'operator@harrow.example', title: 'Coil transfer, Route 9 weigh station', status: 'draft', truck: 'HR-7', document: sceneDocumentSchema.parse(coilTransfer) },
-  { org: 'harrow-ridge', owner: 'operator@harrow.example', title: 'Overturned reefer trailer, Mill Creek on-ramp', status: 'approved', truck: 'HR-7', inTrainingSet: true, document: sceneDocumentSchema.parse(reefer) },
+  { org: 'harrow-ridge', owner: 'operator@harrow.example', title: 'Overturned reefer trailer, Mill Creek on-ramp', status: 'approved', truck: 'HR-7', inTrainingSet: true, history: reeferHistory(), document: sceneDocumentSchema.parse(reefer) },
   { org: 'cobalt-flats', owner: 'operator@cobalt.example', title: 'Box truck up the embankment, Quarry Road', status: 'draft', truck: 'CF-2', document: sceneDocumentSchema.parse(embankment) },
 ];

@@ -8,6 +8,7 @@ import { createEquipmentProfile } from '../repositories/equipment';
 import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
 import { REVIEW_SCENES } from './demo-review-scenes';
 import { seedDemoReview } from './demo-review';
+import { seedDemoLessons } from './demo-lessons';
 import { DEMO_PLAN_DETAILS } from './demo-plan-details';
 import { planDetailsSchema } from '@/lib/plan-details/schema';
 
@@ -38,10 +39,13 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
       truckIds.set(t.unitNumber, { id: p.id, version: p.version });
     }
     await seedDemoRigging(trx, orgIds, userIds);
+    const sceneIds = new Map<string, number>();
     for (const s of [...DEMO_SCENES, ...REVIEW_SCENES]) {
       const owner = userIds.get(s.owner)!;
       const truck = s.truck ? truckIds.get(s.truck) : undefined;
       const doc = JSON.stringify(withTruckProfile(s.document, truck));
+      const history = (s.history ?? []).map((d) => JSON.stringify(withTruckProfile(d, truck)));
+      const revision = history.length + 1;
       const row = await trx
         .insertInto('scenes')
         .values({
@@ -50,7 +54,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
           title: s.title,
           status: s.status,
           document: doc,
-          revision: 1,
+          revision,
           equipment_profile_id: truck?.id ?? null,
           equipment_profile_version: truck?.version ?? null,
           in_training_set: s.inTrainingSet ? 1 : 0,
@@ -59,14 +63,20 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
         })
         .returning('id')
         .executeTakeFirstOrThrow();
-      await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: owner, created_at: now }).execute();
+      sceneIds.set(s.title, row.id);
+      // Earlier saves a day apart, so the replay's timeline has a story to tell.
+      const at = (k: number) => new Date(Date.parse(now) - (revision - k) * 86_400_000).toISOString();
+      for (const [i, d] of [...history, doc].entries()) {
+        await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: i + 1, document: d, author_id: owner, created_at: at(i + 1) }).execute();
+      }
       const details = DEMO_PLAN_DETAILS[s.title];
       if (details) {
         const json = JSON.stringify(planDetailsSchema.parse(details));
-        await trx.insertInto('scene_plan_details').values({ organisation_id: orgIds.get(s.org)!, scene_id: row.id, revision: 1, details: json, author_id: owner, created_at: now }).execute();
+        await trx.insertInto('scene_plan_details').values({ organisation_id: orgIds.get(s.org)!, scene_id: row.id, revision, details: json, author_id: owner, created_at: now }).execute();
       }
     }
     await seedDemoReview(trx);
+    await seedDemoLessons(trx, orgIds, userIds, sceneIds);
   });
   return true;
 }

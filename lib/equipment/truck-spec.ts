@@ -56,6 +56,8 @@ export const upperSchema = z.object({
   counterweight: z.object({ mass: mass('Counterweight mass'), cg: point3('Counterweight CG') }),
   /** null: slews all the way round. Otherwise the allowed arc from `min` to `max`, counter-clockwise. */
   slewLimits: z.object({ min: angle('Slew limit (from)', -360, 360), max: angle('Slew limit (to)', -360, 360) }).nullable(),
+  /** Slew speed at full lever, degrees per second; the replay plays 1× at this rate (optional). */
+  slewSpeed: num('Slew speed').refine((v) => v > 0 && v <= 30, 'Slew speed must be more than 0 and at most 30 °/s').optional(),
 });
 
 export const boomStageSchema = z.object({

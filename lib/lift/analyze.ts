@@ -14,9 +14,13 @@ import type { LiftInput, LiftInputIn } from './schema';
 import { insideDistance } from './support-polygon';
 import { sweepSamples, sweepTipping } from './sweep';
 import { assertStandsUnloaded } from './tipping';
+import { LiftError } from './errors';
+
+/** Finest sweep step, degrees. */
+export const MIN_STEP = 0.01;
 
 export interface AnalyzeOptions {
-  /** Sampling step of the swing sweeps, degrees (≤ 1; the sweep array uses it too). */
+  /** Sampling step of the swing sweeps, degrees, from MIN_STEP to 1 (the sweep array uses it too). */
   step?: number;
 }
 
@@ -61,7 +65,11 @@ export function analyzeLift(raw: LiftInputIn | LiftInput, options: AnalyzeOption
 
 /** analyzeLift on a lift already prepared (the editor prepares once per edit and keeps it). */
 export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): LiftResult {
-  const step = Math.min(1, options.step ?? 1);
+  const step = options.step ?? 1;
+  // A finer step only adds samples; under 0.01° a full turn would need 36 000+ of them per sweep.
+  if (typeof step !== 'number' || !(step >= MIN_STEP && step <= 1)) {
+    throw new LiftError('invalid-input', `The sweep step must be from ${MIN_STEP}° to 1°; ${String(step)} is not.`, 'step');
+  }
   assertStandsUnloaded(p);
   const { worst, sweep } = worstCaseOf(p, step);
 

@@ -8,6 +8,7 @@ export * from './prepare';
 export * from './tipping';
 export * from './sweep';
 export * from './reactions';
+export * from './contact';
 export * from './bearing';
 export * from './soil';
 export * from './footprint';

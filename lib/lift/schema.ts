@@ -6,10 +6,46 @@ import { z } from 'zod';
  * missing mass with its own typed error; shapes and types are checked here.
  * Units: metres, kilograms, degrees, kPa. Truck frame unless stated (see docs/engine.md).
  */
-const num = z.number();
-const pos = z.number().positive();
-const point2 = z.object({ x: num, y: num });
-const point3 = z.object({ x: num, y: num, z: num });
+/**
+ * Physical ranges of every number (issue 9). A value outside its range (or not finite: zod refuses NaN and
+ * ±Infinity) is a typed error naming the field: 400 at the route, LiftError in the library. The ranges are
+ * far beyond any truck, load or site (common practice, no published source), and small enough that no
+ * product of them overflows a double, so no result can come out NaN or infinite.
+ */
+export const RANGE = {
+  /** kg, any one mass: 10 000 t. */
+  mass: 1e7,
+  /** m from the slew axis: the truck's own supports, masses, boom pivot. */
+  truck: 100,
+  /** m: positions of obstacles, power lines, body outlines and the truck on its site (100 km). */
+  site: 1e5,
+  /** m: heights of tops, wires and the pivot. */
+  height: 1000,
+  /** m: the boom, the load's size. */
+  length: 200,
+  /** m²: a pad or a mat, from 1 cm². */
+  areaMin: 1e-4,
+  areaMax: 100,
+  /** degrees: swing ends and headings, ±10 turns. */
+  angle: 3600,
+  /** kPa: allowable ground pressure. */
+  pressureMin: 1,
+  pressureMax: 1e5,
+} as const;
+
+const within = (min: number, max: number, unit: string) =>
+  z.number().min(min, `must be from ${min} to ${max} ${unit}`).max(max, `must be from ${min} to ${max} ${unit}`);
+/** Ratings and other positive quantities without a tighter range of their own (kg or m). */
+const pos = z.number().positive().max(RANGE.mass);
+const massKg = within(0, RANGE.mass, 'kg');
+const truckCoord = within(-RANGE.truck, RANGE.truck, 'm');
+const siteCoord = within(-RANGE.site, RANGE.site, 'm');
+const heightM = within(-RANGE.truck, RANGE.height, 'm');
+const area = within(RANGE.areaMin, RANGE.areaMax, 'm²');
+const angleDeg = within(-RANGE.angle, RANGE.angle, '°');
+const point2 = z.object({ x: siteCoord, y: siteCoord });
+const point3 = z.object({ x: siteCoord, y: siteCoord, z: heightM });
+const truckPoint3 = z.object({ x: truckCoord, y: truckCoord, z: heightM });
 const id = z.string().min(1).max(64);
 /** What a person calls the object (a label typed in the editor, "left rear"); results show it instead of the id. */
 const name = z.string().max(120).optional();
@@ -17,49 +53,52 @@ const name = z.string().max(120).optional();
 export const supportSchema = z.object({
   id,
   name,
-  x: num,
-  y: num,
+  x: truckCoord,
+  y: truckCoord,
   /** Pad (or tyre contact) area on the ground, m². */
-  area: pos,
+  area,
   /** Area of the cribbing or mat under the pad, m²; spreads the reaction. */
-  cribbingArea: pos.optional(),
+  cribbingArea: area.optional(),
   /** Own mass of the cribbing or mat, kg; added to the ground load under it. */
-  cribbingMass: num.optional(),
+  cribbingMass: massKg.optional(),
 });
 
 export const massSchema = z.object({
   id,
-  mass: num,
-  x: num,
-  y: num,
-  z: num,
+  mass: massKg,
+  x: truckCoord,
+  y: truckCoord,
+  z: heightM,
   /** True for parts that turn with the slew (turret, counterweight); given at slew 0. */
   rotates: z.boolean().default(false),
 });
 
 export const boomSchema = z.object({
-  pivot: point3,
-  length: num,
+  pivot: truckPoint3,
+  /** Pivot to tip, m (0 is refused as zero-length-boom). */
+  length: within(0, RANGE.length, 'm'),
   /** Degrees above horizontal. */
   elevation: z.number().min(-90).max(90),
-  mass: num,
+  mass: massKg,
+  /** Width of the boom, m: the diameter of the capsule checked against obstacles and truck parts (BOOM_WIDTH when not given). */
+  width: within(0.05, 10, 'm').optional(),
   /** Where the boom's own CG lies, as a fraction of the way from pivot to tip. */
   cgFraction: z.number().min(0).max(1),
 });
 
 export const footprintSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('rect'), length: pos, width: pos }),
-  z.object({ kind: z.literal('circle'), diameter: pos }),
+  z.object({ kind: z.literal('rect'), length: within(0.001, RANGE.length, 'm'), width: within(0.001, RANGE.length, 'm') }),
+  z.object({ kind: z.literal('circle'), diameter: within(0.001, RANGE.length, 'm') }),
   /** Points relative to the hook, x along the boom at the current slew. */
-  z.object({ kind: z.literal('polygon'), points: z.array(point2).min(3).max(256) }),
+  z.object({ kind: z.literal('polygon'), points: z.array(z.object({ x: within(-RANGE.length, RANGE.length, 'm'), y: within(-RANGE.length, RANGE.length, 'm') })).min(3).max(256) }),
 ]);
 
 export const loadSchema = z.object({
-  mass: num,
+  mass: massKg,
   footprint: footprintSchema,
-  height: z.number().nonnegative(),
+  height: within(0, RANGE.length, 'm'),
   /** Drop from the boom tip to the bottom of the load, m. */
-  hang: z.number().nonnegative(),
+  hang: within(0, RANGE.height, 'm'),
 });
 
 /**
@@ -68,8 +107,8 @@ export const loadSchema = z.object({
  * or more than a turn is a full turn; only from ≈ to is a single slew.
  */
 export const swingSchema = z.object({
-  from: num,
-  to: num,
+  from: angleDeg,
+  to: angleDeg,
   direction: z.enum(['ccw', 'cw']),
 });
 
@@ -78,7 +117,7 @@ export const prismSchema = z.object({
   name,
   polygon: z.array(point2).min(3).max(256),
   /** Height of its top above the ground, m. */
-  top: num,
+  top: within(0, RANGE.height, 'm'),
 });
 
 export const powerLineSchema = z.object({
@@ -87,11 +126,11 @@ export const powerLineSchema = z.object({
   a: point3,
   b: point3,
   /** Nominal phase-to-phase voltage; null when unknown. */
-  kV: z.number().positive().nullable(),
+  kV: z.number().positive().max(2000).nullable(),
   /** For an unknown voltage: the utility has confirmed it is at most 350 kV (20 ft rule). */
   atMost350kV: z.boolean().optional(),
   /** Clearance set by the utility or a registered engineer, m (needed above 1 000 kV; overrides Table A). */
-  required: pos.optional(),
+  required: within(0.01, RANGE.height, 'm').optional(),
 });
 
 const hitch = z.enum(['vertical', 'choker', 'basket']);
@@ -139,18 +178,18 @@ export const riggingSchema = z.object({
 
 export const loadChartSchema = z.object({
   /** Load radii from the slew axis, m, ascending. */
-  radii: z.array(pos).min(1).max(64),
+  radii: z.array(within(0.001, 1000, 'm')).min(1).max(64),
   /** Boom lengths, m, ascending. */
-  boomLengths: z.array(pos).min(1).max(32),
+  boomLengths: z.array(within(0.001, 1000, 'm')).min(1).max(32),
   /** rated[b][r]: rated capacity at boomLengths[b] and radii[r], kg; null where the chart gives none. */
-  rated: z.array(z.array(z.number().positive().nullable())),
+  rated: z.array(z.array(within(0.001, RANGE.mass, 'kg').nullable())),
 });
 
 export const siteSchema = z.object({
   /** The truck's slew axis in the site frame, m, and the heading of its +x axis, degrees CCW. */
-  x: num,
-  y: num,
-  heading: num,
+  x: siteCoord,
+  y: siteCoord,
+  heading: angleDeg,
   obstacles: z.array(prismSchema).max(500).default([]),
   powerLines: z.array(powerLineSchema).max(50).default([]),
 });
@@ -159,17 +198,17 @@ export const liftInputSchema = z.object({
   supports: z.array(supportSchema).max(16),
   masses: z.array(massSchema).max(64),
   boom: boomSchema,
-  hook: z.object({ blockMass: num.default(0), riggingMass: num.default(0) }).prefault({}),
+  hook: z.object({ blockMass: massKg.default(0), riggingMass: massKg.default(0) }).prefault({}),
   load: loadSchema,
   swing: swingSchema,
   bodies: z.array(prismSchema).max(64).default([]),
   obstacles: z.array(prismSchema).max(500).default([]),
   powerLines: z.array(powerLineSchema).max(50).default([]),
-  soil: z.object({ allowable: pos }),
+  soil: z.object({ allowable: within(RANGE.pressureMin, RANGE.pressureMax, 'kPa') }),
   limits: z
     .object({
       percentOfTipping: z.number().positive().max(100).default(85),
-      clearance: z.number().nonnegative().default(0.3),
+      clearance: within(0, 100, 'm').default(0.3),
       /** Percent of the load chart's rated capacity allowed. */
       percentOfRated: z.number().positive().max(100).default(100),
     })

@@ -3,6 +3,8 @@
  * degree going where a radian is wanted, or a site-frame point being used as a truck-frame one.
  * Plain numbers come in through the zod schema; the engine brands them at the boundary.
  */
+import { wrap360 } from '@/lib/angles';
+
 declare const brand: unique symbol;
 export type Brand<T, B extends string> = T & { readonly [brand]: B };
 
@@ -38,12 +40,8 @@ export const truckPoint3 = (x: number, y: number, z: number) => ({ x, y, z }) as
 export const toRadians = (d: Degrees): Radians => ((d * Math.PI) / 180) as Radians;
 export const toDegrees = (r: Radians): Degrees => ((r * 180) / Math.PI) as Degrees;
 
-/** Normalises to [0, 360) (a tiny negative remainder would round up to 360 itself: that is 0). */
-export function normalizeDegrees(d: number): Degrees {
-  const r = d % 360;
-  const n = r < 0 ? r + 360 : r;
-  return (n >= 360 || n === 0 ? 0 : n) as Degrees;
-}
+/** Normalises to [0, 360) (lib/angles.ts). */
+export const normalizeDegrees = (d: number) => wrap360(d) as Degrees;
 
 /** Where the truck stands in the site frame: position of its slew axis and heading of its +x (deg, CCW). */
 export interface SitePose {

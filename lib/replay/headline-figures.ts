@@ -1,10 +1,16 @@
-import type { LiftResult } from '@/lib/lift';
+import type { Clearance, LiftResult } from '@/lib/lift';
+
+/**
+ * How far the load clears one truck part or obstacle: beside it or over it, whichever is more (the
+ * engine's clearanceWithin passes a clearance when either reaches the limit); over it when they overlap
+ * in plan (negative: the load would strike it).
+ */
+export const clearanceFigure = (c: Pick<Clearance, 'overlapsInPlan' | 'horizontal' | 'vertical'>) => (c.overlapsInPlan ? c.vertical : Math.max(c.horizontal, c.vertical));
 
 /**
  * A revision's headline figures for the timeline and the compare table, read from the engine's result:
  * the worst % of tipping over the swing, the highest ground pressure under any pad, the least clearance
- * to a truck part or obstacle (the figure its clearance check reports: the plan gap, or the height above
- * the part's top where the load passes over it). SI: kPa, m.
+ * to a truck part or obstacle (clearanceFigure). SI: kPa, m.
  */
 export interface HeadlineFigures {
   worstPercentOfTipping: number;
@@ -21,7 +27,7 @@ export function headlineFigures(r: Pick<LiftResult, 'worstCase' | 'reactions' | 
   for (const m of r.reactions.maxima) if (!pad || m.pressure > pad.pressure) pad = { pressure: m.pressure, support: m.support };
   let gap: { value: number; target: string } | null = null;
   for (const c of r.clearances) {
-    const value = c.overlapsInPlan ? c.vertical : c.horizontal;
+    const value = clearanceFigure(c);
     if (!gap || value < gap.value) gap = { value, target: c.target };
   }
   return {
@@ -33,4 +39,16 @@ export function headlineFigures(r: Pick<LiftResult, 'worstCase' | 'reactions' | 
     leastClearance: gap?.value ?? null,
     leastClearanceTarget: gap?.target ?? null,
   };
+}
+
+/** One save on the revision timeline (GET /api/scenes/{id}/revisions). */
+export interface RevisionSummary {
+  revision: number;
+  savedAt: string;
+  author: string;
+  /** The scene's status for its latest revision; "superseded" for every earlier one. */
+  status: string;
+  /** Headline figures, or null when the engine had nothing to compute (see `problem`). */
+  figures: HeadlineFigures | null;
+  problem: { code: string; message: string } | null;
 }

@@ -89,3 +89,9 @@ export function jumpToSlew(s: ClockState, slew: number): ClockState {
   const t = travelOf(s.arc, slew);
   return t === null ? s : { ...s, playing: false, travel: t };
 }
+
+/** The profile's slew speed (spec.upper.slewSpeed, °/s) when it has one, else null (the clock's default applies). */
+export function profileSlewRate(spec: unknown): number | null {
+  const v = (spec as { upper?: { slewSpeed?: unknown } } | null)?.upper?.slewSpeed;
+  return typeof v === 'number' && v > 0 && Number.isFinite(v) ? v : null;
+}

@@ -2,22 +2,13 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { getScene, listRevisions } from '@/db/repositories/scenes';
-import { headlineFigures, type HeadlineFigures } from '@/lib/replay/headline-figures';
+import { headlineFigures, type RevisionSummary } from '@/lib/replay/headline-figures';
+
+export type { RevisionSummary };
 import { analyseSavedScene, type SavedAnalysis } from './scene-analysis';
 
 /** The timeline shows the newest saves; autosave makes many, and each needs the engine once. */
 export const REVISION_LIST_LIMIT = 100;
-
-export interface RevisionSummary {
-  revision: number;
-  savedAt: string;
-  author: string;
-  /** The scene's status for its latest revision; "superseded" for every earlier one. */
-  status: string;
-  /** Headline figures, or null when the engine had nothing to compute (see `problem`). */
-  figures: HeadlineFigures | null;
-  problem: { code: string; message: string } | null;
-}
 
 const problemOf = (a: SavedAnalysis) => (a.ok ? null : { code: a.code, message: a.message });
 

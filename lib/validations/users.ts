@@ -14,3 +14,13 @@ export const createUserSchema = z.object({
 export type CreateUserInput = z.infer<typeof createUserSchema>;
 
 export const updateMeSchema = z.object({ units: z.enum(['imperial', 'metric']) });
+
+/** An admin's change to a user: a new role, or deactivation / reactivation. */
+export const updateUserSchema = z
+  .object({
+    role: roleSchema.optional(),
+    active: z.boolean({ error: 'active must be true or false' }).optional(),
+  })
+  .strict()
+  .refine((v) => v.role !== undefined || v.active !== undefined, { path: ['role'], message: 'Give a role or active' });
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;

@@ -30,7 +30,7 @@ test('Harrow operator: own and approved scenes, New scene button, no Users nav, 
   await expect(whoAmI(page)).toContainText('Dana Okafor');
   await expect(whoAmI(page)).toContainText('Operator');
   await expect(whoAmI(page)).toContainText('Harrow Ridge Recovery');
-  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Settings']);
+  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Lessons', 'Settings']);
   const titles = await listedTitles(page);
   expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
   expect(titles).not.toContain(COBALT_SCENE);
@@ -56,7 +56,7 @@ for (const who of [
     await signIn(page, who.email);
     await expect(whoAmI(page)).toContainText(who.name);
     await expect(whoAmI(page)).toContainText(who.role);
-    expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Settings']);
+    expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Lessons', 'Settings']);
     const titles = await listedTitles(page);
     // The draft belongs to the operator: supervisors and trainers read it, an operator colleague would not.
     expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
@@ -74,7 +74,7 @@ for (const who of [
 test('Harrow admin: Users nav, the organisation’s users only; adds an operator who sees approved scenes but not a colleague’s draft', async ({ page, browser }) => {
   await signIn(page, 'admin@harrow.example');
   await expect(whoAmI(page)).toContainText('Administrator');
-  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Users', 'Settings']);
+  expect(await navLabels(page)).toEqual(['Scenes', 'Equipment', 'Rigging', 'Lessons', 'Users', 'Settings']);
   await expect(page.getByRole('link', { name: '+ New scene' })).toHaveCount(0);
   await mainNav(page).getByRole('link', { name: 'Users' }).click();
   await expect(page).toHaveURL(/\/admin\/users$/);

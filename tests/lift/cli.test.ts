@@ -5,8 +5,8 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 
 const root = path.join(__dirname, '..', '..');
-const run = (file: string) =>
-  spawnSync(process.execPath, [path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs'), 'scripts/analyze.ts', file], { cwd: root, encoding: 'utf8' });
+const run = (file: string, ...args: string[]) =>
+  spawnSync(process.execPath, [path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs'), 'scripts/analyze.ts', file, ...args], { cwd: root, encoding: 'utf8' });
 
 describe('npm run analyze', () => {
   it('prints the result JSON for the README example', () => {
@@ -26,6 +26,13 @@ describe('npm run analyze', () => {
     const out = run(file);
     expect(out.status).toBe(2);
     expect(out.stderr).toMatch(/boom\.cgFraction/);
+    expect(out.stdout).toBe('');
+  });
+  it('refuses a step under 0.01° instead of running out of memory', () => {
+    // Source: issue 9 item 5 (--step 1e-7 ran out of heap).
+    const out = run('examples/lift/coil-transfer.json', '--step', '1e-7');
+    expect(out.status).toBe(2);
+    expect(out.stderr).toMatch(/--step must be a number of degrees from 0\.01 to 1/);
     expect(out.stdout).toBe('');
   });
 });

@@ -37,6 +37,14 @@ describe('POST /api/analyze', () => {
     expect(body.issues.map((i: { path: string }) => i.path)).toContain('swing.direction');
     expect(body.error).toMatch(/swing\.direction/);
   });
+  it('a number outside its physical range: 400 naming the field', async () => {
+    // Source: issue 9 item 5 — a mass near 1e308 overflowed to 0 % and every check passed.
+    user = operator;
+    const res = await post({ ...squareOfPads(), masses: [{ id: 'carrier', mass: 1e308, x: 0, y: 0, z: 1 }] });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    expect(body.issues.map((i: { path: string }) => i.path)).toContain('masses.0.mass');
+  });
   it('engine error: 422 with its code', async () => {
     user = operator;
     const input = squareOfPads();

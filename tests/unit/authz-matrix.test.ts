@@ -17,6 +17,7 @@ import * as inspections from '@/app/api/rigging/[id]/inspections/route';
 import * as riggingExport from '@/app/api/rigging/export/route';
 import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
+import * as userOne from '@/app/api/users/[id]/route';
 import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
 import * as submit from '@/app/api/scenes/[id]/submit/route';
@@ -30,6 +31,7 @@ import * as notificationsRead from '@/app/api/notifications/read/route';
 import { REVIEW_TITLES } from '@/db/seed/demo-review-scenes';
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
 import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
+import * as trainingCopy from '@/app/api/scenes/[id]/training-copy/route';
 import * as background from '@/app/api/scenes/[id]/background/route';
 import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import { makePng } from '@/tests/fixtures/images';
@@ -84,6 +86,8 @@ const lessonTarget = (title: string): TargetResolver => async () => {
 const lessonBody = (t: Target) => ({ title: 'Matrix: lesson', steps: [{ sceneId: t.sceneId, revision: 1, notes: 'Watch the rear pads.' }] });
 const today = () => new Date().toISOString().slice(0, 10);
 
+const userTarget = (email: string): TargetResolver => async () => ({ id: String((await getDb().selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id) });
+
 const targets: Record<string, TargetResolver> = {
   '-': async () => ({}),
   'Harrow: operator’s draft': sceneTarget(TITLES.ownDraft),
@@ -111,6 +115,8 @@ const targets: Record<string, TargetResolver> = {
   'Cobalt: lesson': lessonTarget(LESSONS.cobalt),
   'Harrow: training scene': async () => ({ sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
   'unknown lesson': async () => ({ id: '987654', sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
+  'Harrow: trainer': userTarget('trainer@harrow.example'),
+  'Cobalt: operator': userTarget('operator@cobalt.example'),
 };
 const lessonWrites = ['lessons', 'lesson_steps', 'audit_log'];
 
@@ -269,6 +275,17 @@ const routes: MatrixRoute[] = [
       'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
       'Cobalt: scene': [401, 404, 404, 404, 404, 200],
       'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    // A what-if kept as a new training-set scene: trainers and admins, from any scene they may read.
+    method: 'POST', path: '/api/scenes/[id]/training-copy', handler: trainingCopy.POST, writes: sceneWrites, checkId: false,
+    body: () => ({ title: 'Matrix: what-if copy', document: { version: 2, objects: [] } }),
+    expect: {
+      'Harrow: operator’s draft': [401, 403, 403, 201, 201, 403],
+      'Harrow: deleted scene': [401, 403, 403, 404, 404, 403],
+      'Cobalt: scene': [401, 403, 403, 404, 404, 403],
+      'unknown id': [401, 403, 403, 404, 404, 403],
     },
   },
   // ── equipment ──────────────────────────────────────────────────────────
@@ -501,6 +518,15 @@ const routes: MatrixRoute[] = [
     method: 'POST', path: '/api/users', handler: users.POST, writes: ['users', 'audit_log'],
     body: () => ({ name: 'Matrix New Hire', email: 'matrix.hire@harrow.example', role: 'operator', password: 'a-long-enough-password' }),
     expect: { '-': [401, 403, 403, 403, 201, 403] },
+  },
+  {
+    method: 'PATCH', path: '/api/users/[id]', handler: userOne.PATCH, writes: ['users', 'audit_log'],
+    body: () => ({ role: 'supervisor' }),
+    expect: {
+      'Harrow: trainer': [401, 403, 403, 403, 200, 403],
+      'Cobalt: operator': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
   },
   { method: 'GET', path: '/api/me', handler: me.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {

@@ -175,14 +175,14 @@ describe('generated path ids and list queries', () => {
   });
 
   it('list queries answer 200 or a 400 naming a query field; never a 500', async () => {
-    const param = fc.tuple(fc.constantFrom('page', 'pageSize', 'title', 'status', 'sort', 'dir', 'other'), fc.string({ maxLength: 8 }));
+    const param = fc.tuple(fc.constantFrom('page', 'pageSize', 'q', 'title', 'status', 'training', 'sort', 'dir', 'after', 'before', 'other'), fc.string({ maxLength: 8 }));
     await fc.assert(
       fc.asyncProperty(fc.array(param, { maxLength: 4 }), async (pairs) => {
         const res = await call({ handler: scenes.GET, method: 'GET', query: new URLSearchParams(pairs).toString() });
         if (res.status === 200) expect(Array.isArray(res.json.items)).toBe(true);
         else {
           expect(res.status).toBe(400);
-          for (const i of res.json.issues ?? []) expect(i.path).toMatch(/^query\.(page|pageSize|title|status|sort|dir)$/);
+          for (const i of res.json.issues ?? []) expect(i.path).toMatch(/^query\.(page|pageSize|q|title|status|training|sort|dir|after|before|other)$/);
         }
       }),
       { numRuns: 200 },

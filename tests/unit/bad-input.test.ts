@@ -106,7 +106,7 @@ const cases: BadCase[] = [
   { name: 'units not offered', who: op, handler: me.PATCH, method: 'PATCH', body: { units: 'furlongs' }, field: 'units', status: 400 },
   { name: 'units missing', who: op, handler: me.PATCH, method: 'PATCH', body: {}, field: 'units', status: 400 },
   // GET /api/scenes query
-  ...['page=0', 'page=-1', 'page=NaN', 'page=1.5', 'pageSize=101', 'pageSize=abc', 'status=bogus', `title=${'t'.repeat(121)}`].map(
+  ...['page=2', 'after=%%%', 'after=not+a+cursor', 'before=a/b', 'pageSize=0', 'pageSize=101', 'pageSize=abc', 'pageSize=1.5', 'status=bogus', 'training=yes', `q=${'t'.repeat(121)}`, `title=${'t'.repeat(121)}`].map(
     (q): BadCase => ({ name: `query ${q.slice(0, 20)}`, who: op, handler: scenes.GET, method: 'GET', query: q, field: `query.${q.split('=')[0]}`, status: 400 }),
   ),
   // path ids that are not plain positive whole numbers

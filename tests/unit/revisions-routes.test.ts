@@ -48,7 +48,7 @@ describe('GET /api/scenes/{id}/revisions', () => {
       expect(r.figures!.governingLine).toBe(a.worstCase.line);
       const pressures = (a.reactions.maxima as { pressure: number }[]).map((m) => m.pressure);
       expect(r.figures!.highestPadPressure).toBe(Math.max(...pressures));
-      const gaps = (a.clearances as { overlapsInPlan: boolean; vertical: number; horizontal: number }[]).map((c) => (c.overlapsInPlan ? c.vertical : c.horizontal));
+      const gaps = (a.clearances as { overlapsInPlan: boolean; vertical: number; horizontal: number }[]).map((c) => (c.overlapsInPlan ? c.vertical : Math.max(c.horizontal, c.vertical)));
       expect(r.figures!.leastClearance).toBe(Math.min(...gaps));
     }
     // Pulling one outrigger in shrinks the support polygon: the worst case gets worse.

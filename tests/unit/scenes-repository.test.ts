@@ -1,6 +1,7 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { DB } from '@/db';
-import { createScene, getScene, listRevisions, listScenes, setTrainingSet, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { createScene, getScene, listRevisions, setTrainingSet, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { listScenes } from '@/db/repositories/scene-list';
 import { listSceneAudit } from '@/db/repositories/audit';
 import { inTransaction } from '@/db/transaction';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -51,9 +52,11 @@ describe('updateScene', () => {
     const out = await updateScene(db, op, s.id, { revision: 1, document: doc(2), title: undefined });
     expect(out.kind).toBe('ok');
     if (out.kind !== 'ok') return;
-    expect(out.scene.revision).toBe(2);
-    expect(out.scene.title).toBe('Coil move');
-    expect(out.scene.document).toEqual(doc(2));
+    expect(out.revision).toBe(2);
+    const saved = (await getScene(db, op, s.id))!;
+    expect(saved.title).toBe('Coil move');
+    expect(saved.document).toEqual(doc(2));
+    expect(saved.updatedAt).toBe(out.savedAt);
     expect((await listRevisions(db, op.organisationId, s.id)).map((r) => r.revision)).toEqual([2, 1]);
     const stored = await db.selectFrom('scene_revisions').select('document').where('scene_id', '=', s.id).where('revision', '=', 2).executeTakeFirstOrThrow();
     expect(stored.document).toEqual(doc(2));
@@ -85,7 +88,7 @@ describe('softDeleteScene', () => {
     const s = await createScene(db, op, { title: 'Short-lived plan', document: doc(1) });
     expect(await softDeleteScene(db, op, s.id)).toBe(true);
     expect(await getScene(db, sup, s.id)).toBeUndefined();
-    expect((await listScenes(db, sup, { page: 1, pageSize: 50 })).items.map((i) => i.id)).not.toContain(s.id);
+    expect((await listScenes(db, sup, { pageSize: 50 })).items.map((i) => i.id)).not.toContain(s.id);
     const row = await db.selectFrom('scenes').select('deleted_at').where('id', '=', s.id).executeTakeFirstOrThrow();
     expect(row.deleted_at).toMatch(/^\d{4}-\d\d-\d\dT/);
     expect(await softDeleteScene(db, admin, s.id)).toBe(false);
@@ -102,7 +105,7 @@ describe('softDeleteScene', () => {
 describe('listScenes and getScene', () => {
   it('shows an operator their own scenes and approved ones; a supervisor every organisation scene', async () => {
     const supMade = await createScene(db, sup, { title: 'Draft written by the supervisor', document: doc(1) });
-    const titles = async (u: CurrentUser) => (await listScenes(db, u, { page: 1, pageSize: 50 })).items.map((i) => i.title).sort();
+    const titles = async (u: CurrentUser) => (await listScenes(db, u, { pageSize: 50 })).items.map((i) => i.title).sort();
     expect(await titles(op)).toEqual(['Coil transfer, Route 9 weigh station', 'Overturned reefer trailer, Mill Creek on-ramp']);
     expect(await titles(sup)).toEqual([
       'Coil transfer, Route 9 weigh station',
@@ -118,15 +121,17 @@ describe('listScenes and getScene', () => {
     expect((await getScene(db, op, supMade.id))?.title).toBe('Draft written by the supervisor');
   });
 
-  it('filters by title (case-insensitive, no SQL wildcards) and status, and pages with a total', async () => {
+  it('searches (case-insensitive, no SQL wildcards) and filters by status, and pages with a total', async () => {
     for (let i = 1; i <= 5; i++) await createScene(db, op, { title: `Paging scene ${i}`, document: doc(i) });
     await createScene(db, op, { title: '100% grade pull', document: doc(9) });
-    const page2 = await listScenes(db, op, { page: 2, pageSize: 2, title: 'PAGING' });
+    const page1 = await listScenes(db, op, { pageSize: 2, q: 'PAGING' });
+    const page2 = await listScenes(db, op, { pageSize: 2, q: 'PAGING', after: page1.nextCursor! });
     expect(page2.total).toBe(5);
     expect(page2.items).toHaveLength(2);
-    expect((await listScenes(db, op, { page: 1, pageSize: 50, title: '%' })).items.map((i) => i.title)).toEqual(['100% grade pull']);
-    expect((await listScenes(db, op, { page: 1, pageSize: 50, status: 'approved' })).items.map((i) => i.title)).toEqual(['Overturned reefer trailer, Mill Creek on-ramp']);
-    const sorted = await listScenes(db, op, { page: 1, pageSize: 3, title: 'paging', sort: 'title', dir: 'asc' });
+    expect((await listScenes(db, op, { pageSize: 50, q: '%' })).items).toEqual([]);
+    expect((await listScenes(db, op, { pageSize: 50, q: '100%' })).items.map((i) => i.title)).toEqual(['100% grade pull']);
+    expect((await listScenes(db, op, { pageSize: 50, status: 'approved' })).items.map((i) => i.title)).toEqual(['Overturned reefer trailer, Mill Creek on-ramp']);
+    const sorted = await listScenes(db, op, { pageSize: 3, q: 'paging', sort: 'title', dir: 'asc' });
     expect(sorted.items.map((i) => i.title)).toEqual(['Paging scene 1', 'Paging scene 2', 'Paging scene 3']);
   });
 

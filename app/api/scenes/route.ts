@@ -1,6 +1,8 @@
 import { getDb } from '@/db';
 import { inTransaction } from '@/db/transaction';
-import { createScene, listScenes } from '@/db/repositories/scenes';
+import { createScene } from '@/db/repositories/scenes';
+import { BadCursorError, listScenes } from '@/db/repositories/scene-list';
+import { HttpError } from '@/lib/api/errors';
 import { route } from '@/lib/api/route';
 import { scenePin } from '@/lib/server/truck-pin';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
@@ -9,7 +11,16 @@ import { emptySceneDocument } from '@/lib/scene';
 export const runtime = 'nodejs';
 
 export const GET = route({ query: listScenesQuery }, async ({ user, query }) => {
-  return listScenes(getDb(), user, query);
+  const { q, title, training, ...rest } = query;
+  try {
+    return await listScenes(getDb(), user, { ...rest, q: q ?? title, inTrainingSet: training === undefined ? undefined : training === '1' });
+  } catch (e) {
+    if (e instanceof BadCursorError) {
+      const field = query.before !== undefined ? 'before' : 'after';
+      throw new HttpError(400, `query.${field}: ${e.message}`, [{ path: `query.${field}`, message: e.message }]);
+    }
+    throw e;
+  }
 });
 
 export const POST = route({ roles: ['operator'], body: createSceneSchema }, async ({ user, body }) => {
@@ -18,6 +29,8 @@ export const POST = route({ roles: ['operator'], body: createSceneSchema }, asyn
     const pin = await scenePin(trx, user.organisationId, body);
     return createScene(trx, user, {
       title: body.title,
+      location: body.location,
+      notes: body.notes,
       document: body.document ?? emptySceneDocument(),
       equipmentProfileId: pin?.equipmentProfileId ?? null,
       equipmentProfileVersion: pin?.equipmentProfileVersion ?? null,

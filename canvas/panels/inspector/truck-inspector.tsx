@@ -1,4 +1,5 @@
 'use client';
+import { wrap360 } from '@/lib/angles';
 import type { TruckObject } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { moveTruckToProfileVersion, setBoom, setLegCribbing, setLegExtension } from '../../commands/truck';
@@ -65,7 +66,7 @@ export function TruckInspector({ truck }: { truck: TruckObject }) {
         </div>
       </Section>
       <Section title="Boom">
-        <NumberField label="Slew (° from cab, CCW)" value={truck.boom.slew} suffix="°" min={-360} max={720} disabled={ro} onCommit={(slew) => run(setBoom({ slew: ((slew % 360) + 360) % 360 }))} testId="field-slew" />
+        <NumberField label="Slew (° from cab, CCW)" value={truck.boom.slew} suffix="°" min={-360} max={720} disabled={ro} onCommit={(slew) => run(setBoom({ slew: wrap360(slew) }))} testId="field-slew" />
         <NumberField label="Elevation" value={truck.boom.elevation} suffix="°" min={model?.boom.minElevation ?? -10} max={model?.boom.maxElevation ?? 89} disabled={ro} onCommit={(elevation) => run(setBoom({ elevation }))} testId="field-elevation" />
         <LengthField label={`Length (${model ? `${formatLength(model.boom.minLength, units)}–${formatLength(model.boom.maxLength, units)}` : ''})`} value={truck.boom.length} units={units} disabled={ro} onCommit={(length) => run(setBoom({ length: model ? Math.min(model.boom.maxLength, Math.max(model.boom.minLength, length)) : length }))} testId="field-boom-length" />
       </Section>

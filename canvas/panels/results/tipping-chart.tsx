@@ -1,5 +1,7 @@
 'use client';
+import { wrap360 } from '@/lib/angles';
 import type { LiftResult } from '@/lib/lift';
+import { formatAngle, formatPercent } from '@/lib/format/quantity';
 
 /** Percent of tipping against slew over the planned swing, with the plan's limit and the worst case. Hand-drawn SVG. */
 export function TippingChart({ result, limit, slewNow, from, direction }: { result: LiftResult; limit: number; slewNow: number | null; from: number; direction: 'ccw' | 'cw' }) {
@@ -12,7 +14,7 @@ export function TippingChart({ result, limit, slewNow, from, direction }: { resu
   // Plot against distance along the swing from the pick, so a swing through 0° stays continuous.
   const along = (slew: number) => {
     const d = direction === 'ccw' ? slew - from : from - slew;
-    return ((d % 360) + 360) % 360;
+    return wrap360(d);
   };
   const xs: number[] = [];
   sweep.forEach((s, i) => {
@@ -29,10 +31,10 @@ export function TippingChart({ result, limit, slewNow, from, direction }: { resu
   const wx = x(wa > span + 1e-6 ? 0 : wa);
   const wy = y(result.worstCase.percentOfTipping);
   const ticks = [0, 0.25, 0.5, 0.75, 1].map((f) => f * span);
-  const slewLabel = (t: number) => Math.round(((from + (direction === 'ccw' ? t : -t)) % 360 + 360) % 360);
+  const slewLabel = (t: number) => Math.round(wrap360(from + (direction === 'ccw' ? t : -t)));
   return (
     <figure>
-      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={`Percent of tipping over the swing; worst case ${result.worstCase.percentOfTipping.toFixed(1)} % at ${result.worstCase.slew.toFixed(1)}°`} data-testid="tipping-chart">
+      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={`Percent of tipping over the swing; worst case ${formatPercent(result.worstCase.percentOfTipping)} at ${formatAngle(result.worstCase.slew)}`} data-testid="tipping-chart">
         <rect x={L} y={8} width={W - L - 8} height={H - B - 8} fill="#FFFFFF" stroke="#D6CFC2" />
         {[0, 25, 50, 75, 100].filter((v) => v <= maxY).map((v) => (
           <g key={v}>
@@ -55,7 +57,7 @@ export function TippingChart({ result, limit, slewNow, from, direction }: { resu
         {slewNow !== null && along(slewNow) <= span && <line x1={x(along(slewNow))} x2={x(along(slewNow))} y1={8} y2={H - B} stroke="#F2A900" strokeWidth="2" />}
         <circle cx={wx} cy={wy} r="5" fill="#15202B" />
         <text x={Math.min(wx + 6, W - 100)} y={Math.max(wy - 6, 18)} fontSize="10" fontWeight="700" fill="#15202B">
-          worst {result.worstCase.percentOfTipping.toFixed(1)} %
+          worst {formatPercent(result.worstCase.percentOfTipping)}
         </text>
       </svg>
       <figcaption className="text-xs text-ink-muted">Percent of tipping (up) against slew from pick to set (across); dashed red: the plan’s limit; dot: worst case; amber: now.</figcaption>

@@ -2,7 +2,8 @@ import type { Capture } from '../../commands/command';
 import { rotateObjects } from '../../commands/objects';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { Editor } from '../../editor/editor';
-import { bearing, wrap180 } from '@/lib/scene/geometry/vec';
+import { wrap180 } from '@/lib/angles';
+import { bearing } from '@/lib/scene/geometry/vec';
 import type { PointerInfo, ToolState } from '../tool-state';
 import { gestureHandlers } from './gesture';
 

@@ -83,12 +83,4 @@ export function boundsOf(points: readonly Pt[]): Bounds | null {
 
 export const boundsIntersect = (a: Bounds, b: Bounds) => a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
 
-/** Normalises degrees to (−180, 180]. */
-export function wrap180(d: number): number {
-  const r = ((((d + 180) % 360) + 360) % 360) - 180;
-  return r === -180 ? 180 : r;
-}
-
-export const wrap360 = (d: number) => ((d % 360) + 360) % 360;
-
 export const bearing = (from: Pt, to: Pt) => Math.atan2(to.y - from.y, to.x - from.x) / DEG;

@@ -15,7 +15,7 @@ export default async function UsersAdminPage() {
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Users" description="Everyone who can sign in to your organisation, and their role." />
-      <div className="grid items-start gap-6 xl:grid-cols-[1fr_22rem]">
+      <div className="grid items-start gap-6 2xl:grid-cols-[minmax(0,1fr)_22rem]">
         <UsersTable />
         <Card>
           <CardHeader title="Add a user" as="h2" />

@@ -1,6 +1,7 @@
 import { getDb } from '@/db';
 import { inTransaction } from '@/db/transaction';
-import { getScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
@@ -20,8 +21,10 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 export const PUT = route({ roles: ['operator'], params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
   // Read, ownership check and write in one transaction: nothing can change the scene in between.
   const outcome = await inTransaction(getDb(), async (trx) => {
-    const scene = await getScene(trx, user, params.id);
-    if (!scene) throw notFound();
+    // The few columns the checks need; the stored document is never read on a save.
+    const scene = await sceneForSave(trx, user, params.id);
+    // Another operator's scene that this operator may not even read is not found, as on GET.
+    if (!scene || (scene.ownerId !== user.id && scene.status !== 'approved')) throw notFound();
     if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
     // A submitted or approved plan is frozen; the message says what to do instead (withdraw, new revision).
     if (!isEditable(scene.status)) {
@@ -45,7 +48,8 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: updateSc
       { status: 409 },
     );
   }
-  return outcome.scene;
+  scheduleThinning(getDb(), params.id);
+  return { revision: outcome.revision, savedAt: outcome.savedAt };
 });
 
 export const DELETE = route({ roles: ['operator', 'admin'], params: idParams }, async ({ user, params }) => {

@@ -47,9 +47,14 @@ export default async function SceneDetailsPage({ params }: Props) {
         eyebrow="Scene details"
         title={<span data-testid="scene-title">{scene.title}</span>}
         actions={
-          <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
-            Open in editor
-          </ButtonLink>
+          <>
+            <ButtonLink href={`/scenes/${scene.id}/replay`} variant="secondary" size="lg">
+              Replay
+            </ButtonLink>
+            <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
+              Open in editor
+            </ButtonLink>
+          </>
         }
       />
       <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">

@@ -36,5 +36,5 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: savePlan
       { status: 409 },
     );
   }
-  return { id: outcome.scene.id, revision: outcome.scene.revision, savedAt: outcome.scene.revision, savedBy: user.name, details: body.details };
+  return { id: params.id, revision: outcome.revision, savedAt: outcome.savedAt, savedBy: user.name, details: body.details };
 });

@@ -1,0 +1,174 @@
+import { sql, type Expression, type Kysely, type SqlBool } from 'kysely';
+import type { Database } from '../schema';
+import type { CurrentUser, SceneStatus } from '@/lib/domain';
+import { canReadAllScenes } from '@/lib/auth/roles';
+
+type Db = Kysely<Database>;
+
+export interface SceneSummary {
+  id: number;
+  title: string;
+  status: SceneStatus;
+  revision: number;
+  ownerId: number;
+  ownerName: string;
+  updatedAt: string;
+  inTrainingSet: boolean;
+  location: string | null;
+}
+
+export const SCENE_LIST_SORTS = ['updatedAt', 'title', 'status', 'ownerName', 'revision'] as const;
+export type SceneListSort = (typeof SCENE_LIST_SORTS)[number];
+
+export interface ListScenesOptions {
+  pageSize: number;
+  /** Free-text search over title, location and notes (FTS5, prefix per word, accents folded). */
+  q?: string;
+  status?: SceneStatus;
+  inTrainingSet?: boolean;
+  sort?: SceneListSort;
+  dir?: 'asc' | 'desc';
+  /** Keyset cursors from a previous page: rows after `after`, or the page before `before`. */
+  after?: string;
+  before?: string;
+}
+
+export interface ScenePage {
+  items: SceneSummary[];
+  /** Matching scenes, counted up to COUNT_CAP; `totalCapped` says there are more. */
+  total: number;
+  totalCapped: boolean;
+  pageSize: number;
+  nextCursor: string | null;
+  prevCursor: string | null;
+}
+
+/** Counting stops here: past it the list says "10,000+" rather than scan an organisation's whole history. */
+export const COUNT_CAP = 10_000;
+
+const SORT_COLUMNS = {
+  updatedAt: 'scenes.updated_at',
+  title: 'scenes.title',
+  status: 'scenes.status',
+  ownerName: 'users.name',
+  revision: 'scenes.revision',
+} as const;
+
+interface Cursor {
+  v: string | number;
+  id: number;
+}
+
+export class BadCursorError extends Error {}
+
+export function encodeCursor(c: Cursor): string {
+  return Buffer.from(JSON.stringify([c.v, c.id])).toString('base64url');
+}
+
+export function decodeCursor(s: string): Cursor {
+  try {
+    const parsed: unknown = JSON.parse(Buffer.from(s, 'base64url').toString('utf8'));
+    if (Array.isArray(parsed) && parsed.length === 2 && (typeof parsed[0] === 'string' || typeof parsed[0] === 'number') && Number.isSafeInteger(parsed[1]) && parsed[1] > 0) {
+      return { v: parsed[0], id: parsed[1] };
+    }
+  } catch {
+    // fall through
+  }
+  throw new BadCursorError('not a cursor this list gave out');
+}
+
+/**
+ * An FTS5 query from what a person typed: each word becomes a quoted prefix term, all required.
+ * Quoting keeps FTS syntax (AND, NEAR, *, ") from being interpreted; null when nothing searchable is left.
+ */
+export function ftsQuery(text: string): string | null {
+  const words = text.normalize('NFKC').match(/[\p{L}\p{N}]+/gu);
+  if (!words) return null;
+  return words.slice(0, 12).map((w) => `"${w}"*`).join(' ');
+}
+
+function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
+  let q = db
+    .selectFrom('scenes')
+    .innerJoin('users', 'users.id', 'scenes.owner_id')
+    .where('scenes.organisation_id', '=', user.organisationId)
+    .where('scenes.deleted_at', 'is', null);
+  if (!canReadAllScenes(user.role)) {
+    q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
+  }
+  if (opts.status) q = q.where('scenes.status', '=', opts.status);
+  if (opts.inTrainingSet !== undefined) q = q.where('scenes.in_training_set', '=', opts.inTrainingSet ? 1 : 0);
+  if (opts.q !== undefined) {
+    const match = ftsQuery(opts.q);
+    // A search with no letters or digits in it matches nothing, rather than everything.
+    q = match === null ? q.where(sql<SqlBool>`0`) : q.where('scenes.id', 'in', sql<number>`(select rowid from scenes_fts where scenes_fts match ${match})`);
+  }
+  return q;
+}
+
+/**
+ * One page of the scenes a user may read, by keyset: the page after (or before) a cursor, never OFFSET,
+ * so a deep page costs what page 1 costs and rows saved between pages are neither repeated nor skipped.
+ */
+export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOptions): Promise<ScenePage> {
+  const sort = opts.sort ?? 'updatedAt';
+  const dir = opts.dir ?? 'desc';
+  const col = SORT_COLUMNS[sort];
+  const backward = opts.before !== undefined;
+  const cursor = opts.before !== undefined ? decodeCursor(opts.before) : opts.after !== undefined ? decodeCursor(opts.after) : null;
+  // Reading backward walks the order in reverse from the cursor, then turns the page round.
+  const walk = backward ? (dir === 'desc' ? 'asc' : 'desc') : dir;
+  const cmp = walk === 'desc' ? '<' : '>';
+
+  let q = filtered(db, user, opts);
+  if (cursor) {
+    q = q.where((eb) =>
+      eb.or([
+        eb(col, cmp, cursor.v as never),
+        eb.and([eb(col, '=', cursor.v as never), eb('scenes.id', cmp, cursor.id)]),
+      ]) as Expression<SqlBool>,
+    );
+  }
+  const rows = await q
+    .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'scenes.location', 'users.name as owner_name'])
+    .orderBy(col, walk)
+    .orderBy('scenes.id', walk)
+    .limit(opts.pageSize + 1)
+    .execute();
+  const more = rows.length > opts.pageSize;
+  const page = rows.slice(0, opts.pageSize);
+  if (backward) page.reverse();
+  const items: SceneSummary[] = page.map((r) => ({
+    id: r.id,
+    title: r.title,
+    status: r.status,
+    revision: r.revision,
+    ownerId: r.owner_id,
+    ownerName: r.owner_name,
+    updatedAt: r.updated_at,
+    inTrainingSet: r.in_training_set === 1,
+    location: r.location,
+  }));
+  const keyOf = (s: SceneSummary): Cursor => ({ v: (sort === 'updatedAt' ? s.updatedAt : sort === 'ownerName' ? s.ownerName : s[sort]) as string | number, id: s.id });
+  const first = items[0];
+  const last = items[items.length - 1];
+  const hasNext = backward ? cursor !== null : more;
+  const hasPrev = backward ? more : cursor !== null;
+
+  const counted = Number(
+    (
+      await db
+        .selectFrom(filtered(db, user, opts).select('scenes.id').limit(COUNT_CAP + 1).as('matching'))
+        .select((eb) => eb.fn.countAll<number>().as('n'))
+        .executeTakeFirstOrThrow()
+    ).n,
+  );
+  return {
+    items,
+    total: Math.min(counted, COUNT_CAP),
+    totalCapped: counted > COUNT_CAP,
+    pageSize: opts.pageSize,
+    nextCursor: hasNext && last ? encodeCursor(keyOf(last)) : null,
+    prevCursor: hasPrev && first ? encodeCursor(keyOf(first)) : null,
+  };
+}

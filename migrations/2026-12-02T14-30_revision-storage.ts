@@ -1,0 +1,16 @@
+import { type Kysely } from 'kysely';
+
+/**
+ * Lean revisions: an autosave's snapshot is stored gzip-compressed (a BLOB in `document`, which
+ * db/json-columns.ts inflates on read), while a revision that was submitted or approved is `kept`: a full
+ * JSON snapshot that the background thinning (db/repositories/revision-thinning.ts) never removes.
+ */
+export async function up(db: Kysely<any>): Promise<void> {
+  await db.schema.alterTable('scene_revisions').addColumn('kept', 'integer', (c) => c.notNull().defaultTo(0)).execute();
+  await db.schema.createIndex('scene_revisions_thinning_idx').on('scene_revisions').columns(['scene_id', 'kept', 'created_at']).execute();
+}
+
+export async function down(db: Kysely<any>): Promise<void> {
+  await db.schema.dropIndex('scene_revisions_thinning_idx').execute();
+  await db.schema.alterTable('scene_revisions').dropColumn('kept').execute();
+}

@@ -1,0 +1,116 @@
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { sql } from 'kysely';
+import type { DB } from '@/db';
+import { createScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { COUNT_CAP, decodeCursor, ftsQuery, listScenes, type ListScenesOptions } from '@/db/repositories/scene-list';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { demoUser } from '@/tests/setup/db';
+import { buildTemplate, resetToTemplate } from '@/tests/setup/template-db';
+
+let template: string;
+let db: DB;
+let op: CurrentUser, sup: CurrentUser;
+const doc = { version: 1, objects: [] };
+
+beforeAll(async () => {
+  template = await buildTemplate();
+});
+beforeEach(async () => {
+  db = await resetToTemplate(template);
+  [op, sup] = await Promise.all(['operator@harrow.example', 'supervisor@harrow.example'].map((e) => demoUser(e as never)));
+});
+
+/** Walks every page forward from page 1, running `between` after each page is read. */
+async function walk(user: CurrentUser, opts: Omit<ListScenesOptions, 'after' | 'before'>, between?: (page: number) => Promise<void>) {
+  const seen: number[] = [];
+  let after: string | undefined;
+  for (let page = 1; page < 1000; page++) {
+    const res = await listScenes(db, user, { ...opts, after });
+    seen.push(...res.items.map((i) => i.id));
+    if (between) await between(page);
+    if (!res.nextCursor) break;
+    after = res.nextCursor;
+  }
+  return seen;
+}
+
+describe('keyset paging', () => {
+  it('repeats and skips no row while scenes are created between pages', async () => {
+    for (let i = 0; i < 23; i++) await createScene(db, op, { title: `Keyset scene ${i}`, document: doc });
+    const before = (await listScenes(db, sup, { pageSize: 100 })).items.map((i) => i.id);
+    let made = 0;
+    const seen = await walk(sup, { pageSize: 4 }, async () => {
+      // A new scene lands at the top (newest), ahead of the cursor: it must not shift later pages.
+      await createScene(db, op, { title: `Made while paging ${made++}`, document: doc });
+    });
+    expect(new Set(seen).size).toBe(seen.length);
+    expect(seen).toEqual(before);
+  });
+
+  it('walks by title ascending and back again with the before cursor', async () => {
+    for (const t of ['Delta lift', 'Alpha lift', 'Charlie lift', 'Bravo lift', 'Echo lift']) await createScene(db, op, { title: t, document: doc });
+    const opts = { pageSize: 2, q: 'lift', sort: 'title', dir: 'asc' } as const;
+    const p1 = await listScenes(db, op, opts);
+    const p2 = await listScenes(db, op, { ...opts, after: p1.nextCursor! });
+    const p3 = await listScenes(db, op, { ...opts, after: p2.nextCursor! });
+    expect([p1, p2, p3].map((p) => p.items.map((i) => i.title))).toEqual([['Alpha lift', 'Bravo lift'], ['Charlie lift', 'Delta lift'], ['Echo lift']]);
+    expect(p1.prevCursor).toBeNull();
+    expect(p3.nextCursor).toBeNull();
+    const back = await listScenes(db, op, { ...opts, before: p3.prevCursor! });
+    expect(back.items.map((i) => i.title)).toEqual(['Charlie lift', 'Delta lift']);
+    expect(back.nextCursor).not.toBeNull();
+    const first = await listScenes(db, op, { ...opts, before: back.prevCursor! });
+    expect(first.items.map((i) => i.title)).toEqual(['Alpha lift', 'Bravo lift']);
+    expect(first.prevCursor).toBeNull();
+  });
+
+  it('refuses a cursor it did not give out', () => {
+    expect(() => decodeCursor('bm90IGEgY3Vyc29y')).toThrow(/cursor/);
+    expect(() => decodeCursor(Buffer.from('["x",-1]').toString('base64url'))).toThrow(/cursor/);
+  });
+});
+
+describe('full-text search (FTS5)', () => {
+  it('folds accents and case, matches word prefixes, and covers location and notes', async () => {
+    await createScene(db, op, { title: 'Reefer off the Château Ridge ramp', document: doc });
+    await createScene(db, op, { title: 'Coil transfer', location: 'Mile 114, Route 9 northbound', document: doc });
+    await createScene(db, op, { title: 'Box truck', notes: 'Embankment is soft after the rain; bring extra mats', document: doc });
+    const titles = async (q: string) => (await listScenes(db, op, { pageSize: 50, q })).items.map((i) => i.title).sort();
+    expect(await titles('chateau')).toEqual(['Reefer off the Château Ridge ramp']);
+    expect(await titles('CHÂT')).toEqual(['Reefer off the Château Ridge ramp']);
+    expect(await titles('northb')).toEqual(['Coil transfer']);
+    expect(await titles('embank mats')).toEqual(['Box truck']);
+    expect(await titles('embank coil')).toEqual([]);
+  });
+
+  it('follows renames and never finds a deleted scene', async () => {
+    const s = await createScene(db, op, { title: 'Tanker on its side', document: doc });
+    await updateScene(db, op, s.id, { revision: 1, title: 'Milk tanker on its side' });
+    expect((await listScenes(db, op, { pageSize: 5, q: 'milk' })).items.map((i) => i.id)).toEqual([s.id]);
+    await softDeleteScene(db, op, s.id);
+    expect((await listScenes(db, op, { pageSize: 5, q: 'milk' })).total).toBe(0);
+    await db.deleteFrom('scene_revisions').where('scene_id', '=', s.id).execute();
+    await db.deleteFrom('audit_log').where('scene_id', '=', s.id).execute();
+    await db.deleteFrom('scenes').where('id', '=', s.id).execute();
+    const left = await sql<{ n: number }>`select count(*) as n from scenes_fts where scenes_fts match 'milk'`.execute(db);
+    expect(left.rows[0].n).toBe(0);
+  });
+
+  it('quotes what people type, so FTS syntax in it is searched as words', () => {
+    expect(ftsQuery('coil "AND" NEAR(x*')).toBe('"coil"* "AND"* "NEAR"* "x"*');
+    expect(ftsQuery('%%')).toBeNull();
+  });
+});
+
+describe('the total', () => {
+  it('is counted up to the cap and then reported as capped', async () => {
+    const now = new Date().toISOString();
+    const rows = Array.from({ length: COUNT_CAP + 5 }, (_, i) => ({ organisation_id: op.organisationId, owner_id: op.id, title: `Bulk ${i}`, document: '{}', created_at: now, updated_at: now }));
+    for (let i = 0; i < rows.length; i += 500) await db.insertInto('scenes').values(rows.slice(i, i + 500) as never).execute();
+    const res = await listScenes(db, sup, { pageSize: 10 });
+    expect(res).toMatchObject({ total: COUNT_CAP, totalCapped: true });
+    expect(res.items).toHaveLength(10);
+    const few = await listScenes(db, sup, { pageSize: 10, q: 'Bulk 1234' });
+    expect(few).toMatchObject({ total: 1, totalCapped: false });
+  });
+});
