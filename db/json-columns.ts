@@ -5,7 +5,7 @@ import type { KyselyPlugin, PluginTransformQueryArgs, PluginTransformResultArgs,
  * Result columns stored as JSON text (the JSONColumnType<> columns in db/schema.ts). Add a new JSON column
  * here; tests/unit/json-columns.test.ts fails if schema.ts has one that is missing.
  */
-export const JSON_COLUMNS: ReadonlySet<string> = new Set(['document', 'spec', 'detail', 'details']);
+export const JSON_COLUMNS: ReadonlySet<string> = new Set(['document', 'spec', 'detail', 'details', 'figures', 'checks']);
 
 /**
  * Parses exactly the JSON columns, once. Kysely's ParseJSONResultsPlugin instead parses every string that

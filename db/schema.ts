@@ -144,6 +144,73 @@ export interface RiggingInspectionTable {
   created_at: Timestamp;
 }
 
+export type SubmissionState = 'pending' | 'approved' | 'returned' | 'withdrawn';
+
+/** One submission of a revision for review, with the figures the server computed and the decision on it. */
+export interface SceneSubmissionTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  revision: number;
+  submitted_by: number;
+  submitted_at: Timestamp;
+  engine_version: string;
+  figures: JSONColumnType<Record<string, unknown>>;
+  checks: JSONColumnType<unknown[]>;
+  state: Generated<SubmissionState>;
+  decided_by: number | null;
+  decided_at: string | null;
+  note: string | null;
+  conditions: string | null;
+  reason: string | null;
+}
+
+export interface SceneCommentTable {
+  id: Generated<number>;
+  organisation_id: number;
+  scene_id: number;
+  author_id: number;
+  parent_id: number | null;
+  revision: number;
+  /** Plain text as typed; escaped wherever it is shown. */
+  body: string;
+  anchor_x: number | null;
+  anchor_y: number | null;
+  anchor_object_id: string | null;
+  resolved_at: string | null;
+  resolved_by: number | null;
+  created_at: Timestamp;
+}
+
+export interface NotificationTable {
+  id: Generated<number>;
+  organisation_id: number;
+  user_id: number;
+  scene_id: number | null;
+  kind: string;
+  message: string;
+  link: string;
+  read_at: string | null;
+  created_at: Timestamp;
+}
+
+export interface MailOutboxTable {
+  id: Generated<number>;
+  organisation_id: number;
+  to_user_id: number | null;
+  to_address: string;
+  subject: string;
+  text_body: string;
+  html_body: string;
+  state: Generated<'pending' | 'sent' | 'failed'>;
+  attempts: Generated<number>;
+  next_attempt_at: Timestamp;
+  last_error: string | null;
+  message_id: string | null;
+  sent_at: string | null;
+  created_at: Timestamp;
+}
+
 export interface ScenePlanDetailsTable {
   id: Generated<number>;
   organisation_id: number;
@@ -187,6 +254,10 @@ export interface Database {
   equipment_profile_versions: EquipmentProfileVersionTable;
   rigging_items: RiggingItemTable;
   rigging_inspections: RiggingInspectionTable;
+  scene_submissions: SceneSubmissionTable;
+  scene_comments: SceneCommentTable;
+  notifications: NotificationTable;
+  mail_outbox: MailOutboxTable;
   scene_plan_details: ScenePlanDetailsTable;
   lessons: LessonTable;
   lesson_steps: LessonStepTable;
@@ -212,6 +283,10 @@ export type NewRiggingItem = Insertable<RiggingItemTable>;
 export type RiggingItemUpdate = Updateable<RiggingItemTable>;
 export type RiggingInspectionRow = Selectable<RiggingInspectionTable>;
 export type NewRiggingInspection = Insertable<RiggingInspectionTable>;
+export type SceneSubmissionRow = Selectable<SceneSubmissionTable>;
+export type SceneCommentRow = Selectable<SceneCommentTable>;
+export type NotificationRow = Selectable<NotificationTable>;
+export type MailOutboxRow = Selectable<MailOutboxTable>;
 export type ScenePlanDetailsRow = Selectable<ScenePlanDetailsTable>;
 export type LessonRow = Selectable<LessonTable>;
 export type LessonStepRow = Selectable<LessonStepTable>;

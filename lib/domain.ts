@@ -6,8 +6,9 @@
 export type Role = 'operator' | 'supervisor' | 'trainer' | 'admin';
 export const ROLES: readonly Role[] = ['operator', 'supervisor', 'trainer', 'admin'] as const;
 
-export type SceneStatus = 'draft' | 'submitted' | 'approved' | 'rejected' | 'archived';
-export const SCENE_STATUSES: readonly SceneStatus[] = ['draft', 'submitted', 'approved', 'rejected', 'archived'] as const;
+/** A plan's place in the review lifecycle (lib/review/lifecycle says which moves are allowed). */
+export const SCENE_STATUSES = ['draft', 'submitted', 'approved', 'returned', 'archived'] as const;
+export type SceneStatus = (typeof SCENE_STATUSES)[number];
 
 export type RiggingKind = 'round-sling' | 'web-sling' | 'wire-rope-sling' | 'chain' | 'shackle' | 'snatch-block' | 'hook' | 'recovery-strap';
 export const RIGGING_KINDS: readonly RiggingKind[] = ['round-sling', 'web-sling', 'wire-rope-sling', 'chain', 'shackle', 'snatch-block', 'hook', 'recovery-strap'] as const;

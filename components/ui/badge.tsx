@@ -33,7 +33,7 @@ const STATUS: Record<SceneStatus, { label: string; tone: BadgeTone; glyph: IconN
   draft: { label: 'Draft', tone: 'neutral', glyph: 'pencil' },
   submitted: { label: 'Awaiting review', tone: 'signal', glyph: 'clock' },
   approved: { label: 'Approved', tone: 'within', glyph: 'check' },
-  rejected: { label: 'Sent back', tone: 'over', glyph: 'cross' },
+  returned: { label: 'Returned for changes', tone: 'over', glyph: 'cross' },
   archived: { label: 'Archived', tone: 'teal', glyph: 'box' },
 };
 

@@ -16,7 +16,7 @@ const roundSling = (tag: string, colour: string, legs: number, angle: number) =>
 };
 const base = { rotation: 0, locked: false, label: '' };
 
-const coilTransfer: SceneDocumentIn = {
+export const coilTransfer: SceneDocumentIn = {
   version: 2,
   objects: [
     { ...base, id: 'lane', kind: 'obstacle', obstacleKind: 'traffic-lane', x: 0, y: 15, shape: { kind: 'rect', length: 70, width: 3.7 }, height: 4.3, label: 'Route 9 westbound lane' },
@@ -62,7 +62,7 @@ const coilTransfer: SceneDocumentIn = {
   limits: { percentOfTipping: 85, clearance: 0.3, percentOfRated: 100 },
 };
 
-const reefer: SceneDocumentIn = {
+export const reefer: SceneDocumentIn = {
   version: 2,
   objects: [
     { ...base, id: 'ramp-lane', kind: 'obstacle', obstacleKind: 'traffic-lane', x: 4, y: 9, rotation: 20, shape: { kind: 'rect', length: 60, width: 3.7 }, height: 4.3, label: 'On-ramp lane (closed)' },

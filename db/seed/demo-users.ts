@@ -13,5 +13,6 @@ export const DEMO_USERS: { org: (typeof DEMO_ORGS)[number]['slug']; email: strin
   { org: 'harrow-ridge', email: 'supervisor@harrow.example', name: 'Mitch Varga', role: 'supervisor' },
   { org: 'harrow-ridge', email: 'trainer@harrow.example', name: 'Priya Lindqvist', role: 'trainer' },
   { org: 'harrow-ridge', email: 'admin@harrow.example', name: 'Sol Brennan', role: 'admin' },
+  { org: 'harrow-ridge', email: 'operator2@harrow.example', name: 'Tomas Reyes', role: 'operator' },
   { org: 'cobalt-flats', email: 'operator@cobalt.example', name: 'Jules Amari', role: 'operator' },
 ];

@@ -6,6 +6,8 @@ import { DEMO_TRUCKS } from './demo-trucks';
 import { seedDemoRigging } from './demo-rigging';
 import { createEquipmentProfile } from '../repositories/equipment';
 import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
+import { REVIEW_SCENES } from './demo-review-scenes';
+import { seedDemoReview } from './demo-review';
 import { seedDemoLessons } from './demo-lessons';
 import { DEMO_PLAN_DETAILS } from './demo-plan-details';
 import { planDetailsSchema } from '@/lib/plan-details/schema';
@@ -38,7 +40,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
     }
     await seedDemoRigging(trx, orgIds, userIds);
     const sceneIds = new Map<string, number>();
-    for (const s of DEMO_SCENES) {
+    for (const s of [...DEMO_SCENES, ...REVIEW_SCENES]) {
       const owner = userIds.get(s.owner)!;
       const truck = s.truck ? truckIds.get(s.truck) : undefined;
       const doc = JSON.stringify(withTruckProfile(s.document, truck));
@@ -73,6 +75,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
         await trx.insertInto('scene_plan_details').values({ organisation_id: orgIds.get(s.org)!, scene_id: row.id, revision, details: json, author_id: owner, created_at: now }).execute();
       }
     }
+    await seedDemoReview(trx);
     await seedDemoLessons(trx, orgIds, userIds, sceneIds);
   });
   return true;

@@ -3,7 +3,7 @@ import type { Database } from '@/db/schema';
 import { getScene } from '@/db/repositories/scenes';
 import { findProfileVersion } from '@/db/repositories/equipment';
 import type { CurrentUser } from '@/lib/domain';
-import { analyzeLift, isLiftError, type LiftResult } from '@/lib/lift';
+import { analyzeLift, isLiftError, type LiftInputIn, type LiftResult } from '@/lib/lift';
 import { ENGINE_VERSION } from '@/lib/lift/version';
 import { parseSceneDocument } from '@/lib/scene/parse';
 import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
@@ -23,7 +23,7 @@ export interface SavedAnalysisMeta {
 }
 
 export type SavedAnalysis =
-  | { ok: true; meta: SavedAnalysisMeta; result: LiftResult; names: Record<string, string> }
+  | { ok: true; meta: SavedAnalysisMeta; result: LiftResult; names: Record<string, string>; input: LiftInputIn }
   /** Why there is nothing to compute: an unfinished sketch, a truck setup fault, or an engine refusal. */
   | { ok: false; meta: SavedAnalysisMeta; code: string; message: string; field?: string };
 
@@ -63,7 +63,7 @@ export async function computeDocument(
   const lift = sceneToLiftInput(doc, model);
   if (!lift.ok) return { ok: false, meta: withPin, code: lift.problem.kind, message: lift.problem.message, ...(lift.problem.field ? { field: lift.problem.field } : {}) };
   try {
-    return { ok: true, meta: withPin, result: analyzeLift(lift.input), names: lift.names };
+    return { ok: true, meta: withPin, result: analyzeLift(lift.input), names: lift.names, input: lift.input };
   } catch (e) {
     if (isLiftError(e)) return { ok: false, meta: withPin, code: e.code, message: e.message };
     throw e;

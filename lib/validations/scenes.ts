@@ -21,7 +21,7 @@ export const sceneDocument = z
   .refine((d) => typeof d !== 'object' || JSON.stringify(d).length <= MAX_DOCUMENT_CHARS, 'Document is larger than 1.5 MB')
   .pipe(storedSceneDocumentSchema);
 
-export const sceneStatus = z.enum(SCENE_STATUSES as [string, ...string[]]) as z.ZodType<(typeof SCENE_STATUSES)[number]>;
+export const sceneStatus = z.enum(SCENE_STATUSES);
 
 /** Where the job is (searchable in the list), and free notes. */
 export const sceneLocation = z.string().trim().max(200, 'Location can be at most 200 characters').nullable();

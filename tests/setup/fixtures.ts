@@ -9,6 +9,7 @@ import { HR4_SPEC } from '@/db/seed/demo-trucks';
 import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { sniffImage } from '@/lib/image-sniff';
 import { makePng } from '@/tests/fixtures/images';
+import { submitPlan } from '@/lib/server/review';
 
 /**
  * Test-only additions to the demo scenario, so every access rule has something to bite on: a second
@@ -22,6 +23,7 @@ export const TITLES = {
   peerDraft: 'Peer draft: flatbed off the shoulder, Gorse Lane',
   peerApproved: 'Peer approved: bus lifted clear of the ditch, Fenwick Hill',
   deleted: 'Deleted: cement mixer at the quarry gate',
+  ownSubmitted: 'Submitted: wheel loader off the verge, Brock Road',
 } as const;
 export const TRUCKS = { harrow: 'HR-7', cobalt: 'CF-2', retired: 'HR-1' } as const;
 export const LESSONS = { harrow: 'Harrow lesson: reading tipping lines', cobalt: 'Cobalt lesson: embankment pulls' } as const;
@@ -44,6 +46,12 @@ export async function addAccessFixtures(db: DB): Promise<void> {
   await softDeleteScene(db, await asCurrentUser(db, operator.id), gone.id);
   const retired = await createEquipmentProfile(db, harrow.id, { kind: 'truck', name: '25-ton wrecker (example values, retired)', unitNumber: TRUCKS.retired, spec: HR4_SPEC });
   await retireEquipmentProfile(db, harrow.id, retired.id);
+  // A plan of the operator's awaiting review (the coil transfer's sketch), submitted through the service.
+  const draft = await db.selectFrom('scenes').select('document').where('title', '=', TITLES.ownDraft).executeTakeFirstOrThrow();
+  const op = await asCurrentUser(db, operator.id);
+  const submitted = await createScene(db, op, { title: TITLES.ownSubmitted, document: draft.document });
+  const out = await submitPlan(db, op, submitted.id, 1);
+  if (out.status !== 200) throw new Error(`fixture submit failed: ${JSON.stringify(out.body)}`);
   // A lesson in each organisation (the Cobalt one is written directly: its scene is not in a training set).
   const trainer = await db.selectFrom('users').select('id').where('email', '=', 'trainer@harrow.example').executeTakeFirstOrThrow();
   const reefer = await sceneIdByTitle(TITLES.ownApproved, db);

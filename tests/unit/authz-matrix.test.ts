@@ -20,6 +20,15 @@ import * as users from '@/app/api/users/route';
 import * as userOne from '@/app/api/users/[id]/route';
 import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
+import * as submit from '@/app/api/scenes/[id]/submit/route';
+import * as withdraw from '@/app/api/scenes/[id]/withdraw/route';
+import * as decision from '@/app/api/scenes/[id]/decision/route';
+import * as newRevision from '@/app/api/scenes/[id]/new-revision/route';
+import * as comments from '@/app/api/scenes/[id]/comments/route';
+import * as commentOne from '@/app/api/scenes/[id]/comments/[commentId]/route';
+import * as notifications from '@/app/api/notifications/route';
+import * as notificationsRead from '@/app/api/notifications/read/route';
+import { REVIEW_TITLES } from '@/db/seed/demo-review-scenes';
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
 import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
 import * as trainingCopy from '@/app/api/scenes/[id]/training-copy/route';
@@ -97,6 +106,13 @@ const targets: Record<string, TargetResolver> = {
   'Harrow: draft’s image': imageTarget(TITLES.ownDraft),
   'Cobalt: scene’s image': imageTarget(TITLES.otherOrg),
   'Cobalt: sling': slingTarget('CF-RS-01'),
+  'Harrow: operator’s submitted': sceneTarget(TITLES.ownSubmitted),
+  'Harrow: peer’s submitted beyond a hard limit': sceneTarget(REVIEW_TITLES.beyond),
+  'Harrow: pinned comment': async () => {
+    const id = await sceneIdByTitle(REVIEW_TITLES.awaiting);
+    const c = await getDb().selectFrom('scene_comments').select('id').where('scene_id', '=', id).executeTakeFirstOrThrow();
+    return { id: String(id), commentId: String(c.id) };
+  },
   'Harrow: lesson': lessonTarget(LESSONS.harrow),
   'Cobalt: lesson': lessonTarget(LESSONS.cobalt),
   'Harrow: training scene': async () => ({ sceneId: await sceneIdByTitle(TITLES.ownApproved) }),
@@ -141,7 +157,8 @@ const routes: MatrixRoute[] = [
     body: (t) => ({ revision: t.revision, title: 'Matrix: renamed' }),
     expect: {
       'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
-      'Harrow: operator’s approved': [401, 200, 403, 403, 403, 404],
+      'Harrow: operator’s approved': [401, 409, 403, 403, 403, 404],
+      'Harrow: operator’s submitted': [401, 409, 403, 403, 403, 404],
       'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
       'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
       'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
@@ -390,6 +407,83 @@ const routes: MatrixRoute[] = [
       'unknown id': [401, 404, 403, 403, 404, 404],
     },
   },
+  // ── the review desk ────────────────────────────────────────────────────
+  {
+    method: 'POST', path: '/api/scenes/[id]/submit', handler: submit.POST, writes: ['scenes', 'scene_submissions', 'audit_log', 'notifications', 'mail_outbox'],
+    body: (t) => ({ revision: t.revision }),
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
+      'Harrow: operator’s approved': [401, 409, 403, 403, 403, 404],
+      'Harrow: operator’s submitted': [401, 409, 403, 403, 403, 404],
+      'Harrow: peer’s draft': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Harrow: deleted scene': [401, 404, 403, 403, 403, 404],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
+  {
+    method: 'POST', path: '/api/scenes/[id]/withdraw', handler: withdraw.POST, writes: ['scenes', 'scene_submissions', 'audit_log'],
+    expect: {
+      'Harrow: operator’s submitted': [401, 200, 403, 403, 403, 404],
+      'Harrow: operator’s draft': [401, 409, 403, 403, 403, 404],
+      'Harrow: peer’s submitted beyond a hard limit': [401, 404, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 409],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
+  {
+    method: 'POST', path: '/api/scenes/[id]/decision', handler: decision.POST, writes: ['scenes', 'scene_submissions', 'audit_log', 'notifications', 'mail_outbox'],
+    body: (t) => ({ decision: 'approve', revision: t.revision, conditions: 'Matrix condition' }),
+    expect: {
+      'Harrow: operator’s submitted': [401, 403, 200, 403, 200, 403],
+      'Harrow: operator’s draft': [401, 403, 409, 403, 409, 403],
+      'Harrow: peer’s submitted beyond a hard limit': [401, 403, 422, 403, 422, 403],
+      'Harrow: deleted scene': [401, 403, 404, 403, 404, 403],
+      'Cobalt: scene': [401, 403, 404, 403, 404, 403],
+      'unknown id': [401, 403, 404, 403, 404, 403],
+    },
+  },
+  {
+    method: 'POST', path: '/api/scenes/[id]/new-revision', handler: newRevision.POST, writes: ['scenes', 'scene_revisions', 'audit_log'],
+    expect: {
+      'Harrow: operator’s approved': [401, 200, 403, 403, 403, 404],
+      'Harrow: operator’s draft': [401, 409, 403, 403, 403, 404],
+      'Harrow: peer’s approved': [401, 403, 403, 403, 403, 404],
+      'Cobalt: scene': [401, 404, 403, 403, 403, 409],
+      'unknown id': [401, 404, 403, 403, 403, 404],
+    },
+  },
+  {
+    method: 'GET', path: '/api/scenes/[id]/comments', handler: comments.GET, checkId: false,
+    expect: {
+      'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
+      'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'Cobalt: scene': [401, 404, 404, 404, 404, 200],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    // Cobalt has no supervisor, so its operator's comment notifies nobody: left out, as writes differ.
+    method: 'POST', path: '/api/scenes/[id]/comments', handler: comments.POST, writes: ['scene_comments', 'audit_log', 'notifications', 'mail_outbox'],
+    body: () => ({ body: 'Matrix comment', anchor: { x: 1, y: 1 } }),
+    expect: {
+      'Harrow: operator’s draft': [401, 201, 201, 403, 201, 404],
+      'Harrow: peer’s approved': [401, 403, 201, 403, 201, 404],
+      'Harrow: peer’s draft': [401, 404, 201, 403, 201, 404],
+      'Harrow: deleted scene': [401, 404, 404, 404, 404, 404],
+      'unknown id': [401, 404, 404, 404, 404, 404],
+    },
+  },
+  {
+    method: 'PATCH', path: '/api/scenes/[id]/comments/[commentId]', handler: commentOne.PATCH, writes: ['scene_comments', 'audit_log'],
+    params: (t) => ({ id: t.id!, commentId: String(t.commentId) }),
+    body: () => ({ resolved: true }),
+    expect: { 'Harrow: pinned comment': [401, 404, 200, 403, 200, 404] },
+  },
+  { method: 'GET', path: '/api/notifications', handler: notifications.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
+  { method: 'POST', path: '/api/notifications/read', handler: notificationsRead.POST, body: () => ({ ids: [] }), expect: { '-': [401, 200, 200, 200, 200, 200] } },
   // ── lessons ─────────────────────────────────────────────────────────────
   { method: 'GET', path: '/api/lessons', handler: lessons.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {

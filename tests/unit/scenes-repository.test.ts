@@ -107,7 +107,14 @@ describe('listScenes and getScene', () => {
     const supMade = await createScene(db, sup, { title: 'Draft written by the supervisor', document: doc(1) });
     const titles = async (u: CurrentUser) => (await listScenes(db, u, { pageSize: 50 })).items.map((i) => i.title).sort();
     expect(await titles(op)).toEqual(['Coil transfer, Route 9 weigh station', 'Overturned reefer trailer, Mill Creek on-ramp']);
-    expect(await titles(sup)).toEqual(['Coil transfer, Route 9 weigh station', 'Draft written by the supervisor', 'Overturned reefer trailer, Mill Creek on-ramp']);
+    expect(await titles(sup)).toEqual([
+      'Coil transfer, Route 9 weigh station',
+      'Draft written by the supervisor',
+      'Loaded livestock trailer on its side, Pell Lane',
+      'Overturned reefer trailer, Mill Creek on-ramp',
+      'Pipe bundle onto the low-loader, Station Road yard',
+      'Tipped grain trailer, Kestrel Lane',
+    ]);
     expect(await titles(other)).toEqual(['Box truck up the embankment, Quarry Road']);
     expect(await getScene(db, op, supMade.id)).toBeUndefined();
     await db.updateTable('scenes').set({ status: 'approved' }).where('id', '=', supMade.id).execute();

@@ -46,7 +46,7 @@ describe('users', () => {
     const list = await listUsers(db, cobalt);
     expect(list.map((u) => u.email)).toEqual(['operator@cobalt.example']);
     expect(Object.keys(list[0])).not.toContain('password_hash');
-    expect((await listUsers(db, harrow)).map((u) => u.role).sort()).toEqual(['admin', 'operator', 'supervisor', 'trainer']);
+    expect((await listUsers(db, harrow)).map((u) => u.role).sort()).toEqual(['admin', 'operator', 'operator', 'supervisor', 'trainer']);
   });
 
   it('finds a user by id with the organisation name, defaults to imperial and active', async () => {
