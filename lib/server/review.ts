@@ -1,3 +1,4 @@
+import { keepRevision } from '@/db/repositories/revision-storage';
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import { inTransaction } from '@/db/transaction';
@@ -54,6 +55,8 @@ export async function submitPlan(db: Db, user: CurrentUser, id: number, revision
   const out = await inTransaction(db, async (trx) => {
     if (!(await moveSceneStatus(trx, user.organisationId, id, { from: ['draft', 'returned'], to: 'submitted', revision }))) return null;
     const submissionId = await insertSubmission(trx, { organisationId: user.organisationId, sceneId: id, revision, submittedBy: user.id, engineVersion: a.meta.engineVersion, figures: figures as unknown as Record<string, unknown>, checks: a.result.checks });
+    // A submitted revision is a full snapshot that revision thinning never removes.
+    await keepRevision(trx, id, revision);
     await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: id, action: 'scene.submit', detail: { revision, submissionId, engineVersion: a.meta.engineVersion } });
     await notifyPeople(trx, {
       organisationId: user.organisationId, sceneId: id, kind: 'submitted', path: `/scenes/${id}/review`,
