@@ -15,6 +15,7 @@ import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { describeAudit } from '@/components/scenes/audit-words';
 import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
+import { mayEditScene } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scene details' };
 
@@ -35,7 +36,7 @@ export default async function SceneDetailsPage({ params }: Props) {
     listSceneAudit(db, user.organisationId, scene.id),
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
-  const canRename = user.role === 'operator' && scene.ownerId === user.id;
+  const canRename = mayEditScene(user, scene);
 
   return (
     <>
