@@ -1,5 +1,5 @@
 'use client';
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useState } from 'react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useStore } from 'zustand';
@@ -118,7 +118,7 @@ export function ReplayRoom(props: ReplayRoomProps) {
         <div className="flex h-full flex-col bg-[#0B1218] text-[#F7F4EE]" data-testid="presenter">
           <div className="flex min-h-0 flex-1">
             <div className="relative min-w-0 flex-[3] bg-paper">
-              <ReplayPlan ghost={ghost} />
+              <ReplayPlan ghost={ghost} hideResults={hidden} />
             </div>
             <aside className="flex w-[40%] max-w-[760px] flex-col gap-4 overflow-y-auto p-6">
               <h1 className="text-[30px] font-bold leading-tight">
