@@ -39,10 +39,10 @@ test('the operator downloads the lift plan PDF and the drawing from the editor, 
   await expect(page).toHaveURL(new RegExp(`/scenes/${id}/plan$`));
   await expect(page.getByLabel('Lift director')).toHaveValue('Mitch Varga');
   await screens(page, 'plan-details');
-  await page.getByLabel('Customer').fill('Harbour Freight Lines (demo)');
+  await page.getByLabel('Customer').fill('Larkspur Haulage (demo)');
   await page.getByRole('button', { name: 'Save plan details' }).click();
   await expect(page.getByText(/Saved as revision \d+/)).toBeVisible({ timeout: 30_000 });
   const saved = await (await page.request.get(`/api/scenes/${id}/details`)).json();
-  expect(saved.details.job.customer).toBe('Harbour Freight Lines (demo)');
+  expect(saved.details.job.customer).toBe('Larkspur Haulage (demo)');
   await expect(page.getByTestId('download-plan-pdf')).toHaveAttribute('href', `/api/scenes/${id}/plan.pdf`);
 });

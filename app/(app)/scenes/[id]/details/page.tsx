@@ -14,8 +14,8 @@ import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { describeAudit } from '@/components/scenes/audit-words';
-import { mayEditScene } from '@/lib/auth/permissions';
 import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
+import { mayEditScene } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scene details' };
 
