@@ -1,15 +1,16 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useSyncExternalStore } from 'react';
 import { formatWhen } from '@/components/scenes/format';
+
+const noSubscription = () => () => {};
 
 /**
  * A timestamp in the viewer's time zone. The server renders it in UTC (marked so), then the browser swaps in
  * local time after hydration; rendering local time on the server would mismatch the browser's.
  */
 export function LocalTime({ iso }: { iso: string }) {
-  const [local, setLocal] = useState<string | null>(null);
-  useEffect(() => setLocal(formatWhen(iso)), [iso]);
+  const local = useSyncExternalStore(noSubscription, () => formatWhen(iso), () => null);
   const utc = new Date(iso).toLocaleString('en-GB', { timeZone: 'UTC', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }) + ' UTC';
   return (
     <time dateTime={iso} className="whitespace-nowrap tabular-nums">

@@ -159,6 +159,40 @@ async function pass(extraArgs: string[], sceneId: number | null): Promise<Pass &
   }
 }
 
+/**
+ * The replay room on the same scene: the playback clock moved one degree per frame along the planned arc
+ * and back (360 frames), as playing at speed does, measured like the editor's scrub.
+ */
+async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frames: number[]; work: number[] }> {
+  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...ARGS, ...extraArgs] });
+  try {
+    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    await signIn(page);
+    await page.goto(`${base}/scenes/${sceneId}/replay`, { waitUntil: 'networkidle' });
+    await page.waitForFunction('!!window.__arclineReplay?.store.getState().analysis?.result', null, { timeout: 60_000 });
+    const script = (frames: number, timed: boolean) => `new Promise((resolve) => {
+      const r = window.__arclineReplay;
+      const span = r.playback.clock.arc.span;
+      const times = []; const work = [];
+      let i = 0; let last = performance.now();
+      const frame = (now) => {
+        times.push(now - last); last = now;
+        if (i++ >= ${frames}) return resolve({ frames: times.slice(1), work });
+        const k = i % (2 * Math.floor(span));
+        const t0 = performance.now();
+        window.__arclineReplay.playback.seek(k <= span ? k : 2 * Math.floor(span) - k);
+        work.push(performance.now() - t0);
+        requestAnimationFrame(frame);
+      };
+      requestAnimationFrame(frame);
+    })`;
+    await page.evaluate(script(180, false));
+    return (await page.evaluate(script(360, true))) as { frames: number[]; work: number[] };
+  } finally {
+    await browser.close();
+  }
+}
+
 const ms = (x: number) => `${x.toFixed(2)} ms`;
 
 try {
@@ -172,6 +206,12 @@ try {
   console.log(`  unpaced (frame-rate limit off): frame time median ${ms(pct(unpaced.frames, 50))}, p95 ${ms(p95)}; idle page median ${ms(pct(unpaced.idle, 50))} (target p95 < 16.7 ms: ${p95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / p95).toFixed(1)}× headroom)`);
   console.log(`  script work per frame (store update + analysis snapshot + React render, synchronous): median ${ms(pct(paced.work, 50))}, p95 ${ms(pct(paced.work, 95))}`);
   console.log(`  JS loaded by the editor page, compressed on the wire: ${(paced.jsBytes / 1024).toFixed(1)} KiB (${paced.jsBytes} bytes)`);
+  const replay = await replayPass(UNPACED, paced.sceneId);
+  const rp95 = pct(replay.frames, 95);
+  console.log(`Replay room, same scene, playback clock 1° per frame along the planned arc and back (${replay.frames.length} frames):`);
+  console.log(`  unpaced (frame-rate limit off): frame time median ${ms(pct(replay.frames, 50))}, p95 ${ms(rp95)} (target p95 < 16.7 ms: ${rp95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / rp95).toFixed(1)}× headroom)`);
+  console.log(`  script work per frame (clock + store + analysis snapshot + React render): median ${ms(pct(replay.work, 50))}, p95 ${ms(pct(replay.work, 95))}`);
+  console.log(`Summary, unpaced p95 with 300 obstacles: editor scrub ${ms(p95)}, replay ${ms(rp95)} (target 16.7 ms)`);
 } finally {
   if (server.pid) process.kill(-server.pid, 'SIGTERM');
 }

@@ -1,4 +1,4 @@
-import { analyzePrepared, analyzeAtSlew, isLiftError, prepareLift, type LiftResult, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
+import { analyzePrepared, analyzeAtSlew, isLiftError, prepareLift, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckObject } from '@/lib/scene/objects';
 import type { EditorStore } from '../store/editor-store';

@@ -1,5 +1,5 @@
 'use client';
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { kgToLb, type UnitSystem } from '@/lib/units';
 import { formatNumber } from '@/lib/format/number';
 import { parseLength, parseMass, parseNumber } from '@/lib/format/parse';
@@ -18,10 +18,13 @@ interface FieldProps<T> {
 function ParsedField<T>({ label, value, onCommit, disabled, hint, testId, format, parse, suffix }: FieldProps<T> & { format(v: T): string; parse(s: string): T | null; suffix?: string }) {
   const [text, setText] = useState(format(value));
   const [bad, setBad] = useState(false);
-  useEffect(() => {
+  // A new value from outside (undo, another field) replaces what is typed: adjusted while rendering.
+  const [shown, setShown] = useState(value);
+  if (!Object.is(shown, value)) {
+    setShown(value);
     setText(format(value));
     setBad(false);
-  }, [value]); // eslint-disable-line react-hooks/exhaustive-deps
+  }
   const commit = () => {
     const v = parse(text);
     if (v === null) return setBad(true);
@@ -121,7 +124,11 @@ export function SelectField<T extends string>({ label, value, options, onCommit,
 
 export function TextField({ label, value, onCommit, disabled, multiline }: FieldProps<string> & { multiline?: boolean }) {
   const [text, setText] = useState(value);
-  useEffect(() => setText(value), [value]);
+  const [shown, setShown] = useState(value);
+  if (shown !== value) {
+    setShown(value);
+    setText(value);
+  }
   const id = `t-${label.replace(/\W+/g, '-').toLowerCase()}`;
   const common = { id, value: text, disabled, onChange: (e: React.ChangeEvent<HTMLInputElement | HTMLTextAreaElement>) => setText(e.target.value), onBlur: () => text !== value && onCommit(text), className: 'w-full rounded-md border border-paper-line bg-paper-raised px-2 py-2 text-sm' };
   return (

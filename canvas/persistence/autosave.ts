@@ -24,7 +24,7 @@ export interface AutosaveOptions<Doc> {
   now?: () => number;
 }
 
-export interface Autosaver<Doc> {
+export interface Autosaver {
   getState(): SaveState;
   subscribe(listener: (s: SaveState) => void): () => void;
   /** Restores a newer local draft if there is one, then starts watching the document. */
@@ -40,7 +40,7 @@ export interface Autosaver<Doc> {
   idle(): Promise<void>;
 }
 
-export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver<Doc> {
+export function createAutosaver<Doc>(o: AutosaveOptions<Doc>): Autosaver {
   const debounceMs = o.debounceMs ?? SAVE_DEBOUNCE_MS;
   const draftDebounceMs = o.draftDebounceMs ?? DRAFT_DEBOUNCE_MS;
   const now = o.now ?? Date.now;

@@ -1,14 +1,16 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useSyncExternalStore } from 'react';
 import { createPortal } from 'react-dom';
+
+const noSubscription = () => () => {};
 
 /**
  * Renders dialogs at the end of <body>, so they show even when the panel that opened them is hidden
  * (the editor's side panel is display:none on narrow screens until asked for).
  */
 export function BodyPortal({ children }: { children: React.ReactNode }) {
-  const [el, setEl] = useState<HTMLElement | null>(null);
-  useEffect(() => setEl(document.body), []);
-  return el ? createPortal(children, el) : null;
+  // No <body> to portal into on the server: render nothing there and on the hydrating pass.
+  const inBrowser = useSyncExternalStore(noSubscription, () => true, () => false);
+  return inBrowser ? createPortal(children, document.body) : null;
 }

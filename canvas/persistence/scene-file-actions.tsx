@@ -48,6 +48,7 @@ export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canIm
       if (!parsed.ok) return setIssues(parsed.issues);
       const scene = await createScene(fetch, parsed.title, parsed.document);
       if (onImported) onImported(scene.id);
+      // eslint-disable-next-line @next/next/no-location-assign-relative-destination -- a full load on purpose: the editor builds its store once per page
       else window.location.assign(`/scenes/${scene.id}`);
     } catch (e) {
       setIssues([{ path: 'file', message: (e as Error).message }]);

@@ -39,6 +39,7 @@ export function SceneSaveBar<Doc>({ store, sceneId, title, server, canEdit, canI
           onKeepMine={async () => {
             const { id } = await saver.keepMineAsCopy();
             saver.stop();
+            // eslint-disable-next-line @next/next/no-location-assign-relative-destination -- a full load on purpose: the editor builds its store once per page
             window.location.assign(`/scenes/${id}`);
           }}
         />

@@ -17,8 +17,8 @@ export interface UseAutosaveOptions {
 const idleState = (revision: number): SaveState => ({ status: 'saved', revision, dirty: false, lastSavedAt: null });
 
 /** Starts autosave for the editor store on mount and stops it on unmount. */
-export function useAutosave<Doc>(store: EditorStoreLike<Doc>, opts: UseAutosaveOptions): { state: SaveState; saver: Autosaver<Doc> | null } {
-  const [saver, setSaver] = useState<Autosaver<Doc> | null>(null);
+export function useAutosave<Doc>(store: EditorStoreLike<Doc>, opts: UseAutosaveOptions): { state: SaveState; saver: Autosaver | null } {
+  const [saver, setSaver] = useState<Autosaver | null>(null);
   const { sceneId, title, enabled } = opts;
   const { revision, updatedAt } = opts.server;
 
@@ -44,6 +44,8 @@ export function useAutosave<Doc>(store: EditorStoreLike<Doc>, opts: UseAutosaveO
     };
     document.addEventListener('visibilitychange', onHide);
     void s.start();
+    // The saver is an outside system this effect creates and disposes of; the page reads it from state.
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- publishing the effect's own resource, not syncing props
     setSaver(s);
     return () => {
       document.removeEventListener('visibilitychange', onHide);

@@ -12,7 +12,9 @@ import { zoomAround } from '../editor/camera';
 import { useFontGeneration } from '../view/use-font-generation';
 import type { Editor } from '../editor/editor';
 import type { EditorStore } from '../store/editor-store';
-import type { TruckObject } from '@/lib/scene/objects';
+import type { LoadObject, TruckObject } from '@/lib/scene/objects';
+import { LoadHangingShape } from '../shapes/load/load-shape';
+import { hookSitePoint } from '@/lib/scene/geometry/truck';
 
 /**
  * The replay's plan, drawn with the editor's own shapes. Layers by how often they change: the grid and
@@ -20,7 +22,7 @@ import type { TruckObject } from '@/lib/scene/objects';
  * the view moves; each frame redraws only the live layer (boom, hanging load, overlays, labels). A
  * compared revision is drawn faint under the shown one, in its own layer.
  */
-export function ReplayPlan({ ghost }: { ghost: { store: EditorStore; editor: Editor } | null }) {
+export function ReplayPlan({ ghost, hideResults = false }: { ghost: { store: EditorStore; editor: Editor } | null; hideResults?: boolean }) {
   const { store } = useEditorContext();
   const ref = useRef<HTMLDivElement>(null);
   const camera = useEditorState((s) => s.camera);
@@ -79,14 +81,39 @@ export function ReplayPlan({ ghost }: { ghost: { store: EditorStore; editor: Edi
             <SceneLayer />
           </WorldGroup>
         </Layer>
-        <Layer key={`live-${fonts}`} listening={false}>
-          <WorldGroup>
-            <LiveLayer />
-          </WorldGroup>
-          <LabelLayer />
-        </Layer>
+        {hideResults ? (
+          // While a class predicts, only the boom and the load move: no tipping lines, worst-case ray or labels.
+          <Layer listening={false}>
+            <WorldGroup>
+              <MovingOnly />
+            </WorldGroup>
+          </Layer>
+        ) : (
+          <Layer key={`live-${fonts}`} listening={false}>
+            <WorldGroup>
+              <LiveLayer />
+            </WorldGroup>
+            <LabelLayer />
+          </Layer>
+        )}
       </Stage>
     </div>
+  );
+}
+
+function MovingOnly() {
+  const doc = useEditorState((s) => s.document);
+  const model = useEditorState((s) => s.truck);
+  const slew = useEditorState((s) => s.scrubSlew);
+  const pxPerM = useEditorState((s) => s.camera.pxPerM);
+  const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck');
+  const load = doc.objects.find((o): o is LoadObject => o.kind === 'load');
+  if (!truck || !model || slew === null) return null;
+  return (
+    <>
+      <BoomShape truck={truck} model={model} slew={slew} pxPerM={pxPerM} />
+      {load && <LoadHangingShape load={load} at={hookSitePoint(truck, model, slew)} rotation={load.rotation + (slew - doc.swing.from)} />}
+    </>
   );
 }
 

@@ -1,5 +1,5 @@
 'use client';
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useState } from 'react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useStore } from 'zustand';
@@ -118,13 +118,15 @@ export function ReplayRoom(props: ReplayRoomProps) {
         <div className="flex h-full flex-col bg-[#0B1218] text-[#F7F4EE]" data-testid="presenter">
           <div className="flex min-h-0 flex-1">
             <div className="relative min-w-0 flex-[3] bg-paper">
-              <ReplayPlan ghost={ghost} />
+              <ReplayPlan ghost={ghost} hideResults={hidden} />
             </div>
             <aside className="flex w-[40%] max-w-[760px] flex-col gap-4 overflow-y-auto p-6">
-              <h1 className="text-[30px] font-bold leading-tight">{props.scene.title}</h1>
+              <h1 className="text-[30px] font-bold leading-tight">
+                {props.scene.title} <span className="font-normal opacity-80">· revision {props.revision}</span>
+              </h1>
               {props.lesson && <LessonBar lesson={props.lesson} present />}
               <FiguresPanel big hidden={hidden} />
-              {!hidden && chart}
+              {!hidden && <div className="shrink-0">{chart}</div>}
               <label className="flex items-center gap-3 text-[24px] font-semibold">
                 <input type="checkbox" className="h-7 w-7 accent-[#F2A900]" checked={hidden} onChange={(e) => setHidden(e.target.checked)} data-testid="hide-results" />
                 Hide results
@@ -174,7 +176,7 @@ export function ReplayRoom(props: ReplayRoomProps) {
           <aside className="flex w-[380px] shrink-0 flex-col gap-3 overflow-y-auto border-l-2 border-ink bg-paper p-3">
             {props.lesson && <LessonBar lesson={props.lesson} present={false} />}
             <FiguresPanel />
-            {chart}
+            <div className="shrink-0">{chart}</div>
             {sandbox && (
               <WhatIfPanel original={props.document} whatIf={whatIf} onChange={setWhatIf} units={props.units} onSave={props.canSaveTraining ? save.save : null} saveState={save.state} />
             )}

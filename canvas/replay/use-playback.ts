@@ -22,9 +22,9 @@ export interface Playback {
 export function usePlayback(store: EditorStore, degPerSecond: number | null): Playback {
   const swing = store.getState().document.swing;
   const make = () => createClock(arcOf(store.getState().document.swing), degPerSecond);
-  const ref = useRef<ClockState>(null as unknown as ClockState);
-  if (ref.current === null) ref.current = make();
-  const [clock, setClock] = useState(ref.current);
+  const [clock, setClock] = useState(make);
+  // The clock as of the last frame, for the animation loop's callbacks.
+  const ref = useRef<ClockState>(clock);
 
   const apply = useCallback(
     (next: ClockState) => {

@@ -69,7 +69,10 @@ export function LabelLayer() {
   }
   if (g) for (const it of analysisPillItems(g, at, units)) want(it);
 
+  // Labels keep the side they had last frame (no flicker while dragging): a cache across frames, not render state.
+  // eslint-disable-next-line react-hooks/refs -- read and written only to carry the previous frame's placement
   const { placed, choice } = placeLabels(requests, vp, lastChoice.current);
+  // eslint-disable-next-line react-hooks/refs -- see above
   lastChoice.current = choice;
 
   return (

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { FieldFrame, controlClasses, describedBy } from '@/components/ui/field';
 import { cx } from '@/components/ui/cx';
 import { inToM, kgToLb, mToIn, type UnitSystem } from '@/lib/units';
@@ -56,9 +56,13 @@ export function UnitInput({ label, quantity, units, value, onChange, error, hint
   const id = useId();
   const [text, setText] = useState(() => displayValue(quantity, value, units));
   const [focused, setFocused] = useState(false);
-  useEffect(() => {
+  // Out of the field, a new value, unit system or leaving the field shows the value afresh (adjusted while rendering).
+  const key = focused ? 'typing' : `${quantity}|${units}|${value}`;
+  const [lastKey, setLastKey] = useState(key);
+  if (key !== lastKey) {
+    setLastKey(key);
     if (!focused) setText(displayValue(quantity, value, units));
-  }, [value, units, quantity, focused]);
+  }
   const unit = unitLabel(quantity, units);
   const input = (
     <div className="relative">

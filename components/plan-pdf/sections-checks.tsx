@@ -19,7 +19,7 @@ export function StabilitySection({ d }: { d: PlanData }) {
     <View>
       <Text style={s.h2} minPresenceAhead={60}>Stability</Text>
       <Text style={s.p}>
-        Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan's limit is {limit} %
+        Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan’s limit is {limit} %
         {w.percentOfTipping <= limit ? `, a margin of ${(limit - w.percentOfTipping).toFixed(1)} points.` : `; ${(w.percentOfTipping - limit).toFixed(1)} points over it.`}
         {w.tippingLoad !== null ? ` A hook load of ${dualMass(w.tippingLoad, u)} would reach the tipping point there.` : ''}
       </Text>
@@ -44,7 +44,7 @@ export function ClearanceSection({ d }: { d: PlanData }) {
   return (
     <View>
       <Text style={s.h2} minPresenceAhead={60}>Clearances</Text>
-      <Text style={s.p}>Plan's clearance limit: {dualLength(limit, u)} beside or above each part and obstacle.</Text>
+      <Text style={s.p}>Plan’s clearance limit: {dualLength(limit, u)} beside or above each part and obstacle.</Text>
       <Table
         columns={[{ title: 'Object', flex: 3 }, { title: 'Beside (plan gap)', flex: 2.5 }, { title: 'Above its top', flex: 2.5 }, { title: 'Nearest at slew', flex: 1.5 }, { title: 'Against limit', flex: 1.6 }]}
         rows={r.clearances.map((c) => [

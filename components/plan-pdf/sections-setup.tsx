@@ -100,7 +100,7 @@ export function GroundSection({ d }: { d: PlanData }) {
     <View>
       <Text style={s.h2} minPresenceAhead={60}>Ground</Text>
       <Text style={s.p}>
-        Allowable ground pressure {dualPressure(soil.allowable, u)}, {source}. Each support's largest reaction over the swing:
+        Allowable ground pressure {dualPressure(soil.allowable, u)}, {source}. Each support’s largest reaction over the swing:
       </Text>
       <Table
         columns={[

@@ -97,6 +97,7 @@ export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: b
     ],
     [units, today],
   );
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns fresh functions by design; we do not run the React Compiler
   const table = useReactTable({ data: q.data?.items ?? [], columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
 
   return (

@@ -33,10 +33,12 @@ export function RenameSceneForm({ sceneId, title, revision }: Props) {
   const { register, handleSubmit, reset, formState } = useForm({ resolver: zodResolver(formSchema), defaultValues: { title } });
 
   // A reload (router.refresh) brings new props: start again from what the server has now.
-  useEffect(() => {
+  const [seen, setSeen] = useState(revision);
+  if (seen !== revision) {
+    setSeen(revision);
     setBase(revision);
-    reset({ title });
-  }, [revision, title, reset]);
+  }
+  useEffect(() => reset({ title }), [revision, title, reset]);
 
   const save = useMutation({
     mutationFn: (body: z.infer<typeof updateSceneSchema>) => fetchJson<Scene>(`/api/scenes/${sceneId}`, { method: 'PUT', body: JSON.stringify(body) }),

@@ -82,7 +82,8 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
   const q = useDebounced(qInput.trim(), 250);
   const status = (search.get('status') ?? '') as SceneStatus | '';
   const sortId = SORTS.includes(search.get('sort') ?? '') ? search.get('sort')! : 'updatedAt';
-  const sorting: SortingState = [{ id: sortId, desc: search.get('dir') !== 'asc' }];
+  const desc = search.get('dir') !== 'asc';
+  const sorting: SortingState = [{ id: sortId, desc }];
   const after = search.get('after');
   const before = search.get('before');
 
@@ -113,14 +114,14 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
   };
 
   const params = useMemo(() => {
-    const p = new URLSearchParams({ pageSize: String(PAGE_SIZE), sort: sortId, dir: sorting[0].desc ? 'desc' : 'asc' });
+    const p = new URLSearchParams({ pageSize: String(PAGE_SIZE), sort: sortId, dir: desc ? 'desc' : 'asc' });
     const sq = search.get('q');
     if (sq) p.set('q', sq);
     if (status) p.set('status', status);
     if (after) p.set('after', after);
     else if (before) p.set('before', before);
     return p.toString();
-  }, [search, sortId, sorting, status, after, before]);
+  }, [search, sortId, desc, status, after, before]);
 
   const query = useQuery({
     queryKey: ['scenes', params],
@@ -129,6 +130,7 @@ export function ScenesTable({ canCreate }: { canCreate: boolean }) {
   });
 
   const data = query.data;
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns fresh functions by design; we do not run the React Compiler
   const table = useReactTable({
     data: data?.items ?? [],
     columns,

@@ -4,6 +4,7 @@ import type { CurrentUser } from '@/lib/domain';
 import { Wordmark } from '@/components/logo';
 import { SignOutButton } from '@/components/sign-out-button';
 import { AppNav, type NavItem } from './app-nav';
+import { may } from '@/lib/auth/permissions';
 
 const ROLE_LABEL: Record<CurrentUser['role'], string> = {
   operator: 'Operator',
@@ -21,7 +22,7 @@ export function navItemsFor(user: CurrentUser): NavItem[] {
     { href: '/rigging', label: 'Rigging', icon: 'rigging' },
     { href: '/lessons', label: 'Lessons', icon: 'scenes' },
   ];
-  if (user.role === 'admin') items.push({ href: '/admin/users', label: 'Users', icon: 'users' });
+  if (may(user, 'manageUsers')) items.push({ href: '/admin/users', label: 'Users', icon: 'users' });
   items.push({ href: '/settings', label: 'Settings', icon: 'settings' });
   return items;
 }

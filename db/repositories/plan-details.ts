@@ -46,7 +46,9 @@ export async function revisionExists(db: Db, sceneId: number, revision: number):
  */
 export async function savePlanDetails(db: Db, user: CurrentUser, sceneId: number, baseRevision: number, details: PlanDetails): Promise<UpdateOutcome> {
   return inTransaction(db, async (trx) => {
-    const outcome = await updateScene(trx, user, sceneId, { revision: baseRevision });
+    // The job's location is also the scene's searchable location (the list's full-text search covers it).
+    const location = details.job.location.trim() || undefined;
+    const outcome = await updateScene(trx, user, sceneId, { revision: baseRevision, ...(location !== undefined && { location: location.slice(0, 200) }) });
     if (outcome.kind !== 'ok') return outcome;
     await trx
       .insertInto('scene_plan_details')

@@ -1,7 +1,7 @@
 import { sql, type Expression, type Kysely, type SqlBool } from 'kysely';
 import type { Database } from '../schema';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
-import { canReadAllScenes } from '@/lib/auth/roles';
+import { mayReadAllScenes } from '@/lib/auth/permissions';
 
 type Db = Kysely<Database>;
 
@@ -93,7 +93,7 @@ function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
     .innerJoin('users', 'users.id', 'scenes.owner_id')
     .where('scenes.organisation_id', '=', user.organisationId)
     .where('scenes.deleted_at', 'is', null);
-  if (!canReadAllScenes(user.role)) {
+  if (!mayReadAllScenes(user)) {
     q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
   }
   if (opts.status) q = q.where('scenes.status', '=', opts.status);

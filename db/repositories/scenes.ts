@@ -1,7 +1,7 @@
 import type { Kysely } from 'kysely';
 import type { Database, SceneRow } from '../schema';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
-import { canReadAllScenes } from '@/lib/auth/roles';
+import { mayReadAllScenes } from '@/lib/auth/permissions';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
 import { compressedSnapshot } from './revision-storage';
@@ -50,7 +50,7 @@ function visibleTo(db: Db, user: CurrentUser) {
     .innerJoin('users', 'users.id', 'scenes.owner_id')
     .where('scenes.organisation_id', '=', user.organisationId)
     .where('scenes.deleted_at', 'is', null);
-  if (!canReadAllScenes(user.role)) {
+  if (!mayReadAllScenes(user)) {
     q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
   }
   return q;

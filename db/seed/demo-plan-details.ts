@@ -6,7 +6,7 @@ const checklist = (done: boolean) => STARTER_CHECKLIST.map((item) => ({ item, do
 
 export const DEMO_PLAN_DETAILS: Record<string, PlanDetailsIn> = {
   'Coil transfer, Route 9 weigh station': {
-    job: { customer: 'Tri-County Steel Haulers (demo)', reference: 'HR-2026-0417', location: 'Route 9 weigh station, westbound scale exit', when: '2026-12-03T06:30' },
+    job: { customer: 'Brindlewood Coil Carriers (demo)', reference: 'HR-2026-0417', location: 'Route 9 weigh station, westbound scale exit', when: '2026-12-03T06:30' },
     load: { description: 'Steel coil on a disabled flatbed, eye horizontal, 1.6 m across', weightSource: 'estimated', weightBasis: 'Outer 1.6 m, inner 0.6 m, width 0.9 m; steel 7850 kg/m³; 5 % allowed for banding and error' },
     people: { liftDirector: 'Mitch Varga', operator: 'Dana Okafor', spotter: 'Lee Marsh', signalPerson: 'Lee Marsh' },
     communication: { handSignals: true, radioChannel: 'Ch 4 (yard)', notes: 'Stop on any lost signal.' },

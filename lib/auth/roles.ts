@@ -17,15 +17,3 @@ export function assertRole(user: CurrentUser | null, roles?: readonly Role[]): C
   }
   return user;
 }
-
-/** Operators edit their own scenes; admins may delete scenes but not edit them (PUT /api/scenes/[id] agrees). */
-export const canEditScenes = (role: Role) => role === 'operator';
-export const canReadAllScenes = (role: Role) => role !== 'operator';
-
-/** Operators and admins manage rigging and record inspections; everyone in the organisation reads. */
-export const RIGGING_WRITERS = ['operator', 'admin'] as const satisfies readonly Role[];
-export const canManageRigging = (role: Role) => (RIGGING_WRITERS as readonly Role[]).includes(role);
-
-/** Trainers and admins build and edit lessons; everyone in the organisation reads them. */
-export const LESSON_WRITERS = ['trainer', 'admin'] as const satisfies readonly Role[];
-export const canWriteLessons = (role: Role) => (LESSON_WRITERS as readonly Role[]).includes(role);

@@ -1,6 +1,7 @@
 import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
 import { screens, signIn } from './helpers';
 import { makePng } from '../fixtures/images';
+import type { SceneDocument } from '@/lib/scene/schema';
 
 // Saving journeys: autosave and conflicts, offline edits, the site image, export and import.
 // Edits go through the live editor store (window.__arclineEditor) so these tests are about saving, not drawing.
@@ -16,7 +17,7 @@ async function newScene(request: APIRequestContext, title: string): Promise<numb
 async function sceneFromApi(request: APIRequestContext, id: number) {
   const res = await request.get(`/api/scenes/${id}`);
   expect(res.status()).toBe(200);
-  return (await res.json()) as { id: number; title: string; revision: number; equipmentProfileId: number | null; document: Record<string, any> };
+  return (await res.json()) as { id: number; title: string; revision: number; equipmentProfileId: number | null; document: SceneDocument };
 }
 
 async function openEditor(page: Page, id: number) {
@@ -82,8 +83,8 @@ test('a save that lost the race shows the choice; both choices do what they say'
   expect(copy.title).toBe('Conflict check, Dock 4 (my copy)');
   expect(copy.document.grid).toBe(0.75);
   // The copy records the truck's profile, like the original.
-  const truck = copy.document.objects.find((o: { kind: string }) => o.kind === 'truck');
-  expect(copy.equipmentProfileId).toBe(truck.profileId);
+  const truck = copy.document.objects.find((o) => o.kind === 'truck');
+  expect(copy.equipmentProfileId).toBe(truck?.kind === 'truck' ? truck.profileId : 'no truck in the copy');
   expect((await sceneFromApi(page.request, id)).document.grid).toBe(9.144);
   await other.context.close();
 });
@@ -173,6 +174,7 @@ test('upload a site image, set its scale from two points, opacity and lock', asy
 
   const saved = await sceneFromApi(page.request, id);
   const bg = saved.document.background;
+  if (!bg?.calibration) throw new Error('the saved scene has no calibrated background');
   // 40 ft = 12.192 m exactly (1 ft = 0.3048 m); over 320 px. Clicks land on whole screen pixels, so allow 1 %.
   expect(bg.metresPerPixel).toBeGreaterThan((12.192 / 320) * 0.99);
   expect(bg.metresPerPixel).toBeLessThan((12.192 / 320) * 1.01);

@@ -7,7 +7,7 @@ vi.mock('@/lib/auth/session-claims', () => ({ getSessionUserId: async () => sess
 import { getDb } from '@/db';
 import { ROLES, type Role } from '@/lib/domain';
 import { DEMO_PASSWORD } from '@/db/seed/demo-users';
-import { AccessError, assertRole, canEditScenes, canReadAllScenes } from '@/lib/auth/roles';
+import { AccessError, assertRole } from '@/lib/auth/roles';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 import { authOptions } from '@/lib/auth/options';
 import { freshSeededDb } from '@/tests/setup/db';
@@ -43,13 +43,6 @@ describe('assertRole', () => {
       else expect(() => assertRole(userWith(role), ['admin'])).toThrow(expect.objectContaining({ status: 403, message: expect.stringContaining(role) }));
     }
     expect(() => assertRole(userWith('trainer'), [])).toThrow(expect.objectContaining({ status: 403 }));
-  });
-});
-
-describe('scene permission helpers', () => {
-  it('match the rules: operators edit (their own) scenes; everyone but operators reads the whole organisation', () => {
-    expect(ROLES.filter(canEditScenes)).toEqual(['operator']);
-    expect(ROLES.filter(canReadAllScenes)).toEqual(['supervisor', 'trainer', 'admin']);
   });
 });
 

@@ -47,14 +47,17 @@ function fakeNetwork(online = true) {
 }
 
 /** A fake scenes API holding one scene, with the real revision rule: a PUT must carry the current revision. */
+/** What the editor sends in a save or a copy (GETs send nothing). */
+type SentBody = { revision?: number; title?: string; document?: unknown; equipmentProfileId?: number };
+
 function fakeServer(net: { isOnline(): boolean }) {
   const scene = { id: 5, title: 'Coil transfer', revision: 3, updatedAt: '2026-12-01T20:00:00.000Z', document: { version: 1, notes: [] } as Doc };
-  const calls: { method: string; url: string; body?: any }[] = [];
+  const calls: { method: string; url: string; body: SentBody }[] = [];
   let nextId = 40;
   const fetch = vi.fn(async (url: string, init?: RequestInit) => {
     const method = init?.method ?? 'GET';
     const body = init?.body ? JSON.parse(String(init.body)) : undefined;
-    calls.push({ method, url, body });
+    calls.push({ method, url, body: body ?? {} });
     if (!net.isOnline()) throw new TypeError('Failed to fetch');
     if (method === 'PUT') {
       if (body.revision !== scene.revision) return Response.json({ error: 'revision: stale', currentRevision: scene.revision }, { status: 409 });

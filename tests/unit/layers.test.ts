@@ -11,7 +11,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 const ROOT = path.resolve(__dirname, '../..');
 const CONFIG = path.join(ROOT, '.dependency-cruiser.cjs');
 const BIN = path.join(ROOT, 'node_modules/.bin/depcruise');
-export const SOURCE_DIRS = ['app', 'canvas', 'components', 'db', 'lib', 'migrations', 'scripts', 'types', 'proxy.ts'];
+const SOURCE_DIRS = ['app', 'canvas', 'components', 'db', 'lib', 'migrations', 'scripts', 'types', 'proxy.ts'];
 
 type Violation = { from: string; to: string; rule: { name: string }; cycle?: { name: string }[] };
 

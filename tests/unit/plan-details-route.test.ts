@@ -1,3 +1,4 @@
+import { getDb } from '@/db';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import { signInAs } from '@/tests/setup/auth-mock';
@@ -23,17 +24,20 @@ describe('plan details route', () => {
     expect(first.json.revision).toBe(1);
     expect((first.json.details as { people: { operator: string } }).people.operator).toBe('Dana Okafor');
 
-    const details = { ...emptyPlanDetails(), job: { customer: 'Harbour Freight Lines (demo)', reference: 'R-1', location: 'Pier 3', when: '2026-12-04T07:00' } };
+    const details = { ...emptyPlanDetails(), job: { customer: 'Larkspur Haulage (demo)', reference: 'R-1', location: 'Pier 3', when: '2026-12-04T07:00' } };
     const saved = await call({ handler: PUT, method: 'PUT', id: coil, body: { revision: 1, details } });
     expect(saved.status).toBe(200);
     expect(saved.json.revision).toBe(2);
+    // The job's location becomes the scene's searchable location.
+    const scene = await getDb().selectFrom('scenes').select('location').where('id', '=', Number(coil)).executeTakeFirstOrThrow();
+    expect(scene.location).toBe('Pier 3');
 
     // Revision 2 carries the new details; revision 1 still reads the details it was saved with.
     const now = await call({ handler: GET, method: 'GET', id: coil, query: 'revision=2' });
-    expect((now.json.details as { job: { customer: string } }).job.customer).toBe('Harbour Freight Lines (demo)');
+    expect((now.json.details as { job: { customer: string } }).job.customer).toBe('Larkspur Haulage (demo)');
     expect((now.json.details as { checklist: { item: string }[] }).checklist.map((c) => c.item)).toEqual([...STARTER_CHECKLIST]);
     const then = await call({ handler: GET, method: 'GET', id: coil, query: 'revision=1' });
-    expect((then.json.details as { job: { customer: string } }).job.customer).toBe('Tri-County Steel Haulers (demo)');
+    expect((then.json.details as { job: { customer: string } }).job.customer).toBe('Brindlewood Coil Carriers (demo)');
 
     // A save based on the old revision is refused.
     const stale = await call({ handler: PUT, method: 'PUT', id: coil, body: { revision: 1, details } });

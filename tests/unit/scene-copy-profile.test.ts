@@ -11,7 +11,7 @@ const NO_TRUCK: Doc = { version: 2, objects: [{ id: 'coil', kind: 'load' }] };
 
 /** A fake POST /api/scenes with the server's profile rule: only profiles in `known` are accepted. */
 function fakeServer(known: number[]) {
-  const posts: any[] = [];
+  const posts: { title?: string; document?: unknown; equipmentProfileId?: number }[] = [];
   const fetch = vi.fn(async (url: string, init?: RequestInit) => {
     const body = JSON.parse(String(init!.body));
     posts.push(body);

@@ -11,6 +11,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { truckSpecShape } from '@/lib/equipment/truck-spec';
 import { formatLength, formatMass } from '@/lib/format/quantity';
+import { may } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Equipment' };
 
@@ -19,7 +20,7 @@ export default async function EquipmentPage({ searchParams }: { searchParams: Pr
   if (!user) redirect('/sign-in');
   const showRetired = (await searchParams).retired === '1';
   const profiles = await listEquipmentProfiles(getDb(), user.organisationId, { includeRetired: showRetired });
-  const isAdmin = user.role === 'admin';
+  const isAdmin = may(user, 'manageEquipment');
   return (
     <>
       <PageHeader

@@ -4,7 +4,7 @@ import { redirect } from 'next/navigation';
 import { getDb } from '@/db';
 import { listLessons } from '@/db/repositories/lessons';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canWriteLessons } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { PageHeader } from '@/components/ui/page-header';
 import { EmptyState } from '@/components/ui/empty-state';
 import { LessonForm } from '@/components/lessons/lesson-form';
@@ -18,7 +18,7 @@ export default async function LessonsPage() {
   if (!user) redirect('/sign-in');
   const db = getDb();
   const lessons = await listLessons(db, user.organisationId);
-  const writer = canWriteLessons(user.role);
+  const writer = may(user, 'writeLessons');
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Lessons" description="Ordered walk-throughs of training-set scenes, each step at a chosen revision, presented from the replay room." />

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canManageRigging } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { PageHeader } from '@/components/ui/page-header';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { RiggingTable } from '@/components/rigging/rigging-table';
@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: 'Rigging' };
 export default async function RiggingPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  const canEdit = canManageRigging(user.role);
+  const canEdit = may(user, 'manageRigging');
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Rigging inventory" description="Slings, shackles, chain, blocks, hooks and straps, with their ratings and inspection dates. The scene editor offers in-service items only." />

@@ -4,6 +4,7 @@ import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
 import { ScenesTable } from '@/components/scenes/scenes-table';
+import { may } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scenes' };
 
@@ -17,7 +18,7 @@ const WHAT_YOU_SEE = {
 export default async function ScenesPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  const canCreate = user.role === 'operator';
+  const canCreate = may(user, 'createScene');
   return (
     <>
       <PageHeader

@@ -4,6 +4,7 @@ import { createEquipmentProfile, listEquipmentProfiles } from '@/db/repositories
 import { recordAudit } from '@/db/repositories/audit';
 import { route } from '@/lib/api/route';
 import { equipmentProfileSchema } from '@/lib/validations/equipment';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -13,7 +14,7 @@ export const GET = route({ query: listQuery }, async ({ user, query }) => {
   return { items: await listEquipmentProfiles(getDb(), user.organisationId, { includeRetired: query.includeRetired === 'true' }) };
 });
 
-export const POST = route({ roles: ['admin'], body: equipmentProfileSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('manageEquipment'), body: equipmentProfileSchema }, async ({ user, body }) => {
   const profile = await getDb()
     .transaction()
     .execute(async (trx) => {

@@ -4,7 +4,7 @@ import { recordAudit } from '@/db/repositories/audit';
 import { route } from '@/lib/api/route';
 import { riggingItemSchema, riggingListQuery } from '@/lib/validations/rigging';
 import { resolvedOr400, tagConflict } from './shared';
-import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 import { today } from '@/lib/dates';
 
 export const runtime = 'nodejs';
@@ -13,7 +13,7 @@ export const GET = route({ query: riggingListQuery }, async ({ user, query }) =>
   return { items: await listRiggingItems(getDb(), user.organisationId, { ...query, today: today() }), today: today() };
 });
 
-export const POST = route({ roles: RIGGING_WRITERS, body: riggingItemSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('manageRigging'), body: riggingItemSchema }, async ({ user, body }) => {
   const item = resolvedOr400(body);
   const created = await getDb()
     .transaction()

@@ -7,6 +7,7 @@ import { route } from '@/lib/api/route';
 import { scenePin } from '@/lib/server/truck-pin';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
 import { emptySceneDocument } from '@/lib/scene';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -23,7 +24,7 @@ export const GET = route({ query: listScenesQuery }, async ({ user, query }) => 
   }
 });
 
-export const POST = route({ roles: ['operator'], body: createSceneSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('createScene'), body: createSceneSchema }, async ({ user, body }) => {
   // The profile check and the insert share a transaction, so the pinned version is the one that was checked.
   const scene = await inTransaction(getDb(), async (trx) => {
     const pin = await scenePin(trx, user.organisationId, body);

@@ -6,16 +6,17 @@ import { hashPassword } from '@/lib/auth/password';
 import { route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { createUserSchema } from '@/lib/validations/users';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
 const emailTaken = () => new HttpError(409, 'email: an account with this e-mail already exists', [{ path: 'email', message: 'Already in use' }]);
 
-export const GET = route({ roles: ['admin'] }, async ({ user }) => {
+export const GET = route({ roles: rolesFor('manageUsers') }, async ({ user }) => {
   return { items: await listUsers(getDb(), user.organisationId) };
 });
 
-export const POST = route({ roles: ['admin'], body: createUserSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('manageUsers'), body: createUserSchema }, async ({ user, body }) => {
   // Hash first: bcrypt takes tens of milliseconds and must not hold the write transaction open.
   const passwordHash = await hashPassword(body.password);
   try {

@@ -80,7 +80,7 @@ describe('lift plan PDF', () => {
     const text = flat(draft.pages.join('\n'));
     for (const name of ['Mitch Varga', 'Dana Okafor', 'Lee Marsh']) expect(text).toContain(name);
     expect(text).toContain('Prepared by Dana Okafor, revision 1');
-    expect(text).toContain('Tri-County Steel Haulers (demo)');
+    expect(text).toContain('Brindlewood Coil Carriers (demo)');
     expect(text).toContain('Emergency action plan');
     expect(text).toContain('Feeder 13.8 kV');
   });

@@ -5,13 +5,14 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { UsersTable } from '@/components/admin/users-table';
 import { CreateUserForm } from '@/components/admin/create-user-form';
+import { may } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Users' };
 
 export default async function UsersAdminPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (user.role !== 'admin') forbidden();
+  if (!may(user, 'manageUsers')) forbidden();
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Users" description="Everyone who can sign in to your organisation, and their role." />

@@ -13,6 +13,7 @@ import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { ProfileForm, type ProfileFormValues } from '@/components/equipment/profile-form';
 import { ProfileActions } from '@/components/equipment/profile-actions';
 import { LocalTime } from '@/components/local-time';
+import { may } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Truck profile' };
 
@@ -33,7 +34,7 @@ export default async function ProfilePage({ params, searchParams }: { params: Pr
   const old = asked && asked !== profile.version ? await findProfileVersion(db, user.organisationId, id, asked) : null;
   if (asked && asked !== profile.version && !old) notFound();
   const versions = await listProfileVersions(db, user.organisationId, id);
-  const isAdmin = user.role === 'admin';
+  const isAdmin = may(user, 'manageEquipment');
   const readOnly = !isAdmin || !!old || !!profile.retiredAt;
   const shown = old ?? profile;
   const initial = { kind: 'truck', name: shown.name, unitNumber: shown.unitNumber ?? '', inService: shown.inService, spec: shown.spec } as ProfileFormValues;

@@ -4,7 +4,7 @@ import { notFound, redirect } from 'next/navigation';
 import { getDb } from '@/db';
 import { getLesson } from '@/db/repositories/lessons';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canWriteLessons } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { idParams } from '@/lib/api/route';
 import { PageHeader } from '@/components/ui/page-header';
 import { ButtonLink } from '@/components/ui/button';
@@ -22,7 +22,7 @@ export default async function LessonPage({ params }: { params: Promise<{ id: str
   const db = getDb();
   const lesson = await getLesson(db, user, p.data.id);
   if (!lesson) notFound();
-  const writer = canWriteLessons(user.role);
+  const writer = may(user, 'writeLessons');
   const first = lesson.steps[0];
   const stepHref = (k: number, present: boolean) => `/scenes/${lesson.steps[k].sceneId}/replay?revision=${lesson.steps[k].revision}${present ? '&present=1' : ''}&lesson=${lesson.id}&step=${k}`;
   return (

@@ -4,7 +4,7 @@ import { notFound, redirect } from 'next/navigation';
 import { getDb } from '@/db';
 import { findRiggingItem, listInspections } from '@/db/repositories/rigging';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canManageRigging } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { idParams } from '@/lib/api/route';
 import { today } from '@/lib/dates';
 import { PageHeader } from '@/components/ui/page-header';
@@ -26,7 +26,7 @@ export default async function RiggingItemPage({ params, searchParams }: { params
   const item = await findRiggingItem(db, user.organisationId, id);
   if (!item) notFound();
   const inspections = await listInspections(db, user.organisationId, id);
-  const canEdit = canManageRigging(user.role);
+  const canEdit = may(user, 'manageRigging');
   const due = dueState(item.nextInspectionDue, today());
   return (
     <>

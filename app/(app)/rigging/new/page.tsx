@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canManageRigging } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { PageHeader } from '@/components/ui/page-header';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { RiggingItemForm } from '@/components/rigging/rigging-item-form';
@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: 'New rigging item' };
 export default async function NewRiggingPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
-  if (!canManageRigging(user.role)) forbidden();
+  if (!may(user, 'manageRigging')) forbidden();
   return (
     <>
       <PageHeader eyebrow="Rigging inventory" title="New rigging item" />

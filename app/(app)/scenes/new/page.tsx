@@ -4,6 +4,7 @@ import { getCurrentUser } from '@/lib/auth/current-user';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody } from '@/components/ui/card';
 import { NewSceneForm } from '@/components/scenes/new-scene-form';
+import { may } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'New scene' };
 
@@ -11,7 +12,7 @@ export default async function NewScenePage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
   // Only operators create scenes (POST /api/scenes enforces the same).
-  if (user.role !== 'operator') forbidden();
+  if (!may(user, 'createScene')) forbidden();
   return (
     <>
       <PageHeader eyebrow="Scenes" title="New scene" description="Name the job and, if you know it, the truck. The sketch itself is drawn in the editor." />

@@ -7,6 +7,7 @@ import { parseSceneDocument } from '@/lib/scene/parse';
 import { SceneEditorLoader } from '@/canvas/scene-editor-loader';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import { loadSceneProfiles } from '@/lib/server/load-profiles';
+import { mayEditScene } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scene editor' };
 
@@ -38,7 +39,7 @@ export default async function SceneEditorPage({ params }: { params: Promise<{ id
   }
   const profiles: TruckProfileInput[] = await loadSceneProfiles(db, user.organisationId, parsed.document, scene.equipmentProfileId);
   // Only the owning operator edits; everyone else who can see the scene gets it read-only.
-  const readOnly = !(user.role === 'operator' && scene.ownerId === user.id);
+  const readOnly = !mayEditScene(user, scene);
   return (
     <SceneEditorLoader
       scene={{ id: scene.id, title: scene.title, status: scene.status, revision: scene.revision, ownerName: scene.ownerName, updatedAt: scene.updatedAt }}

@@ -5,6 +5,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { updateEquipmentProfileSchema } from '@/lib/validations/equipment';
 import { retire } from '../retire-profile';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -17,7 +18,7 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 });
 
 /** Saves a new version; the old one stays in the history so scenes planned with it still load it. */
-export const PUT = route({ roles: ['admin'], params: idParams, body: updateEquipmentProfileSchema }, async ({ user, params, body }) => {
+export const PUT = route({ roles: rolesFor('manageEquipment'), params: idParams, body: updateEquipmentProfileSchema }, async ({ user, params, body }) => {
   return getDb()
     .transaction()
     .execute(async (trx) => {
@@ -35,4 +36,4 @@ export const PUT = route({ roles: ['admin'], params: idParams, body: updateEquip
 });
 
 /** Retires the profile (kept for the scenes that point at it). */
-export const DELETE = route({ roles: ['admin'], params: idParams }, async ({ user, params }) => retire(user, params.id));
+export const DELETE = route({ roles: rolesFor('manageEquipment'), params: idParams }, async ({ user, params }) => retire(user, params.id));

@@ -3,7 +3,7 @@ import { inTransaction } from '@/db/transaction';
 import { checkLessonSteps, deleteLesson, getLesson, updateLesson } from '@/db/repositories/lessons';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError, describeIssues } from '@/lib/api/errors';
-import { LESSON_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 import { lessonSchema } from '@/lib/validations/lessons';
 
 export const runtime = 'nodejs';
@@ -17,7 +17,7 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 });
 
 /** Replaces the lesson's title and steps (the whole list, in the order given). */
-export const PUT = route({ roles: LESSON_WRITERS, params: idParams, body: lessonSchema }, async ({ user, params, body }) => {
+export const PUT = route({ roles: rolesFor('writeLessons'), params: idParams, body: lessonSchema }, async ({ user, params, body }) => {
   return inTransaction(getDb(), async (trx) => {
     if (!(await getLesson(trx, user, params.id))) throw notFound();
     const issues = await checkLessonSteps(trx, user.organisationId, body.steps);
@@ -28,7 +28,7 @@ export const PUT = route({ roles: LESSON_WRITERS, params: idParams, body: lesson
   });
 });
 
-export const DELETE = route({ roles: LESSON_WRITERS, params: idParams }, async ({ user, params }) => {
+export const DELETE = route({ roles: rolesFor('writeLessons'), params: idParams }, async ({ user, params }) => {
   if (!(await deleteLesson(getDb(), user, params.id))) throw notFound();
   return { ok: true };
 });

@@ -5,7 +5,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { riggingItemSchema } from '@/lib/validations/rigging';
 import { resolvedOr400, tagConflict } from '../shared';
-import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -17,7 +17,7 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
   return item;
 });
 
-export const PUT = route({ roles: RIGGING_WRITERS, params: idParams, body: riggingItemSchema }, async ({ user, params, body }) => {
+export const PUT = route({ roles: rolesFor('manageRigging'), params: idParams, body: riggingItemSchema }, async ({ user, params, body }) => {
   return getDb()
     .transaction()
     .execute(async (trx) => {

@@ -4,7 +4,7 @@ import { recordAudit } from '@/db/repositories/audit';
 import { route } from '@/lib/api/route';
 import { parseRiggingCsv, type CsvRowError } from '@/lib/equipment/rigging-csv';
 import { importSchema } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -19,7 +19,7 @@ const rowErrors = (errors: CsvRowError[]) =>
   );
 
 /** Imports every row or none: any bad row (or a tag already in the inventory) refuses the whole file. */
-export const POST = route({ roles: RIGGING_WRITERS, body: importSchema }, async ({ user, body }) => {
+export const POST = route({ roles: rolesFor('manageRigging'), body: importSchema }, async ({ user, body }) => {
   const parsed = parseRiggingCsv(body.csv);
   if (!parsed.ok) return rowErrors(parsed.errors);
   const db = getDb();

@@ -6,6 +6,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
+import { mayDeleteScene, mayEditScene, mayReadScene, rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -17,14 +18,14 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
   return scene;
 });
 
-export const PUT = route({ roles: ['operator'], params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
+export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
   // Read, ownership check and write in one transaction: nothing can change the scene in between.
   const outcome = await inTransaction(getDb(), async (trx) => {
     // The few columns the checks need; the stored document is never read on a save.
     const scene = await sceneForSave(trx, user, params.id);
-    // Another operator's scene that this operator may not even read is not found, as on GET.
-    if (!scene || (scene.ownerId !== user.id && scene.status !== 'approved')) throw notFound();
-    if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit it');
+    // A scene this user may not even read is not found, as on GET.
+    if (!scene || !mayReadScene(user, scene)) throw notFound();
+    if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit it');
     // The record names the profile version the saved sketch's truck is drawn from (lib/api/truck-pin).
     const pin = await scenePin(trx, user.organisationId, body, { keepProfileId: scene.equipmentProfileId });
     return updateScene(trx, user, params.id, { ...body, ...pin });
@@ -44,11 +45,11 @@ export const PUT = route({ roles: ['operator'], params: idParams, body: updateSc
   return { revision: outcome.revision, savedAt: outcome.savedAt };
 });
 
-export const DELETE = route({ roles: ['operator', 'admin'], params: idParams }, async ({ user, params }) => {
+export const DELETE = route({ roles: rolesFor('deleteScene'), params: idParams }, async ({ user, params }) => {
   await inTransaction(getDb(), async (trx) => {
     const scene = await getScene(trx, user, params.id);
     if (!scene) throw notFound();
-    if (user.role === 'operator' && scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can delete it');
+    if (!mayDeleteScene(user, scene)) throw new HttpError(403, 'Only the scene owner can delete it');
     if (!(await softDeleteScene(trx, user, params.id))) throw notFound();
   });
   return { ok: true };

@@ -5,6 +5,7 @@ import { findUserById, otherActiveAdmins, updateUser } from '@/db/repositories/u
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { updateUserSchema } from '@/lib/validations/users';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -13,7 +14,7 @@ export const runtime = 'nodejs';
  * and their open sessions end at once: every request looks the user up and refuses an inactive one.
  * The organisation's last active admin can be neither demoted nor deactivated.
  */
-export const PATCH = route({ roles: ['admin'], params: idParams, body: updateUserSchema }, async ({ user, params, body }) => {
+export const PATCH = route({ roles: rolesFor('manageUsers'), params: idParams, body: updateUserSchema }, async ({ user, params, body }) => {
   return inTransaction(getDb(), async (trx) => {
     const target = await findUserById(trx, params.id);
     if (!target || target.organisation_id !== user.organisationId) throw new HttpError(404, 'User not found');

@@ -14,6 +14,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { describeAudit } from '@/components/scenes/audit-words';
+import { mayEditScene } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scene details' };
 
@@ -34,7 +35,7 @@ export default async function SceneDetailsPage({ params }: Props) {
     listSceneAudit(db, user.organisationId, scene.id),
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
-  const canRename = user.role === 'operator' && scene.ownerId === user.id;
+  const canRename = mayEditScene(user, scene);
 
   return (
     <>

@@ -5,7 +5,7 @@ import { getDb } from '@/db';
 import { getScene } from '@/db/repositories/scenes';
 import { getLesson } from '@/db/repositories/lessons';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { canWriteLessons } from '@/lib/auth/roles';
+import { may } from '@/lib/auth/permissions';
 import { idParams } from '@/lib/api/route';
 import { pathId } from '@/lib/validations/path-id';
 import { listRevisionSummaries } from '@/lib/server/scene-revisions';
@@ -64,7 +64,7 @@ export default async function ReplayPage({ params, searchParams }: Props) {
       revisions={revisions}
       present={q.present === '1'}
       units={user.units}
-      canSaveTraining={canWriteLessons(user.role)}
+      canSaveTraining={may(user, 'writeLessons')}
       lesson={lesson ? { id: lesson.id, title: lesson.title, steps: lesson.steps, step: Math.min(q.step ?? 0, lesson.steps.length - 1) } : null}
     />
   );

@@ -4,10 +4,11 @@ import { recordAudit } from '@/db/repositories/audit';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { duplicateProfileSchema } from '@/lib/validations/equipment';
+import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
-export const POST = route({ roles: ['admin'], params: idParams, body: duplicateProfileSchema }, async ({ user, params, body }) => {
+export const POST = route({ roles: rolesFor('manageEquipment'), params: idParams, body: duplicateProfileSchema }, async ({ user, params, body }) => {
   const copy = await getDb()
     .transaction()
     .execute(async (trx) => {

@@ -4,7 +4,7 @@ import { recordAudit } from '@/db/repositories/audit';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { inspectionSchema } from '@/lib/validations/rigging';
-import { RIGGING_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 import { today } from '@/lib/dates';
 
 export const runtime = 'nodejs';
@@ -17,7 +17,7 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
   return { items: await listInspections(db, user.organisationId, params.id) };
 });
 
-export const POST = route({ roles: RIGGING_WRITERS, params: idParams, body: inspectionSchema }, async ({ user, params, body }) => {
+export const POST = route({ roles: rolesFor('manageRigging'), params: idParams, body: inspectionSchema }, async ({ user, params, body }) => {
   if (body.inspectedOn > today()) throw new HttpError(400, 'inspectedOn: an inspection cannot be dated in the future', [{ path: 'inspectedOn', message: 'In the future' }]);
   if (body.nextDue && body.nextDue <= body.inspectedOn) throw new HttpError(400, 'nextDue: the next inspection must be after this one', [{ path: 'nextDue', message: 'Not after the inspection date' }]);
   const item = await getDb()

@@ -5,6 +5,7 @@ import { HttpError, zodIssues, describeIssues } from '@/lib/api/errors';
 import { ACCEPTED_IMAGE_TYPES, sniffImage } from '@/lib/image-sniff';
 import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { MAX_BACKGROUND_BYTES, MULTIPART_OVERHEAD_BYTES, backgroundUploadForm } from '@/lib/validations/uploads';
+import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -12,11 +13,11 @@ const tooLarge = () =>
   new HttpError(413, 'file: the image is larger than 10 MB', [{ path: 'file', message: `At most ${MAX_BACKGROUND_BYTES} bytes` }]);
 
 /** Uploads a site background image (multipart, field "file") for a scene the signed-in operator owns. */
-export const POST = route({ roles: ['operator'], params: idParams }, async ({ req, user, params }) => {
+export const POST = route({ roles: rolesFor('editScene'), params: idParams }, async ({ req, user, params }) => {
   const db = getDb();
   const scene = await getScene(db, user, params.id);
   if (!scene) throw new HttpError(404, 'Scene not found');
-  if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can add a background image');
+  if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can add a background image');
 
   // Refuse an oversized body before reading it, when the client declares its length.
   const declared = Number(req.headers.get('content-length') ?? '0');

@@ -6,6 +6,7 @@ import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { planRevisionQuery, savePlanDetailsSchema } from '@/lib/validations/plan';
 import { planRevision } from '../plan-revision';
+import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
@@ -18,11 +19,11 @@ export const GET = route({ params: idParams, query: planRevisionQuery }, async (
 });
 
 /** Saves the details as a new revision of the scene (the sketch is carried over unchanged). */
-export const PUT = route({ roles: ['operator'], params: idParams, body: savePlanDetailsSchema }, async ({ user, params, body }) => {
+export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body: savePlanDetailsSchema }, async ({ user, params, body }) => {
   const outcome = await inTransaction(getDb(), async (trx) => {
     const scene = await getScene(trx, user, params.id);
     if (!scene) throw new HttpError(404, 'Scene not found');
-    if (scene.ownerId !== user.id) throw new HttpError(403, 'Only the scene owner can edit its plan details');
+    if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit its plan details');
     return savePlanDetails(trx, user, params.id, body.revision, body.details);
   });
   if (outcome.kind === 'missing') throw new HttpError(404, 'Scene not found');

@@ -5,7 +5,7 @@ import { createScene, getScene, setTrainingSet } from '@/db/repositories/scenes'
 import { idParams, route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
-import { LESSON_WRITERS } from '@/lib/auth/roles';
+import { rolesFor } from '@/lib/auth/permissions';
 import { sceneDocument, sceneTitle } from '@/lib/validations/scenes';
 
 export const runtime = 'nodejs';
@@ -16,7 +16,7 @@ const body = z.object({ title: sceneTitle, document: sceneDocument }).strict();
  * The replay's "Save as a training scene": a what-if variant of a scene the user may read becomes a new
  * draft scene in the training set, owned by the trainer. The source scene and its revisions are untouched.
  */
-export const POST = route({ roles: LESSON_WRITERS, params: idParams, body }, async ({ user, params, body }) => {
+export const POST = route({ roles: rolesFor('writeLessons'), params: idParams, body }, async ({ user, params, body }) => {
   const scene = await inTransaction(getDb(), async (trx) => {
     if (!(await getScene(trx, user, params.id))) throw new HttpError(404, 'Scene not found');
     const pin = await scenePin(trx, user.organisationId, { document: body.document });
