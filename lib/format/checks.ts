@@ -4,7 +4,7 @@ import type { PowerLineRule } from '@/lib/lift/power-lines';
 import { ftToM, type UnitSystem } from '@/lib/units';
 import { formatNumber } from './number';
 import { elementWords, riggingSentence } from './rigging-words';
-import { formatAngle, formatForce, formatLength, formatMass, formatPercent, formatPressure, formatQuantity } from './quantity';
+import { formatAngle, formatForce, formatLength, formatMass, formatPercent, formatQuantity } from './quantity';
 
 /**
  * The one formatter from an engine check (lib/lift/checks.ts) to words, in the viewer's units. The results
