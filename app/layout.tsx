@@ -12,6 +12,10 @@ export const metadata: Metadata = {
   icons: { icon: '/arcline-mark.svg' },
 };
 
+// Every page renders per request: its scripts carry that response's CSP nonce (proxy.ts), which a page
+// prerendered at build time could not.
+export const dynamic = 'force-dynamic';
+
 export const viewport: Viewport = { width: 'device-width', initialScale: 1, themeColor: '#15202B' };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {

@@ -22,6 +22,8 @@ export interface UserTable {
   units: Generated<'imperial' | 'metric'>;
   active: Generated<number>;
   created_at: Timestamp;
+  /** Raised to end every session of this user at once (sign-out, password change, deactivation). */
+  session_version: Generated<number>;
 }
 
 export interface EquipmentProfileTable {

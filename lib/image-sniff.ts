@@ -1,76 +1,51 @@
+import { imageSize } from 'image-size';
+
 /**
- * Identifies an uploaded image by its first bytes, never by its name or the browser's claimed type.
- * Signatures: PNG (ISO/IEC 15948 §5.2), JPEG (ITU-T T.81 Annex B: SOI marker FFD8 then a marker),
- * WebP (RIFF container with form type "WEBP", Google's WebP container specification).
+ * Identifies an uploaded image by decoding its header with image-size, never by its name, the browser's
+ * claimed type or a bare signature: a file must carry a readable header with its pixel size (PNG's IHDR,
+ * ISO/IEC 15948 §11.2.2; JPEG's SOF frame header, ITU-T T.81 Annex B; WebP's VP8/VP8L/VP8X header).
  */
 
 export type ImageMime = 'image/png' | 'image/jpeg' | 'image/webp';
 
 export const ACCEPTED_IMAGE_TYPES: readonly ImageMime[] = ['image/png', 'image/jpeg', 'image/webp'];
 
+/**
+ * Largest image accepted, per side and in total. 16,384 px is the largest canvas side browsers draw
+ * reliably (Chromium's and Firefox's limit); 50 megapixels decodes to 200 MB of RGBA in the editor,
+ * already more than a site photo or an aerial tile needs.
+ */
+export const MAX_IMAGE_SIDE_PX = 16_384;
+export const MAX_IMAGE_PIXELS = 50_000_000;
+
 export interface SniffedImage {
   mime: ImageMime;
-  /** Pixel size when the header gives it cheaply; null otherwise. */
-  width: number | null;
-  height: number | null;
+  width: number;
+  height: number;
 }
 
-const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
+const MIME: Record<string, ImageMime> = { png: 'image/png', jpg: 'image/jpeg', webp: 'image/webp' };
 
-const ascii = (b: Uint8Array, at: number, text: string) => {
-  if (b.length < at + text.length) return false;
-  for (let i = 0; i < text.length; i++) if (b[at + i] !== text.charCodeAt(i)) return false;
-  return true;
-};
-
-const u16be = (b: Uint8Array, at: number) => (b[at] << 8) | b[at + 1];
-const u32be = (b: Uint8Array, at: number) => ((b[at] << 24) >>> 0) + (b[at + 1] << 16) + (b[at + 2] << 8) + b[at + 3];
-const u16le = (b: Uint8Array, at: number) => b[at] | (b[at + 1] << 8);
-const u24le = (b: Uint8Array, at: number) => b[at] | (b[at + 1] << 8) | (b[at + 2] << 16);
-
-function pngSize(b: Uint8Array): [number, number] | null {
-  // The first chunk must be IHDR: width and height are its first two 4-byte fields.
-  if (b.length < 24 || !ascii(b, 12, 'IHDR')) return null;
-  return [u32be(b, 16), u32be(b, 20)];
-}
-
-function jpegSize(b: Uint8Array): [number, number] | null {
-  let i = 2;
-  while (i + 9 < b.length) {
-    if (b[i] !== 0xff) return null;
-    const marker = b[i + 1];
-    if (marker === 0xff) {
-      i += 1; // fill byte
-      continue;
-    }
-    // SOF0..SOF15 carry the frame size, except DHT (C4), JPG (C8) and DAC (CC).
-    if (marker >= 0xc0 && marker <= 0xcf && marker !== 0xc4 && marker !== 0xc8 && marker !== 0xcc) {
-      return [u16be(b, i + 7), u16be(b, i + 5)];
-    }
-    if (marker === 0xd9 || marker === 0xda) return null; // end of image / start of scan before any frame header
-    i += 2 + u16be(b, i + 2);
-  }
-  return null;
-}
-
-function webpSize(b: Uint8Array): [number, number] | null {
-  if (ascii(b, 12, 'VP8 ') && b.length >= 30 && b[23] === 0x9d && b[24] === 0x01 && b[25] === 0x2a) {
-    return [u16le(b, 26) & 0x3fff, u16le(b, 28) & 0x3fff];
-  }
-  if (ascii(b, 12, 'VP8L') && b.length >= 25 && b[20] === 0x2f) {
-    const bits = (b[21] | (b[22] << 8) | (b[23] << 16) | (b[24] << 24)) >>> 0;
-    return [(bits & 0x3fff) + 1, ((bits >>> 14) & 0x3fff) + 1];
-  }
-  if (ascii(b, 12, 'VP8X') && b.length >= 30) return [u24le(b, 24) + 1, u24le(b, 27) + 1];
-  return null;
-}
-
-/** The image type these bytes start with, if it is one we accept; null for anything else (GIF, text, PDF...). */
+/** The image's type and size when its header decodes as PNG, JPEG or WebP; null for anything else. */
 export function sniffImage(bytes: Uint8Array): SniffedImage | null {
-  const b = bytes;
-  const pick = (mime: ImageMime, size: [number, number] | null): SniffedImage => ({ mime, width: size?.[0] ?? null, height: size?.[1] ?? null });
-  if (b.length >= 8 && PNG_SIGNATURE.every((v, i) => b[i] === v)) return pick('image/png', pngSize(b));
-  if (b.length >= 4 && b[0] === 0xff && b[1] === 0xd8 && b[2] === 0xff) return pick('image/jpeg', jpegSize(b));
-  if (b.length >= 16 && ascii(b, 0, 'RIFF') && ascii(b, 8, 'WEBP')) return pick('image/webp', webpSize(b));
+  try {
+    const { type, width, height } = imageSize(bytes);
+    const mime = type ? MIME[type] : undefined;
+    if (!mime || !width || !height) return null;
+    return { mime, width, height };
+  } catch {
+    // image-size throws on a truncated or corrupt header ("Invalid PNG", "Corrupt JPG").
+    return null;
+  }
+}
+
+/** Why these dimensions are refused, or null when they are within the limits. */
+export function oversizedImageReason(image: SniffedImage): string | null {
+  if (image.width > MAX_IMAGE_SIDE_PX || image.height > MAX_IMAGE_SIDE_PX) {
+    return `the image is ${image.width} × ${image.height} px; each side may be at most ${MAX_IMAGE_SIDE_PX.toLocaleString('en-US')} px`;
+  }
+  if (image.width * image.height > MAX_IMAGE_PIXELS) {
+    return `the image has ${((image.width * image.height) / 1e6).toFixed(1)} megapixels; at most ${MAX_IMAGE_PIXELS / 1e6} are accepted`;
+  }
   return null;
 }

@@ -51,7 +51,12 @@ export function newStorageKey(): string {
   return randomUUID();
 }
 
-/** Writes the bytes under a new key and returns it. Written to a temp name then renamed, so a reader never sees half a file. */
+const TEMP_SUFFIX = '.tmp';
+
+/**
+ * Writes the bytes under a new key and returns it. Written to a temp name then renamed, so a reader never
+ * sees half a file; if the write or the rename fails (disk full, a crash of the copy), the temp file goes.
+ */
 export async function putObject(bytes: Uint8Array): Promise<string> {
   const key = newStorageKey();
   if (s3Enabled()) {
@@ -60,10 +65,48 @@ export async function putObject(bytes: Uint8Array): Promise<string> {
   }
   const file = fileFor(key);
   await fsp.mkdir(path.dirname(file), { recursive: true });
-  const tmp = `${file}.${process.pid}.tmp`;
-  await fsp.writeFile(tmp, bytes, { flag: 'wx' });
-  await fsp.rename(tmp, file);
+  const tmp = `${file}.${process.pid}${TEMP_SUFFIX}`;
+  try {
+    await fsp.writeFile(tmp, bytes, { flag: 'wx' });
+    await fsp.rename(tmp, file);
+  } catch (err) {
+    await fsp.rm(tmp, { force: true }).catch(() => undefined);
+    throw err;
+  }
   return key;
+}
+
+/**
+ * A temp file older than this was left by a process that died mid-write (kill -9, power cut): no live
+ * write takes more than a few seconds, and another server process sharing the folder may be mid-write now.
+ */
+export const STALE_TEMP_MS = 10 * 60 * 1000;
+
+/** Removes temp files left behind by dead writers; run at server start (instrumentation.ts). Returns how many went. */
+export async function sweepStaleTemps(now = Date.now()): Promise<number> {
+  const root = storageRoot();
+  let removed = 0;
+  let dirs: string[];
+  try {
+    dirs = await fsp.readdir(root);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return 0;
+    throw err;
+  }
+  for (const dir of dirs) {
+    const folder = path.join(/*turbopackIgnore: true*/ root, dir);
+    const names = await fsp.readdir(folder).catch(() => [] as string[]);
+    for (const name of names) {
+      if (!name.endsWith(TEMP_SUFFIX)) continue;
+      const file = path.join(/*turbopackIgnore: true*/ folder, name);
+      const stat = await fsp.stat(file).catch(() => null);
+      if (stat && now - stat.mtimeMs > STALE_TEMP_MS) {
+        await fsp.rm(file, { force: true });
+        removed++;
+      }
+    }
+  }
+  return removed;
 }
 
 /** The whole object, or null when there is none under this key. */

@@ -2,6 +2,7 @@ import type { Migration } from 'kysely';
 import * as foundation from './2026-12-01T00-00_foundation';
 import * as sceneUploads from './2026-12-01T22-45_scene-uploads';
 import * as equipmentLibrary from './2026-12-01T23-00_equipment-library';
+import * as signInHardening from './2026-12-02T10-00_sign-in-hardening';
 import * as reviewDesk from './2026-12-02T11-00_review-desk';
 import * as planDetails from './2026-12-02T12-00_plan-details';
 import * as lessons from './2026-12-02T13-00_lessons';
@@ -16,6 +17,7 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01T00-00_foundation': foundation,
   '2026-12-01T22-45_scene-uploads': sceneUploads,
   '2026-12-01T23-00_equipment-library': equipmentLibrary,
+  '2026-12-02T10-00_sign-in-hardening': signInHardening,
   '2026-12-02T11-00_review-desk': reviewDesk,
   '2026-12-02T12-00_plan-details': planDetails,
   '2026-12-02T13-00_lessons': lessons,

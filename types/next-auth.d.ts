@@ -6,6 +6,7 @@ declare module 'next-auth' {
   interface User {
     role: Role;
     organisationId: number;
+    sessionVersion: number;
   }
   interface Session {
     user: {
@@ -14,6 +15,8 @@ declare module 'next-auth' {
       email?: string | null;
       role: Role;
       organisationId: number;
+      /** The user's session version when this session began; a raised version ends it. */
+      sessionVersion: number;
     };
   }
 }
@@ -23,5 +26,6 @@ declare module 'next-auth/jwt' {
     userId: number;
     role: Role;
     organisationId: number;
+    sessionVersion: number;
   }
 }

@@ -59,7 +59,7 @@ export function CreateUserForm() {
           </option>
         ))}
       </SelectField>
-      <TextField label="First password" type="password" autoComplete="new-password" hint="At least 10 characters. Share it with them directly." error={errors.password?.message} {...register('password')} />
+      <TextField label="First password" type="password" autoComplete="new-password" hint="12 to 128 characters, not a commonly used password. Share it with them directly." error={errors.password?.message} {...register('password')} />
       <Button type="submit" variant="primary" disabled={create.isPending}>
         {create.isPending ? 'Adding…' : 'Add user'}
       </Button>

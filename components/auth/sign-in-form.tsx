@@ -25,7 +25,13 @@ export function SignInForm({ next }: { next: string }) {
     setFailure(null);
     const res = await signIn('credentials', { email: values.email, password: values.password, redirect: false });
     if (!res || res.error || !res.ok) {
-      setFailure(res?.error === 'CredentialsSignin' || !res ? 'That e-mail and password do not match an active account. Check both and try again.' : 'Sign-in failed. Try again in a moment.');
+      setFailure(
+        res?.error === 'TooManyAttempts'
+          ? 'Too many wrong passwords for this account. Wait a minute, then try again.'
+          : res?.error === 'CredentialsSignin' || !res
+            ? 'That e-mail and password do not match an active account. Check both and try again.'
+            : 'Sign-in failed. Try again in a moment.',
+      );
       return;
     }
     router.replace(next);

@@ -6,15 +6,38 @@ type Db = Kysely<Database>;
 
 const publicColumns = ['users.id', 'users.organisation_id', 'users.email', 'users.name', 'users.role', 'users.units', 'users.active', 'users.created_at'] as const;
 
-export function findUserByEmail(db: Db, email: string) {
-  return db.selectFrom('users').selectAll().where('email', '=', email.trim().toLowerCase()).executeTakeFirst();
+/** Every account under this address: an address may repeat across organisations (never within one). */
+export function findUsersByEmail(db: Db, email: string) {
+  return db.selectFrom('users').selectAll().where('email', '=', email.trim().toLowerCase()).orderBy('id').execute();
+}
+
+export function findUserByEmail(db: Db, email: string, organisationId?: number) {
+  let q = db.selectFrom('users').selectAll().where('email', '=', email.trim().toLowerCase());
+  if (organisationId !== undefined) q = q.where('organisation_id', '=', organisationId);
+  return q.orderBy('id').executeTakeFirst();
+}
+
+/**
+ * Ends every session of this user at once: each session carries the version it began with, and
+ * getCurrentUser refuses one that is behind. Called on sign-out, password change and deactivation.
+ */
+export async function endUserSessions(db: Db, id: number, onlyFromVersion?: number): Promise<void> {
+  let q = db.updateTable('users').set((eb) => ({ session_version: eb('session_version', '+', 1) })).where('id', '=', id);
+  // A sign-out with an already-ended token must not end the sessions that began after it.
+  if (onlyFromVersion !== undefined) q = q.where('session_version', '=', onlyFromVersion);
+  await q.execute();
+}
+
+/** Sets a new password hash and ends the user's sessions, in the caller's transaction. */
+export async function setUserPassword(db: Db, id: number, passwordHash: string): Promise<void> {
+  await db.updateTable('users').set((eb) => ({ password_hash: passwordHash, session_version: eb('session_version', '+', 1) })).where('id', '=', id).execute();
 }
 
 export function findUserById(db: Db, id: number) {
   return db
     .selectFrom('users')
     .innerJoin('organisations', 'organisations.id', 'users.organisation_id')
-    .select([...publicColumns, 'organisations.name as organisation_name'])
+    .select([...publicColumns, 'users.session_version', 'organisations.name as organisation_name'])
     .where('users.id', '=', id)
     .executeTakeFirst();
 }
@@ -57,10 +80,15 @@ export async function otherActiveAdmins(db: Db, organisationId: number, exceptId
   return Number(row.n);
 }
 
+/** A new role and/or deactivation; deactivating also raises the session version, ending the user's sessions. */
 export function updateUser(db: Db, organisationId: number, id: number, changes: { role?: Role; active?: boolean }) {
   return db
     .updateTable('users')
-    .set({ ...(changes.role !== undefined && { role: changes.role }), ...(changes.active !== undefined && { active: changes.active ? 1 : 0 }) })
+    .set((eb) => ({
+      ...(changes.role !== undefined && { role: changes.role }),
+      ...(changes.active !== undefined && { active: changes.active ? 1 : 0 }),
+      ...(changes.active === false && { session_version: eb('session_version', '+', 1) }),
+    }))
     .where('id', '=', id)
     .where('organisation_id', '=', organisationId)
     .returning(['id', 'organisation_id', 'email', 'name', 'role', 'units', 'active', 'created_at'])

@@ -3,15 +3,20 @@ import type { Role } from '@/lib/domain';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 import { AccessError, assertRole } from '@/lib/auth/roles';
 import { HttpError, describeIssues, jsonError, zodIssues } from './errors';
+import { readBodyLimited } from './body';
 import { pathId } from '@/lib/validations/path-id';
+import { STATE_CHANGING, crossOriginReason, isJsonContentType } from '@/lib/security/same-origin';
+import { log, requestIdFor } from '@/lib/log';
 
-/** Bodies above this are refused before parsing (a scene document is far smaller). */
+/** Bodies above this are refused while streaming (a scene document is far smaller). */
 export const MAX_JSON_BODY = 2 * 1024 * 1024;
 /**
  * Deepest nesting accepted in a JSON body. A scene document nests about eight levels (document, objects,
  * object, polygon, point); JSON.stringify and zod recurse, so a body thousands deep would overflow the stack.
  */
 export const MAX_JSON_DEPTH = 64;
+/** Seconds a client is asked to wait when the database stays locked by another writer past the busy timeout. */
+export const BUSY_RETRY_AFTER_S = 2;
 
 interface RouteOptions<P extends z.ZodType, B extends z.ZodType, Q extends z.ZodType> {
   /** Roles allowed; omit to allow any signed-in user. */
@@ -41,16 +46,10 @@ function parseWith<T extends z.ZodType>(schema: T, value: unknown, where: string
 }
 
 async function readJson(req: Request): Promise<unknown> {
-  const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
-  let text: string;
-  try {
-    text = await req.text();
-  } catch {
-    // The client went away mid-body (a closed tab, a dropped connection): its fault, not the server's.
-    throw new HttpError(400, 'body: could not be read; the connection closed before the whole body arrived', [{ path: 'body', message: 'Could not be read' }]);
+  if (!isJsonContentType(req.headers.get('content-type'))) {
+    throw new HttpError(415, 'body: send the body as JSON with Content-Type: application/json', [{ path: 'body', message: 'Content-Type must be application/json' }]);
   }
-  if (text.length > MAX_JSON_BODY) throw new HttpError(413, 'body: the request body is larger than 2 MB', [{ path: 'body', message: 'Too large' }]);
+  const text = new TextDecoder().decode(await readBodyLimited(req, MAX_JSON_BODY));
   if (text.trim() === '') throw new HttpError(400, 'body: a JSON body is required', [{ path: 'body', message: 'Required' }]);
   let value: unknown;
   try {
@@ -77,30 +76,64 @@ function tooDeepAt(value: unknown): string | null {
   return null;
 }
 
+/** SQLITE_BUSY (and its extended codes): another connection held the write lock past the busy timeout. */
+export function isDatabaseBusy(err: unknown): boolean {
+  const code = (err as { code?: unknown } | null)?.code;
+  return typeof code === 'string' && (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED'));
+}
+
+function answer(err: unknown, requestId: string): Response {
+  if (err instanceof AccessError) return jsonError(err.status, err.message);
+  if (err instanceof HttpError) return jsonError(err.status, err.message, err.issues);
+  if (isDatabaseBusy(err)) {
+    const res = jsonError(503, 'The database is busy with another writer; try again shortly');
+    res.headers.set('Retry-After', String(BUSY_RETRY_AFTER_S));
+    return res;
+  }
+  log.error({ requestId, err }, 'unhandled route error');
+  return jsonError(500, 'Something went wrong on the server');
+}
+
 /**
- * Wraps a route handler: session and role first (401/403), then params, query and body through zod (400),
- * then the handler. Handlers throw HttpError for 404/409; anything else unexpected is logged and becomes 500.
+ * Wraps a route handler: state-changing calls must be same-origin (403), then session and role (401/403),
+ * then params, query and body through zod (400; a JSON body needs Content-Type application/json, 415),
+ * then the handler. Handlers throw HttpError for 404/409; a database locked past the busy timeout is 503
+ * with Retry-After; anything else unexpected is logged and becomes 500. Every call is logged once.
  */
 export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown>(
   options: RouteOptions<P, B, Q>,
   handler: (ctx: RouteContext<z.output<P>, z.output<B>, z.output<Q>>) => Promise<Response | unknown>,
 ) {
   return async (req: Request, context?: NextContext): Promise<Response> => {
+    const started = performance.now();
+    const requestId = requestIdFor(req);
+    let userId: number | null = null;
+    let res: Response;
     try {
+      if (STATE_CHANGING.has(req.method)) {
+        const reason = crossOriginReason(req);
+        if (reason) throw new HttpError(403, `Cross-site request refused: ${reason}`);
+      }
       const user = assertRole(await getCurrentUser(), options.roles);
+      userId = user.id;
       const rawParams = context?.params ? await context.params : {};
       const params = options.params ? parseWith(options.params, rawParams, 'params') : rawParams;
       const url = new URL(req.url);
       const query = options.query ? parseWith(options.query, Object.fromEntries(url.searchParams), 'query') : {};
       const body = options.body ? parseWith(options.body, await readJson(req), 'body') : undefined;
       const out = await handler({ req, user, params, body, query } as RouteContext<z.output<P>, z.output<B>, z.output<Q>>);
-      return out instanceof Response ? out : Response.json(out ?? { ok: true });
+      res = out instanceof Response ? out : Response.json(out ?? { ok: true });
     } catch (err) {
-      if (err instanceof AccessError) return jsonError(err.status, err.message);
-      if (err instanceof HttpError) return jsonError(err.status, err.message, err.issues);
-      console.error('Unhandled route error', err);
-      return jsonError(500, 'Something went wrong on the server');
+      res = answer(err, requestId);
     }
+    // A streamed answer (an image) may come with immutable headers; only add the id where we can.
+    try {
+      res.headers.set('X-Request-Id', requestId);
+    } catch {
+      // Immutable headers: the log line still carries the id.
+    }
+    log.info({ requestId, userId, method: req.method, route: new URL(req.url).pathname, status: res.status, ms: Math.round(performance.now() - started) }, 'api');
+    return res;
   };
 }
 

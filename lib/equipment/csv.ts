@@ -32,20 +32,29 @@ export function parseDelimited(text: string, delimiter = ','): string[][] {
     row.push(field);
     rows.push(row);
   }
-  return rows.filter((r) => r.some((c) => c.trim() !== ''));
+  return rows.filter((r) => r.some((c) => c.trim() !== '')).map((r) => r.map(unneutralise));
 }
 
 const needsQuotes = /[",\r\n]/;
+/** Text a spreadsheet would run as a formula (OWASP "CSV Injection": =, +, -, @, tab, carriage return). */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * One CSV cell. Text that a spreadsheet would take for a formula is neutralised as OWASP's CSV Injection
+ * guidance says: a leading single quote, and the cell quoted. Numbers we write ourselves stay numbers.
+ */
+export function csvCell(v: string | number | null | undefined): string {
+  if (v === null || v === undefined) return '';
+  if (typeof v === 'number') return String(v);
+  const s = FORMULA_START.test(v) ? `'${v}` : v;
+  return needsQuotes.test(s) || s !== v ? `"${s.replace(/"/g, '""')}"` : s;
+}
 
 export function toCsv(rows: (string | number | null | undefined)[][]): string {
-  return rows
-    .map((r) =>
-      r
-        .map((v) => {
-          const s = v === null || v === undefined ? '' : String(v);
-          return needsQuotes.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-        })
-        .join(','),
-    )
-    .join('\r\n') + '\r\n';
+  return rows.map((r) => r.map(csvCell).join(',')).join('\r\n') + '\r\n';
+}
+
+/** Undoes csvCell's neutralising quote, so an exported file imports again unchanged. */
+export function unneutralise(cell: string): string {
+  return cell.length > 1 && cell[0] === "'" && FORMULA_START.test(cell.slice(1)) ? cell.slice(1) : cell;
 }

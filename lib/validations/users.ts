@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ROLES } from '@/lib/domain';
+import { PASSWORD_MAX_CHARS, passwordSchema } from '@/lib/auth/password-policy';
 
 export const roleSchema = z.enum(ROLES as unknown as [string, ...string[]], {
   error: `Role must be one of ${ROLES.join(', ')}`,
@@ -9,11 +10,16 @@ export const createUserSchema = z.object({
   name: z.string({ error: 'Name is required' }).trim().min(2, 'Name needs at least 2 characters').max(80),
   email: z.string({ error: 'E-mail is required' }).trim().toLowerCase().email('Enter a valid e-mail address').max(254),
   role: roleSchema,
-  password: z.string({ error: 'Password is required' }).min(10, 'Password needs at least 10 characters').max(200),
+  password: passwordSchema,
 });
 export type CreateUserInput = z.infer<typeof createUserSchema>;
 
 export const updateMeSchema = z.object({ units: z.enum(['imperial', 'metric']) });
+
+export const changePasswordSchema = z.object({
+  currentPassword: z.string({ error: 'Current password is required' }).min(1, 'Current password is required').max(PASSWORD_MAX_CHARS),
+  newPassword: passwordSchema,
+});
 
 /** An admin's change to a user: a new role, or deactivation / reactivation. */
 export const updateUserSchema = z

@@ -87,7 +87,7 @@ test('Harrow admin: Users nav, the organisation’s users only; adds an operator
   await page.getByLabel('E-mail').fill('rey@harrow.example');
   await page.getByLabel('First password').fill('short');
   await page.getByRole('button', { name: 'Add user' }).click();
-  await expect(page.getByText('Password needs at least 10 characters')).toBeVisible();
+  await expect(page.getByText('Password needs at least 12 characters')).toBeVisible();
   await page.getByLabel('First password').fill('rey-password-2026');
   await page.getByRole('button', { name: 'Add user' }).click();
   await expect(page.getByText('Rey Castillo (rey@harrow.example) can now sign in.')).toBeVisible();

@@ -12,7 +12,7 @@ const operator: CurrentUser = {
   name: 'Dana Okafor (invented)', email: 'operator@harrow.example', units: 'imperial',
 };
 const post = (body: unknown) =>
-  POST(new Request('http://t/api/analyze', { method: 'POST', body: typeof body === 'string' ? body : JSON.stringify(body) }));
+  POST(new Request('http://t/api/analyze', { method: 'POST', headers: { 'content-type': 'application/json' }, body: typeof body === 'string' ? body : JSON.stringify(body) }));
 
 describe('POST /api/analyze', () => {
   it('signed in: 200 with the real analysis', async () => {

@@ -1,8 +1,10 @@
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 
 // getCurrentUser is tested for real here; only the next-auth session lookup is replaced.
-const session = vi.hoisted(() => ({ userId: null as number | null }));
-vi.mock('@/lib/auth/session-claims', () => ({ getSessionUserId: async () => session.userId }));
+const session = vi.hoisted(() => ({ userId: null as number | null, version: 0 }));
+vi.mock('@/lib/auth/session-claims', () => ({
+  getSessionClaims: async () => (session.userId === null ? null : { userId: session.userId, sessionVersion: session.version }),
+}));
 
 import { getDb } from '@/db';
 import { ROLES, type Role } from '@/lib/domain';
@@ -11,6 +13,7 @@ import { AccessError, assertRole } from '@/lib/auth/roles';
 import { getCurrentUser, type CurrentUser } from '@/lib/auth/current-user';
 import { authOptions } from '@/lib/auth/options';
 import { freshSeededDb } from '@/tests/setup/db';
+import { endUserSessions } from '@/db/repositories/users';
 
 type Authorize = (credentials: Record<string, unknown> | undefined, req: unknown) => Promise<unknown>;
 const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
@@ -71,13 +74,28 @@ describe('getCurrentUser', () => {
     expect(await getCurrentUser()).toBeNull();
     await getDb().updateTable('users').set({ active: 1 }).where('id', '=', id).execute();
   });
+
+  it('is null once the user\'s session version has moved on (signed out, password changed)', async () => {
+    const id = await idOf('supervisor@harrow.example');
+    session.userId = id;
+    session.version = 0;
+    expect((await getCurrentUser())?.id).toBe(id);
+    await endUserSessions(getDb(), id);
+    expect(await getCurrentUser()).toBeNull();
+    session.version = 1;
+    expect((await getCurrentUser())?.id).toBe(id);
+    // A sign-out carrying an already-ended version leaves the newer session alone.
+    await endUserSessions(getDb(), id, 0);
+    expect((await getCurrentUser())?.id).toBe(id);
+    session.version = 0;
+  });
 });
 
 describe('credentials authorize', () => {
   it('signs in with the right password, carrying role and organisation; e-mail case and spaces do not matter', async () => {
     const org = await getDb().selectFrom('organisations').select('id').where('slug', '=', 'cobalt-flats').executeTakeFirstOrThrow();
     const user = await authorize({ email: '  Operator@Cobalt.example ', password: DEMO_PASSWORD }, {});
-    expect(user).toEqual({ id: String(await idOf('operator@cobalt.example')), name: 'Jules Amari', email: 'operator@cobalt.example', role: 'operator', organisationId: org.id });
+    expect(user).toEqual({ id: String(await idOf('operator@cobalt.example')), name: 'Jules Amari', email: 'operator@cobalt.example', role: 'operator', organisationId: org.id, sessionVersion: 0 });
   });
 
   it('refuses a wrong password, an unknown e-mail, malformed credentials and a deactivated user', async () => {
@@ -92,9 +110,9 @@ describe('credentials authorize', () => {
 
   it('puts the user id, role and organisation into the token and the session', async () => {
     const jwt = authOptions.callbacks!.jwt!;
-    const token = await jwt({ token: {}, user: { id: '7', role: 'trainer', organisationId: 3 } } as never);
-    expect(token).toMatchObject({ userId: 7, role: 'trainer', organisationId: 3 });
+    const token = await jwt({ token: {}, user: { id: '7', role: 'trainer', organisationId: 3, sessionVersion: 4 } } as never);
+    expect(token).toMatchObject({ userId: 7, role: 'trainer', organisationId: 3, sessionVersion: 4 });
     const s = await authOptions.callbacks!.session!({ session: { user: {}, expires: '' }, token } as never);
-    expect((s as { user: unknown }).user).toMatchObject({ id: 7, role: 'trainer', organisationId: 3 });
+    expect((s as { user: unknown }).user).toMatchObject({ id: 7, role: 'trainer', organisationId: 3, sessionVersion: 4 });
   });
 });

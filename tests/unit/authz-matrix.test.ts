@@ -37,6 +37,8 @@ import * as backgroundImage from '@/app/api/scenes/[id]/background/[uploadId]/ro
 import { makePng } from '@/tests/fixtures/images';
 import { squareOfPads } from '@/tests/lift/scenarios';
 import * as me from '@/app/api/me/route';
+import { DEMO_PASSWORD } from '@/db/seed/demo-users';
+import * as mePassword from '@/app/api/me/password/route';
 import * as lessons from '@/app/api/lessons/route';
 import * as lesson from '@/app/api/lessons/[id]/route';
 import { getDb } from '@/db';
@@ -532,6 +534,11 @@ const routes: MatrixRoute[] = [
   {
     method: 'PATCH', path: '/api/me', handler: me.PATCH, writes: ['users'],
     body: () => ({ units: 'metric' }),
+    expect: { '-': [401, 200, 200, 200, 200, 200] },
+  },
+  {
+    method: 'POST', path: '/api/me/password', handler: mePassword.POST, writes: ['users', 'audit_log'],
+    body: () => ({ currentPassword: DEMO_PASSWORD, newPassword: 'a fresh passphrase for the matrix' }),
     expect: { '-': [401, 200, 200, 200, 200, 200] },
   },
 ];

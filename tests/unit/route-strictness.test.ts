@@ -4,6 +4,7 @@ import * as version from '@/app/api/equipment/[id]/versions/[version]/route';
 import * as upload from '@/app/api/scenes/[id]/background/[uploadId]/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import * as equipmentOne from '@/app/api/equipment/[id]/route';
+import { log } from '@/lib/log';
 import { signInAs } from '@/tests/setup/auth-mock';
 import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { addAccessFixtures, sceneIdByTitle, TITLES, truckIdByUnit } from '@/tests/setup/fixtures';
@@ -87,7 +88,7 @@ function abortedRequest(method: string, firstChunk: string) {
 describe('a body that cannot be read', () => {
   it('PUT /api/scenes/[id] cut off mid-body: 400 naming the body, nothing logged, nothing written', async () => {
     signInAs(await demoUser('operator@harrow.example'));
-    const logged = vi.spyOn(console, 'error').mockImplementation(() => {});
+    const logged = vi.spyOn(log, 'error').mockImplementation(() => {});
     const before = await snapshotDb(db);
     const res = await scene.PUT(abortedRequest('PUT', '{"revision": 1, "document": {"version": 2, "obj'), { params: Promise.resolve({ id: draft }) });
     expect(res.status).toBe(400);
@@ -100,7 +101,7 @@ describe('a body that cannot be read', () => {
 
   it('the same for an admin’s profile update', async () => {
     signInAs(await demoUser('admin@harrow.example'));
-    const logged = vi.spyOn(console, 'error').mockImplementation(() => {});
+    const logged = vi.spyOn(log, 'error').mockImplementation(() => {});
     const res = await equipmentOne.PUT(abortedRequest('PUT', '{"name": "Unit'), { params: Promise.resolve({ id: truck }) });
     expect(res.status).toBe(400);
     expect(((await res.json()) as { issues: { path: string }[] }).issues[0].path).toBe('body');
@@ -109,7 +110,7 @@ describe('a body that cannot be read', () => {
 
   it('a handler that really fails is still logged as a 500 (the wrapper did not swallow everything)', async () => {
     signInAs(await demoUser('operator@harrow.example'));
-    const logged = vi.spyOn(console, 'error').mockImplementation(() => {});
+    const logged = vi.spyOn(log, 'error').mockImplementation(() => {});
     const broken = (await import('@/lib/api/route')).route({}, async () => {
       throw new Error('disk on fire');
     });

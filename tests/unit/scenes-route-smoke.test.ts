@@ -16,7 +16,7 @@ describe('scenes route', () => {
       'Coil transfer, Route 9 weigh station',
       'Overturned reefer trailer, Mill Creek on-ramp',
     ]);
-    const res = await POST(new Request('http://t/api/scenes', { method: 'POST', body: JSON.stringify({ title: 'Tanker on its side' }) }));
+    const res = await POST(new Request('http://t/api/scenes', { method: 'POST', body: JSON.stringify({ title: 'Tanker on its side' }), headers: { 'content-type': 'application/json' } }));
     expect(res.status).toBe(201);
     expect((await res.json()).revision).toBe(1);
   });
@@ -25,7 +25,7 @@ describe('scenes route', () => {
     signInAs(null);
     expect((await GET(new Request('http://t/api/scenes'))).status).toBe(401);
     signInAs(await demoUser('operator@harrow.example'));
-    const res = await POST(new Request('http://t/api/scenes', { method: 'POST', body: JSON.stringify({ title: 'x' }) }));
+    const res = await POST(new Request('http://t/api/scenes', { method: 'POST', body: JSON.stringify({ title: 'x' }), headers: { 'content-type': 'application/json' } }));
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.issues[0].path).toBe('title');

@@ -6,7 +6,7 @@ import { PUT } from '@/app/api/scenes/[id]/training/route';
 import { getDb } from '@/db';
 
 const put = (id: number | string, body: unknown) =>
-  PUT(new Request(`http://t/api/scenes/${id}/training`, { method: 'PUT', body: JSON.stringify(body) }), { params: Promise.resolve({ id: String(id) }) });
+  PUT(new Request(`http://t/api/scenes/${id}/training`, { method: 'PUT', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }), { params: Promise.resolve({ id: String(id) }) });
 
 async function sceneId(title: string) {
   return (await getDb().selectFrom('scenes').select('id').where('title', '=', title).executeTakeFirstOrThrow()).id;

@@ -1,8 +1,11 @@
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 
 // The route runs for real; only the next-auth session lookup is replaced, so getCurrentUser reads the database.
-const session = vi.hoisted(() => ({ userId: null as number | null }));
-vi.mock('@/lib/auth/session-claims', () => ({ getSessionUserId: async () => session.userId }));
+// A session carries the user's session version from when it began (see signInAt).
+const session = vi.hoisted(() => ({ userId: null as number | null, version: 0 }));
+vi.mock('@/lib/auth/session-claims', () => ({
+  getSessionClaims: async () => (session.userId === null ? null : { userId: session.userId, sessionVersion: session.version }),
+}));
 
 import { getDb } from '@/db';
 import { DEMO_PASSWORD } from '@/db/seed/demo-users';
@@ -14,9 +17,14 @@ import { freshSeededDb } from '@/tests/setup/db';
 type Authorize = (credentials: Record<string, unknown> | undefined, req: unknown) => Promise<unknown>;
 const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
 const idOf = async (email: string) => (await getDb().selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id;
+/** A fresh session for this user: the token carries their current session version. */
+async function signInAt(id: number) {
+  session.userId = id;
+  session.version = (await getDb().selectFrom('users').select('session_version').where('id', '=', id).executeTakeFirstOrThrow()).session_version;
+}
 
 async function patch(asEmail: string, id: number, body: unknown) {
-  session.userId = await idOf(asEmail);
+  await signInAt(await idOf(asEmail));
   const res = await PATCH(new Request('http://arcline.test/api/users/x', { method: 'PATCH', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }), { params: Promise.resolve({ id: String(id) }) });
   return { status: res.status, json: await res.json() };
 }
@@ -37,12 +45,14 @@ describe('PATCH /api/users/{id}', () => {
 
   it('deactivation ends the user’s session at once and refuses their sign-in; reactivation restores both', async () => {
     const op = await idOf('operator@harrow.example');
-    session.userId = op;
+    await signInAt(op);
+    const opVersion = session.version;
     expect((await getCurrentUser())?.id).toBe(op);
     expect(await authorize({ email: 'operator@harrow.example', password: DEMO_PASSWORD }, {})).toMatchObject({ email: 'operator@harrow.example' });
 
     expect((await patch('admin@harrow.example', op, { active: false })).json.active).toBe(0);
     session.userId = op; // the same session token, still presented
+    session.version = opVersion;
     expect(await getCurrentUser()).toBeNull();
     expect(await authorize({ email: 'operator@harrow.example', password: DEMO_PASSWORD }, {})).toBeNull();
 

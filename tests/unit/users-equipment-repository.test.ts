@@ -36,7 +36,10 @@ describe('users', () => {
     expect(u.email).toBe('casey.ng@harrow.example');
     expect(u).not.toHaveProperty('password_hash');
     expect((await findUserByEmail(db, 'CASEY.NG@harrow.example'))?.id).toBe(u.id);
-    await expect(createUser(db, { organisation_id: cobalt, email: 'casey.ng@HARROW.example', name: 'Dup', role: 'operator', password_hash: 'h' })).rejects.toThrow(/UNIQUE/);
+    await expect(createUser(db, { organisation_id: harrow, email: 'casey.ng@HARROW.example', name: 'Dup', role: 'operator', password_hash: 'h' })).rejects.toThrow(/UNIQUE/);
+    // Another organisation may use the same address: e-mail is unique within an organisation only.
+    const other = await createUser(db, { organisation_id: cobalt, email: 'casey.ng@HARROW.example', name: 'Casey Ng (Cobalt)', role: 'operator', password_hash: 'h' });
+    expect(other.organisation_id).toBe(cobalt);
   });
 
   it('lists only the organisation’s users, without password hashes', async () => {

@@ -10,7 +10,9 @@ import { rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
 
-const emailTaken = () => new HttpError(409, 'email: an account with this e-mail already exists', [{ path: 'email', message: 'Already in use' }]);
+// Only this organisation's accounts count: an address may also be in use elsewhere, and saying so would
+// tell one organisation's admin about another's people.
+const emailTaken = () => new HttpError(409, 'email: an account in your organisation already has this e-mail', [{ path: 'email', message: 'Already in use in your organisation' }]);
 
 export const GET = route({ roles: rolesFor('manageUsers') }, async ({ user }) => {
   return { items: await listUsers(getDb(), user.organisationId) };
@@ -21,7 +23,7 @@ export const POST = route({ roles: rolesFor('manageUsers'), body: createUserSche
   const passwordHash = await hashPassword(body.password);
   try {
     const created = await inTransaction(getDb(), async (trx) => {
-      if (await findUserByEmail(trx, body.email)) throw emailTaken();
+      if (await findUserByEmail(trx, body.email, user.organisationId)) throw emailTaken();
       const row = await createUser(trx, {
         organisation_id: user.organisationId,
         email: body.email,

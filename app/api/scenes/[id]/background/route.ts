@@ -2,7 +2,8 @@ import { getDb } from '@/db';
 import { getScene } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError, zodIssues, describeIssues } from '@/lib/api/errors';
-import { ACCEPTED_IMAGE_TYPES, sniffImage } from '@/lib/image-sniff';
+import { ACCEPTED_IMAGE_TYPES, oversizedImageReason, sniffImage } from '@/lib/image-sniff';
+import { readBodyLimited } from '@/lib/api/body';
 import { storeSceneUpload } from '@/lib/server/store-scene-upload';
 import { MAX_BACKGROUND_BYTES, MULTIPART_OVERHEAD_BYTES, backgroundUploadForm } from '@/lib/validations/uploads';
 import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
@@ -19,13 +20,17 @@ export const POST = route({ roles: rolesFor('editScene'), params: idParams }, as
   if (!scene) throw new HttpError(404, 'Scene not found');
   if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can add a background image');
 
-  // Refuse an oversized body before reading it, when the client declares its length.
-  const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > MAX_BACKGROUND_BYTES + MULTIPART_OVERHEAD_BYTES) throw tooLarge();
-
+  // Counted while it streams: a declared length over the limit is refused unread, a chunked one at the limit.
+  let raw: Uint8Array;
+  try {
+    raw = await readBodyLimited(req, MAX_BACKGROUND_BYTES + MULTIPART_OVERHEAD_BYTES, 'file');
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 413) throw tooLarge();
+    throw err;
+  }
   let form: FormData;
   try {
-    form = await req.formData();
+    form = await new Response(raw as BodyInit, { headers: { 'content-type': req.headers.get('content-type') ?? '' } }).formData();
   } catch {
     throw new HttpError(400, 'file: send the image as multipart/form-data with a "file" field', [{ path: 'file', message: 'Not a multipart form' }]);
   }
@@ -41,10 +46,12 @@ export const POST = route({ roles: rolesFor('editScene'), params: idParams }, as
   const bytes = new Uint8Array(await file.arrayBuffer());
   const image = sniffImage(bytes);
   if (!image) {
-    throw new HttpError(415, 'file: only PNG, JPEG or WebP images are accepted (checked by the file content, not its name)', [
+    throw new HttpError(415, 'file: only PNG, JPEG or WebP images with a readable header are accepted (checked by decoding the file, not by its name)', [
       { path: 'file', message: `Not one of ${ACCEPTED_IMAGE_TYPES.join(', ')}` },
     ]);
   }
+  const oversized = oversizedImageReason(image);
+  if (oversized) throw new HttpError(422, `file: ${oversized}`, [{ path: 'file', message: 'Too many pixels' }]);
   const upload = await storeSceneUpload(db, { organisationId: user.organisationId, sceneId: scene.id, uploaderId: user.id, bytes, image });
   return Response.json(
     {

@@ -5,8 +5,11 @@ import { route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { openObjectStream } from '@/lib/storage';
 import { uploadParams } from '@/lib/validations/uploads';
+import { UPLOAD_CSP } from '@/lib/security/content-security-policy';
 
 export const runtime = 'nodejs';
+
+const EXTENSION: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/webp': 'webp' };
 
 /**
  * Streams a scene's background image to users who can read the scene. Anyone else, including every
@@ -25,9 +28,12 @@ export const GET = route({ params: uploadParams }, async ({ user, params }) => {
     headers: {
       'Content-Type': upload.mime,
       'Content-Length': String(opened.bytes),
-      // Private: the image is organisation data. Immutable: an upload id never names different bytes.
-      'Cache-Control': 'private, max-age=31536000, immutable',
+      // Organisation data: never kept by shared or browser caches, like every API answer.
+      'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
+      // Shown inline as an image; opened on its own it runs nothing and can load nothing (sandbox).
+      'Content-Disposition': `inline; filename="scene-${scene.id}-background-${upload.id}.${EXTENSION[upload.mime] ?? 'bin'}"`,
+      'Content-Security-Policy': UPLOAD_CSP,
     },
   });
 });
