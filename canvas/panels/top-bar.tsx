@@ -6,6 +6,7 @@ import { zoomPercent } from '../editor/camera';
 import { ToolButton } from './button';
 import { SceneSaveBar } from '../persistence/scene-save-bar';
 import { parseSceneDocument } from '@/lib/scene/parse';
+import { PlanExportMenu } from '../export/plan-export-menu';
 
 /** Scene title and status, undo/redo, snapping and zoom. */
 export function TopBar({ scene, user }: { scene: { id: number; title: string; status: string; revision: number; updatedAt: string }; user: { name: string; role: string } }) {
@@ -39,6 +40,7 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
         parseDocument={parseSceneDocument}
         compact
       />
+      <PlanExportMenu sceneId={scene.id} title={scene.title} />
       {!readOnly && (
         <>
           <ToolButton title="Undo (Ctrl Z)" aria-label="Undo" disabled={!canUndo} onClick={() => store.getState().undo()}>

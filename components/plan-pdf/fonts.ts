@@ -1,5 +1,7 @@
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { Font } from '@react-pdf/renderer';
+import { woffToSfnt } from './woff-to-sfnt';
 
 /**
  * Inter Tight from the app's own @fontsource package (nothing downloaded). The .woff files, not .woff2:
@@ -11,7 +13,9 @@ export const PDF_FONT = 'Inter Tight';
 
 export function registerPdfFonts(): void {
   if (registered) return;
-  const file = (w: number) => path.join(process.cwd(), 'node_modules/@fontsource/inter-tight/files', `inter-tight-latin-${w}-normal.woff`);
+  const woff = (w: number) => readFileSync(path.join(process.cwd(), 'node_modules/@fontsource/inter-tight/files', `inter-tight-latin-${w}-normal.woff`));
+  // Handed over unwrapped, as a data URL: see ./woff-to-sfnt for why.
+  const file = (w: number) => `data:font/ttf;base64,${woffToSfnt(woff(w)).toString('base64')}`;
   Font.register({
     family: PDF_FONT,
     fonts: [

@@ -17,7 +17,7 @@ export function StabilitySection({ d }: { d: PlanData }) {
   const w = r.worstCase;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Stability</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Stability</Text>
       <Text style={s.p}>
         Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan’s limit is {limit} %
         {w.percentOfTipping <= limit ? `, a margin of ${(limit - w.percentOfTipping).toFixed(1)} points.` : `; ${(w.percentOfTipping - limit).toFixed(1)} points over it.`}
@@ -43,7 +43,7 @@ export function ClearanceSection({ d }: { d: PlanData }) {
   const limit = d.doc.limits.clearance;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Clearances</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Clearances</Text>
       <Text style={s.p}>Plan’s clearance limit: {dualLength(limit, u)} beside or above each part and obstacle.</Text>
       <Table
         columns={[{ title: 'Object', flex: 3 }, { title: 'Beside (plan gap)', flex: 2.5 }, { title: 'Above its top', flex: 2.5 }, { title: 'Nearest at slew', flex: 1.5 }, { title: 'Against limit', flex: 1.6 }]}
@@ -81,7 +81,7 @@ export function ChecksSection({ d }: { d: PlanData }) {
   if (!r) return null;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Every check</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Every check</Text>
       {r.checks.map((c) => (
         <View key={c.id} style={{ flexDirection: 'row', marginBottom: 2 }} wrap={false}>
           <Text style={[{ width: 62 }, c.ok ? s.within : s.over]}>{checkStatus(c)}</Text>

@@ -11,7 +11,7 @@ export function DetailsSection({ d }: { d: PlanData }) {
   const u = d.meta.units;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Job and site</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Job and site</Text>
       <KeyValues
         items={[
           ['Customer', x.job.customer],
@@ -67,7 +67,7 @@ export function SignOffSection({ d }: { d: PlanData }) {
   const p = d.details.people;
   return (
     <View wrap={false}>
-      <Text style={s.h2} minPresenceAhead={60}>Sign-off</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Sign-off</Text>
       <Text style={s.p}>
         Prepared by {d.meta.savedBy}, revision {d.meta.revision} saved {when(d.meta.savedAt)}.
       </Text>

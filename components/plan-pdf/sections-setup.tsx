@@ -15,7 +15,7 @@ export function EquipmentSection({ d }: { d: PlanData }) {
   const chartCheck = d.result?.checks.find((c) => c.code === 'load-chart' && !c.upperWeight);
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Equipment configuration</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Equipment configuration</Text>
       <KeyValues
         items={[
           ['Truck profile', `${d.truckName ?? 'Unknown profile'}${d.profile?.unitNumber ? `, unit ${d.profile.unitNumber}` : ''} (profile ${d.profile?.id ?? '-'}, version ${d.profile?.version ?? '-'})`],
@@ -43,7 +43,7 @@ export function LoadSection({ d }: { d: PlanData }) {
   const info = d.details.load;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Load</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Load</Text>
       <KeyValues
         items={[
           ['Description', info.description || l.label || shape],
@@ -65,7 +65,7 @@ export function RiggingSection({ d }: { d: PlanData }) {
   const u = d.meta.units;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Rigging</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Rigging</Text>
       {d.rigging.length === 0 ? (
         <Text style={s.p}>No rigging is picked on this plan.</Text>
       ) : (
@@ -98,7 +98,7 @@ export function GroundSection({ d }: { d: PlanData }) {
   const source = choice ? `IBC Table 1806.2 presumptive value for ${choice.label.toLowerCase()}` : 'entered for this site';
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={60}>Ground</Text>
+      <Text style={s.h2} minPresenceAhead={120}>Ground</Text>
       <Text style={s.p}>
         Allowable ground pressure {dualPressure(soil.allowable, u)}, {source}. Each support’s largest reaction over the swing:
       </Text>

@@ -121,6 +121,7 @@ export function truckToLiftParts(spec: TruckSpec, setup: TruckSetup) {
     elevation: setup.boom.elevation,
     mass: spec.boom.mass,
     cgFraction: boomCgFraction(spec, setup.boom.length),
+    ...(spec.boom.width !== undefined ? { width: spec.boom.width } : {}),
   };
   const padRatings = Object.fromEntries(spec.outriggers.legs.filter((l) => setup.legs[l.id]).map((l) => [l.id, l.padRating]));
   return { supports, masses, boom, bodies: bodyPolygons(spec), padRatings, loadChart: toEngineLoadChart(spec.loadChart) };

@@ -73,6 +73,8 @@ export const boomSchema = z.object({
   stages: z.array(boomStageSchema).min(1, 'The boom needs at least its retracted length').max(8, 'At most 8 boom stages'),
   elevation: z.object({ min: angle('Lowest elevation', -30, 90), max: angle('Highest elevation', -30, 90) }),
   mass: num('Boom mass').refine((v) => v > 0, 'Boom mass must be more than 0 (negative or zero masses are refused)'),
+  /** Overall width of the boom, m: the lift engine checks a capsule this wide against obstacles (its default when omitted). */
+  width: num('Boom width').refine((v) => v >= 0.05 && v <= 10, 'Boom width must be from 0.05 m to 10 m').optional(),
 });
 
 export const legSchema = z.object({

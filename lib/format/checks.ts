@@ -101,8 +101,10 @@ function titleOf(c: Check): string {
         return `Tipping about the ${name}`;
       case 'bearing':
         return `Ground under the ${name} pad`;
-      case 'clearance':
-        return c.subject.kind === 'truck-part' ? `Load clear of the truck's ${name}` : `Load clear of ${name}`;
+      case 'clearance': {
+        const part = c.facts.part === 'boom' ? 'Boom' : 'Load';
+        return c.subject.kind === 'truck-part' ? `${part} clear of the truck's ${name}` : `${part} clear of ${name}`;
+      }
       case 'power-line':
         return `Power line ${name}`;
       case 'rigging':
@@ -135,6 +137,11 @@ function body(c: Check, units: UnitSystem, verdict: string): string {
       const what = c.subject.kind === 'truck-part' ? `the truck's ${name}` : `“${name}”`;
       const f = c.facts;
       const limit = formatLength(c.limit ?? 0, units);
+      if (f.part === 'boom') {
+        const where = `${formatLength(f.alongBoom, units)} out along the boom, ${formatLength(f.height, units)} up`;
+        if (f.strikes) return `The boom would strike ${what} at slew ${slewWords(c.slew)} (${where}) (${verdict}).`;
+        return `The boom passes ${formatLength(c.value ?? 0, units)} from ${what} (nearest at slew ${slewWords(c.slew)}, ${where}); limit ${limit} (${verdict}).`;
+      }
       if (!f.overlapsInPlan) {
         const above = f.horizontal < (c.limit ?? 0) && c.ok ? ` and ${formatLength(f.vertical, units)} above its top` : '';
         return `The load passes ${formatLength(f.horizontal, units)} from ${what} in plan (nearest at slew ${slewWords(c.slew)})${above}; limit ${limit} (${verdict}).`;

@@ -1,8 +1,9 @@
 import { CAUTION_LINES } from '@/lib/caution';
 import { reactionMaxima, type ReactionMaximum } from './bearing';
-import { bearingCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck, lineSubject, type Check, type UpperWeight } from './checks';
+import { bearingCheck, boomClearanceCheck, clearanceCheck, loadChartCheck, powerLineCheck, riggingCheck, stabilityCheck, lineSubject, type Check, type UpperWeight } from './checks';
 import { sideOf } from './names';
 import { clearanceOver } from './clearance';
+import { boomClearanceOver, boomMeets } from './boom-clearance';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
 import { powerLineOver } from './power-lines';
@@ -77,6 +78,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
   const atWorstCase = describeReactions(p, state);
   const maxima = reactionMaxima(p, step);
   const clearances = p.targets.map((t) => clearanceOver(p, t));
+  const boomClearances = p.targets.filter(boomMeets).map((t) => boomClearanceOver(p, t));
   const powerLines = p.powerLines.map((l) => powerLineOver(p, l));
   const rigging = riggingVerdicts(p);
 
@@ -91,6 +93,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
 
   const checks = massChecks(p, worst, maxima, rigging, null);
   clearances.forEach((c) => checks.push(clearanceCheck(c, p.input.limits.clearance)));
+  boomClearances.forEach((c) => checks.push(boomClearanceCheck(c, p.input.limits.clearance)));
   powerLines.forEach((l) => checks.push(powerLineCheck(l)));
 
   let upper: LiftResult['upperWeight'] = null;
@@ -115,6 +118,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
     lineChanges: sweep.changes,
     reactions: { atWorstCase, maxima, tipsAtWorstCase: state.tips },
     clearances,
+    boomClearances,
     powerLines,
     rigging,
     loadChart: chart ? { ...percentOfRated(chart, p.radius, p.input.boom.length, p.hookLoad), radius: p.radius, boomLength: p.input.boom.length } : null,

@@ -1,6 +1,7 @@
 import { LiftError } from './errors';
 import { normalizeDegrees } from './types';
 import { clearanceAt, type Clearance } from './clearance';
+import { boomClearanceAt, boomMeets, type BoomClearance } from './boom-clearance';
 import { powerLineAt, type PowerLineClearance } from './power-lines';
 import type { PreparedLift } from './prepare';
 import { createReactionState, describeReactions, reactionsAt, type SupportReaction } from './reactions';
@@ -22,6 +23,8 @@ export interface SlewSnapshot {
   /** True when the supports cannot carry the load without one lifting past three (the truck tips). */
   tips: boolean;
   clearances: Clearance[];
+  /** The boom against the same parts and obstacles (not the part under the slew axis). */
+  boomClearances: BoomClearance[];
   powerLines: PowerLineClearance[];
 }
 
@@ -43,6 +46,7 @@ export function analyzeAtSlew(p: PreparedLift, at: number): SlewSnapshot {
     reactions: describeReactions(p, state),
     tips: state.tips,
     clearances: p.targets.map((t) => clearanceAt(p, t, slew)),
+    boomClearances: p.targets.filter(boomMeets).map((t) => boomClearanceAt(p, t, slew)),
     powerLines: p.powerLines.map((l) => powerLineAt(p, l, slew)),
   };
 }

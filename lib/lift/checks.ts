@@ -1,5 +1,6 @@
 import type { ReactionMaximum } from './bearing';
 import type { Clearance } from './clearance';
+import type { BoomClearance } from './boom-clearance';
 import type { ChartLookup } from './load-chart';
 import { padName, sideOf, type TruckSide } from './names';
 import type { PowerLineClearance, PowerLineRule } from './power-lines';
@@ -56,6 +57,7 @@ export type Check =
   | (CheckBase & { code: 'stability'; facts: { tippingLoad: number | null } })
   | (CheckBase & { code: 'bearing'; facts: { force: number; underCribbing: boolean; liftsOff: boolean } })
   | (CheckBase & { code: 'clearance'; facts: Omit<Clearance, 'target' | 'name' | 'kind' | 'slew'> & { part: 'load' } })
+  | (CheckBase & { code: 'clearance'; facts: Omit<BoomClearance, 'target' | 'name' | 'kind' | 'slew' | 'distance'> & { part: 'boom' } })
   | (CheckBase & { code: 'power-line'; facts: { nearest: PowerLineClearance['nearest']; rule: PowerLineRule } })
   | (CheckBase & { code: 'rigging'; facts: RiggingFacts & { element: RiggingVerdict['element'] } })
   | (CheckBase & { code: 'load-chart'; facts: Omit<ChartLookup, 'rated'> & { rated: number | null; radius: number; boomLength: number } });
@@ -130,6 +132,17 @@ export function clearanceCheck(c: Clearance, limit: number): Check {
     ...figures({ value, limit, sense: 'at-least', status }),
     slew: c.slew, upperWeight: null,
     facts: { horizontal: c.horizontal, vertical: c.vertical, overlapsInPlan: c.overlapsInPlan, conflict: c.conflict, part: 'load' },
+  };
+}
+
+/** The boom clears a part when its surface stays the plan's clearance limit away from it, in 3D. */
+export function boomClearanceCheck(c: BoomClearance, limit: number): Check {
+  return {
+    id: `clearance:${c.target}:boom`, code: 'clearance',
+    subject: { kind: c.kind === 'body' ? 'truck-part' : 'obstacle', ids: [c.target], names: [c.name] }, quantity: 'length',
+    ...figures({ value: c.distance, limit, sense: 'at-least', ...(c.strikes ? { status: 'beyond' as const } : {}) }),
+    slew: c.slew, upperWeight: null,
+    facts: { alongBoom: c.alongBoom, height: c.height, strikes: c.strikes, part: 'boom' },
   };
 }
 

@@ -13,6 +13,7 @@ export * from './bearing';
 export * from './soil';
 export * from './footprint';
 export * from './clearance';
+export * from './boom-clearance';
 export * from './power-lines';
 export * from './segment3d';
 export * from './rigging-tables';

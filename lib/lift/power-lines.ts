@@ -76,7 +76,8 @@ export function powerLineDistanceAt(p: PreparedLift, line: PowerLine, deg: numbe
   const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
   const hx = c * p.hookX0 - s * p.hookY0, hy = s * p.hookX0 + c * p.hookY0;
   const { a: la, b: lb } = line;
-  const boom = segmentSegmentDistance(px, py, p.pivotZ, hx, hy, p.tipZ, la.x, la.y, la.z, lb.x, lb.y, lb.z);
+  // The boom's surface: its axis less its radius (a capsule, as in boom-clearance.ts).
+  const boom = Math.max(0, segmentSegmentDistance(px, py, p.pivotZ, hx, hy, p.tipZ, la.x, la.y, la.z, lb.x, lb.y, lb.z) - p.boomRadius);
   const hoist = segmentSegmentDistance(hx, hy, p.tipZ, hx, hy, p.loadTop, la.x, la.y, la.z, lb.x, lb.y, lb.z);
   const fp = p.footprint;
   if (fp.kind === 'polygon') {

@@ -1,6 +1,6 @@
 import { assertMass, LiftError } from './errors';
 import { validateLoadChart } from './load-chart';
-import type { LiftInput, LiftInputIn, PowerLine } from './schema';
+import { BOOM_WIDTH, type LiftInput, type LiftInputIn, type PowerLine } from './schema';
 import { checkPolygon, parseLiftInput, siteObjects } from './validate';
 import { supportPolygon, type SupportPoint, type TippingLineGeom } from './support-polygon';
 import { footprintLocal, type FootprintLocal } from './footprint';
@@ -62,6 +62,8 @@ export interface PreparedLift {
   sign: 1 | -1;
   /** True when the swing covers every slew (see swing.ts for the rule). */
   fullTurn: boolean;
+  /** Half the boom's width, m: the radius of the capsule checked against parts, obstacles and power lines. */
+  boomRadius: number;
 }
 
 
@@ -137,6 +139,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     targets,
     powerLines: [...input.powerLines, ...fromSite.powerLines],
     from, span, sign, fullTurn,
+    boomRadius: (input.boom.width ?? BOOM_WIDTH) / 2,
   };
 }
 

@@ -1,6 +1,7 @@
 import type { ReactionMaximum } from './bearing';
 import type { Check } from './checks';
 import type { Clearance } from './clearance';
+import type { BoomClearance } from './boom-clearance';
 import type { ChartLookup } from './load-chart';
 import type { PowerLineClearance } from './power-lines';
 import type { SupportReaction } from './reactions';
@@ -59,6 +60,8 @@ export interface LiftResult {
   lineChanges: LineChange[];
   reactions: { atWorstCase: SupportReaction[]; maxima: ReactionMaximum[]; tipsAtWorstCase: boolean };
   clearances: Clearance[];
+  /** The boom (a capsule) against the same parts and obstacles: nearest gap, where on the boom, at which slew. */
+  boomClearances: BoomClearance[];
   powerLines: PowerLineClearance[];
   rigging: RiggingVerdict[];
   loadChart: (ChartLookup & { percent: number | null; radius: number; boomLength: number }) | null;

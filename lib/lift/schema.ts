@@ -73,6 +73,12 @@ export const massSchema = z.object({
   rotates: z.boolean().default(false),
 });
 
+/**
+ * Boom width used when the input gives none, m: wide for a heavy rotator's boom box, so that a gap is not
+ * overstated (common practice, no published source).
+ */
+export const BOOM_WIDTH = 0.9;
+
 export const boomSchema = z.object({
   pivot: truckPoint3,
   /** Pivot to tip, m (0 is refused as zero-length-boom). */

@@ -2,6 +2,9 @@
  * Closest distance between two 3D segments, after C. Ericson, Real-Time Collision Detection (2005),
  * §5.1.9 "Closest points of two line segments". Plain numbers, no allocation.
  */
+/** Parameters of the closest points of the last call: s along the first segment, t along the second. */
+export const closest = { s: 0, t: 0 };
+
 export function segmentSegmentDistance(
   p1x: number, p1y: number, p1z: number, q1x: number, q1y: number, q1z: number,
   p2x: number, p2y: number, p2z: number, q2x: number, q2y: number, q2z: number,
@@ -40,6 +43,8 @@ export function segmentSegmentDistance(
       }
     }
   }
+  closest.s = s;
+  closest.t = t;
   const dx = p1x + d1x * s - (p2x + d2x * t);
   const dy = p1y + d1y * s - (p2y + d2y * t);
   const dz = p1z + d1z * s - (p2z + d2z * t);

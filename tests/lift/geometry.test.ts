@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeAtSlew, analyzeLift, prepareLift, segmentSegmentDistance, siteToTruck, truckToSite } from '@/lib/lift';
+import { analyzeAtSlew, analyzeLift, prepareLift, segmentSegmentDistance, siteToTruck, truckToSite, BOOM_WIDTH } from '@/lib/lift';
 import { M_PER_FT } from '@/lib/units';
 import { squareOfPads } from './scenarios';
 
@@ -64,20 +64,22 @@ describe('power lines', () => {
     expect(segmentSegmentDistance(0, 0, 0, 1, 0, 0, 3, 0, 0, 4, 0, 0)).toBeCloseTo(2, 12);
   });
   it('a line above the boom tip: the nearest part, distance and Table A requirement', () => {
-    // Tip at (6, 0, 2) over slew 0; a 13.8 kV line along y at x = 6, z = 9 is 7 m above the tip.
+    // Tip at (6, 0, 2) over slew 0; a 13.8 kV line along y at x = 6, z = 9 is 7 m above the boom's axis at
+    // the tip, so 7 − 0.45 = 6.55 m above its surface (default boom width 0.9 m, lib/lift/schema.ts).
     // Source: geometry [derived]; 10 ft up to 50 kV, 29 CFR 1926.1408 Table A [read].
     const r = analyzeLift(squareOfPads({
       swing: { from: 0, to: 0, direction: 'ccw' },
       powerLines: [{ id: 'feeder', a: { x: 6, y: -30, z: 9 }, b: { x: 6, y: 30, z: 9 }, kV: 13.8 }],
     }));
     expect(r.powerLines[0]).toMatchObject({ nearest: 'boom', required: 10 * M_PER_FT });
-    expect(r.powerLines[0].distance).toBeCloseTo(7, 9);
+    expect(r.powerLines[0].distance).toBeCloseTo(7 - BOOM_WIDTH / 2, 9);
     expect(r.checks.find((c) => c.id === 'power-line:feeder')?.ok).toBe(true);
   });
   it('over the swing, the smallest distance is found where the boom passes under the line', () => {
-    // A line at y = 4, z = 2.5 parallel to x: the boom (z = 2) at slew 90 reaches y = 6, passing 0.5 m below.
+    // A line at y = 4, z = 2.5 parallel to x: the boom (z = 2) at slew 90 reaches y = 6, its axis passing
+    // 0.5 m below, its surface 0.5 − 0.45 = 0.05 m below [derived].
     const r = analyzeLift(squareOfPads({ powerLines: [{ id: 'drop', a: { x: -20, y: 4, z: 2.5 }, b: { x: 20, y: 4, z: 2.5 }, kV: 7.2 }] }));
-    expect(r.powerLines[0].distance).toBeCloseTo(0.5, 2);
+    expect(r.powerLines[0].distance).toBeCloseTo(0.5 - BOOM_WIDTH / 2, 2);
     expect(r.checks.find((c) => c.id === 'power-line:drop')?.ok).toBe(false);
   });
 });

@@ -48,6 +48,8 @@ export interface MatrixRoute {
   checkId?: boolean;
   /** Expected statuses per target name (a key of the targets table). */
   expect: Record<string, Statuses>;
+  /** Per-test timeout, ms, for routes that do heavy work (rendering a document) on a shared machine. */
+  timeout?: number;
 }
 
 /**
@@ -115,7 +117,7 @@ export function describeMatrix(title: string, routes: MatrixRoute[], targets: Re
             }
             if (!res.ok) expect(isJson && typeof json.error).toBe('string');
             else if (target.id && route.method === 'GET' && route.checkId !== false) expect(String(json.id)).toBe(target.id);
-          });
+          }, route.timeout);
         });
       }
     }

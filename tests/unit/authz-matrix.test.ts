@@ -221,7 +221,7 @@ const routes: MatrixRoute[] = [
     },
   },
   {
-    method: 'GET', path: '/api/scenes/[id]/plan.pdf', handler: planPdf.GET, checkId: false,
+    method: 'GET', path: '/api/scenes/[id]/plan.pdf', handler: planPdf.GET, checkId: false, timeout: 120_000,
     expect: {
       'Harrow: operator’s draft': [401, 200, 200, 200, 200, 404],
       'Harrow: peer’s draft': [401, 404, 200, 200, 200, 404],

@@ -26,7 +26,7 @@ export function PadTable({ result, snapshot, units, allowable }: { result: LiftR
               const ok = m.pressure <= allowable;
               return (
                 <tr key={m.support} className="border-b border-paper-line">
-                  <td className="py-1 pr-2 font-semibold">
+                  <td className="whitespace-nowrap py-1 pr-2 font-semibold">
                     {m.name}
                     <span className="block text-[11px] font-normal text-ink-muted">{crib(m.support) ? 'on cribbing' : 'pad only'}</span>
                   </td>

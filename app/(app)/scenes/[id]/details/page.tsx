@@ -14,6 +14,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { describeAudit } from '@/components/scenes/audit-words';
+import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
 import { mayEditScene } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Scene details' };
@@ -48,14 +49,18 @@ export default async function SceneDetailsPage({ params }: Props) {
         eyebrow="Scene details"
         title={<span data-testid="scene-title">{scene.title}</span>}
         actions={
-          <>
-            <ButtonLink href={`/scenes/${scene.id}/replay`} variant="secondary" size="lg">
-              Replay
-            </ButtonLink>
+          <div className="flex flex-wrap gap-3">
             <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
               Open in editor
             </ButtonLink>
-          </>
+            <ButtonLink href={`/scenes/${scene.id}/replay`} variant="secondary" size="lg">
+              Replay
+            </ButtonLink>
+            <ButtonLink href={`/scenes/${scene.id}/plan`} variant="secondary" size="lg">
+              Plan details
+            </ButtonLink>
+            <PlanDownloadLink sceneId={scene.id} size="lg" />
+          </div>
         }
       />
       <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">

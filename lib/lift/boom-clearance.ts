@@ -1,0 +1,152 @@
+import { pointInPolygon, pointPolygonDistance, pointSegmentDist2, segmentsIntersect } from './geometry';
+import { slewAt, type PreparedLift, type Target } from './prepare';
+import { lipschitzMin } from './search';
+import { closest, segmentSegmentDistance } from './segment3d';
+
+/**
+ * The boom against obstacles and the truck's own parts, in 3D. The boom is a capsule: its axis runs from
+ * the pivot to the tip, its radius is half its width (boom.width, from the truck profile; schema BOOM_WIDTH when
+ * not given). A part is a right prism from the ground to its top. The gap is the distance from the axis to
+ * the prism less the radius; 0 and `strikes` when they meet. Below the part's top the nearest point of the
+ * prism is level with the boom, so the distance there is a plan distance; above it, the nearest point is
+ * on the top face (its edges, or straight below an end of the boom).
+ *
+ * Not checked against the boom: the body part under the slew axis (the turret stands on it; the boom's
+ * heel is fixed above it, not swung into it).
+ */
+export interface BoomClearance {
+  target: string;
+  /** What results call the part or obstacle (the input's name, else its id). */
+  name: string;
+  kind: 'body' | 'obstacle';
+  /** Smallest gap between the boom's surface and the part over the swing, m (0 when they meet). */
+  distance: number;
+  slew: number;
+  /** Where on the boom it comes nearest: metres from the pivot along the boom, and that point's height, m. */
+  alongBoom: number;
+  height: number;
+  strikes: boolean;
+}
+
+
+/** Parameter along the boom (0 pivot, 1 tip) of the last nearest point found. */
+let nearestU = 0;
+
+/** Plan distance from segment a–b to a polygon's area; sets planT to the parameter of the nearest point on a–b. */
+let planT = 0;
+function planSegmentPolygon(ax: number, ay: number, bx: number, by: number, poly: Float64Array, n: number): number {
+  if (pointInPolygon(ax, ay, poly, n)) {
+    planT = 0;
+    return 0;
+  }
+  let best = Infinity;
+  const dx = bx - ax, dy = by - ay, len2 = dx * dx + dy * dy;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const cx = poly[2 * j], cy = poly[2 * j + 1], ex = poly[2 * i], ey = poly[2 * i + 1];
+    if (segmentsIntersect(ax, ay, bx, by, cx, cy, ex, ey)) {
+      // Where the boom's plan line crosses this edge (the first crossing is near enough for "where").
+      const fx = ex - cx, fy = ey - cy, den = dx * fy - dy * fx;
+      planT = den !== 0 ? Math.min(1, Math.max(0, ((cx - ax) * fy - (cy - ay) * fx) / den)) : 0;
+      return 0;
+    }
+    const dv = pointSegmentDist2(cx, cy, ax, ay, bx, by);
+    if (dv < best) {
+      best = dv;
+      planT = len2 > 0 ? Math.min(1, Math.max(0, ((cx - ax) * dx + (cy - ay) * dy) / len2)) : 0;
+    }
+  }
+  for (const [t, x, y] of [[0, ax, ay], [1, bx, by]] as const) {
+    const d = pointPolygonDistance(x, y, poly, n);
+    if (d * d < best) {
+      best = d * d;
+      planT = t;
+    }
+  }
+  return Math.sqrt(best);
+}
+
+/** Distance from the boom's axis (pivot p, tip q) to a prism from the ground to `top`; sets nearestU. */
+export function boomAxisToPrism(px: number, py: number, pz: number, qx: number, qy: number, qz: number, t: Target): number {
+  const dz = qz - pz;
+  // Parameters of the part of the axis at or below the top: [lo0, lo1]; the rest is above.
+  let lo0 = 0, lo1 = 1;
+  if (dz === 0) {
+    if (pz > t.top) lo1 = -1;
+  } else {
+    const ut = (t.top - pz) / dz;
+    if (dz > 0) lo1 = Math.min(1, ut);
+    else lo0 = Math.max(0, ut);
+  }
+  let best = Infinity;
+  if (lo1 >= lo0) {
+    const ax = px + (qx - px) * lo0, ay = py + (qy - py) * lo0, bx = px + (qx - px) * lo1, by = py + (qy - py) * lo1;
+    best = planSegmentPolygon(ax, ay, bx, by, t.poly, t.n);
+    nearestU = lo0 + (lo1 - lo0) * planT;
+    if (best === 0) return 0;
+  }
+  // Above the top: the two ends of the upper piece straight over the face, and the face's edges.
+  const up = lo1 < lo0 ? [0, 1] : dz > 0 ? [Math.max(0, lo1), 1] : [0, Math.min(1, lo0)];
+  if (up[1] <= up[0] && lo1 >= lo0) return best;
+  const [u0, u1] = up;
+  const sx = px + (qx - px) * u0, sy = py + (qy - py) * u0, sz = pz + dz * u0;
+  const ex = px + (qx - px) * u1, ey = py + (qy - py) * u1, ez = pz + dz * u1;
+  for (const [u, x, y, z] of [[u0, sx, sy, sz], [u1, ex, ey, ez]] as const) {
+    if (z - t.top < best && pointInPolygon(x, y, t.poly, t.n)) {
+      best = z - t.top;
+      nearestU = u;
+    }
+  }
+  for (let i = 0, j = t.n - 1; i < t.n; j = i++) {
+    const d = segmentSegmentDistance(sx, sy, sz, ex, ey, ez, t.poly[2 * j], t.poly[2 * j + 1], t.top, t.poly[2 * i], t.poly[2 * i + 1], t.top);
+    if (d < best) {
+      best = d;
+      nearestU = u0 + (u1 - u0) * closest.s;
+    }
+  }
+  return best;
+}
+
+/** Gap between the boom's surface and a part at slew `deg`, m (negative: they overlap). */
+export function boomGapAt(p: PreparedLift, t: Target, deg: number): number {
+  const a = (deg * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+  const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
+  const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
+  return boomAxisToPrism(px, py, p.pivotZ, qx, qy, p.tipZ, t) - p.boomRadius;
+}
+
+/** A cheap lower bound on the gap: bounding circle in plan, and the boom's lowest point in height. */
+function roughBoomGapAt(p: PreparedLift, t: Target, deg: number): number {
+  const a = (deg * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+  const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
+  const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
+  const plan = Math.sqrt(pointSegmentDist2(t.cx, t.cy, px, py, qx, qy)) - t.r;
+  return Math.max(plan, Math.min(p.pivotZ, p.tipZ) - t.top) - p.boomRadius;
+}
+
+/** Body parts the boom is checked against: every one except the part under the slew axis. */
+export const boomMeets = (t: Target) => t.kind === 'obstacle' || !pointInPolygon(0, 0, t.poly, t.n);
+
+const WALK = { tolAbs: 0.002, tolRel: 0.002, minStep: 0.005, coarseStep: 15 };
+
+export function boomClearanceOver(p: PreparedLift, t: Target): BoomClearance {
+  // No point of the boom moves faster than the larger of the pivot's and the tip's radius, m per radian.
+  const lipschitz = (Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) * Math.PI) / 180;
+  let best = Infinity;
+  const gap = (u: number) => {
+    const deg = slewAt(p, u);
+    const rough = roughBoomGapAt(p, t, deg);
+    if (rough > best * (1 + WALK.tolRel) + 4 * WALK.tolAbs) return rough;
+    const g = Math.max(0, boomGapAt(p, t, deg));
+    if (g < best) best = g;
+    return g;
+  };
+  const r = lipschitzMin(gap, p.span, lipschitz, WALK);
+  return boomClearanceAt(p, t, slewAt(p, r.t));
+}
+
+export function boomClearanceAt(p: PreparedLift, t: Target, slew: number): BoomClearance {
+  const g = boomGapAt(p, t, slew);
+  const along = nearestU * p.input.boom.length;
+  const height = p.pivotZ + (p.tipZ - p.pivotZ) * nearestU;
+  return { target: t.id, name: t.name, kind: t.kind, distance: Math.max(0, g), slew, alongBoom: along, height, strikes: g <= 0 };
+}
