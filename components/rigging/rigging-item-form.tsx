@@ -10,7 +10,8 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
-import { CHAIN_GRADES, CHAIN_SIZES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
+import { LIFTING_CHAIN_CHOICES, ROUND_SLING_COLOURS, SHACKLE_SIZES, standardRating } from '@/lib/equipment/rigging-ratings';
+import { liftingUse } from '@/lib/lift/ratings/lifting-use';
 import { riggingItemSchema, type RiggingItemInput } from '@/lib/validations/rigging';
 import { type UnitSystem } from '@/lib/units';
 import { formatMass } from '@/lib/format/quantity';
@@ -24,6 +25,8 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
   const kind = useWatch({ control, name: 'kind' });
   const size = useWatch({ control, name: 'size' }) ?? '';
   const std = standardRating(kind, size);
+  // Say why before the save is refused; a size not chosen yet is not a refusal.
+  const refusal = kind === 'recovery-strap' || size ? liftingUse(kind, size) : null;
   const r = initial.ratings;
   const [manual, setManual] = useState(!!id && !!r && r.vertical !== null && !(std && Math.abs((r.vertical ?? 0) - std.vertical) < 0.01));
   const [serverError, setServerError] = useState<string | null>(null);
@@ -67,11 +70,15 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
     ) : kind === 'chain' ? (
       <SelectField label="Chain size and grade" disabled={readOnly} {...register('size')}>
         <option value="">Choose size and grade</option>
-        {CHAIN_GRADES.flatMap((g) => CHAIN_SIZES.map((s) => `${s} in grade ${g}`)).map((v) => (
+        {LIFTING_CHAIN_CHOICES.map((v) => (
           <option key={v} value={v}>
             {v}
           </option>
         ))}
+        {/* A row stored before the lifting rules keeps its size, shown as it was. */}
+        {initial.kind === 'chain' && initial.size && !LIFTING_CHAIN_CHOICES.includes(initial.size) && (
+          <option value={initial.size}>{initial.size} (not a lifting chain)</option>
+        )}
       </SelectField>
     ) : (
       <TextField label="Size / description" disabled={readOnly} error={err('size')} {...register('size')} />
@@ -91,6 +98,12 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
         {sizeField}
         <Controller control={control} name="length" render={({ field }) => <UnitInput label="Length (blank if it does not apply)" quantity="length" units={units} value={field.value ?? null} onChange={field.onChange} disabled={readOnly} error={err('length')} />} />
       </div>
+      {refusal && (
+        <Notice tone="warning" title="Not lifting rigging">
+          <span data-testid="form-not-lifting">{refusal.reason}</span>
+          {id ? ' A row stored before this rule can be saved with its kind and size unchanged; it stays flagged.' : ' It cannot be added to the rigging inventory.'}
+        </Notice>
+      )}
       <fieldset className="space-y-3 rounded-plate border border-paper-line p-3">
         <legend className="px-1 text-label font-bold">Ratings by hitch</legend>
         {std && !manual && (

@@ -34,6 +34,26 @@ function DueBadge({ next, today }: { next: string | null; today: string }) {
   return <span className="tabular-nums">{next}</span>;
 }
 
+/** Rows that cannot be used as lifting rigging, each with its reason: the editor will not add them to a plan. */
+function NotLiftingNotice({ items }: { items: RiggingItem[] }) {
+  const flagged = items.filter((i) => i.notForLifting);
+  if (flagged.length === 0) return null;
+  return (
+    <Notice tone="warning" title={`${flagged.length} item${flagged.length === 1 ? ' is' : 's are'} not lifting rigging`}>
+      <ul className="mt-1 space-y-1" data-testid="not-lifting-list">
+        {flagged.map((i) => (
+          <li key={i.id}>
+            <Link href={`/rigging/${i.id}`} className="font-semibold underline">
+              {i.tag}
+            </Link>
+            : {i.notForLifting} Its stored figures are kept as they were; the editor will not add it to a lift plan.
+          </li>
+        ))}
+      </ul>
+    </Notice>
+  );
+}
+
 export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: boolean }) {
   const [kind, setKind] = useState('');
   const [status, setStatus] = useState('');
@@ -58,7 +78,21 @@ export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: b
       col.accessor('size', { header: 'Size', cell: (c) => <span>{c.getValue() || '—'}</span> }),
       col.accessor('length', { header: 'Length', cell: (c) => (c.getValue() === null ? '—' : formatLength(c.getValue()!, units)), meta: { className: 'hidden lg:table-cell' } }),
       col.accessor((r) => r.ratings.vertical, { id: 'vertical', header: 'Vertical rating', cell: (c) => (c.getValue() === null ? '—' : <span className="tabular-nums">{formatMass(c.getValue()!, units)}</span>) }),
-      col.accessor('status', { header: 'Status', cell: (c) => <StatusBadge status={c.getValue()} /> }),
+      col.accessor('status', {
+        header: 'Status',
+        cell: (c) => (
+          <div className="flex flex-wrap gap-1">
+            <StatusBadge status={c.getValue()} />
+            {c.row.original.notForLifting && (
+              <span title={c.row.original.notForLifting} data-testid={`not-lifting-${c.row.original.tag}`}>
+                <Badge tone="over" glyph="alert">
+                  Not for lifting
+                </Badge>
+              </span>
+            )}
+          </div>
+        ),
+      }),
       col.accessor('nextInspectionDue', { header: 'Next inspection', cell: (c) => <DueBadge next={c.getValue()} today={today} /> }),
     ],
     [units, today],
@@ -107,6 +141,7 @@ export function RiggingTable({ units, canEdit }: { units: UnitSystem; canEdit: b
         </span>
       </div>
       {q.error && <Notice tone="error">{q.error.message}</Notice>}
+      <NotLiftingNotice items={q.data?.items ?? []} />
       <DataTable table={table} caption="Rigging inventory" loading={q.isLoading} empty={<EmptyState title="No items match these filters" />} />
       {canEdit && <RiggingImport onImported={() => qc.invalidateQueries({ queryKey: ['rigging'] })} />}
     </div>

@@ -3,6 +3,7 @@ import type { Database, RiggingItemRow } from '../schema';
 import type { RiggingKind, RiggingStatus } from '@/lib/domain';
 import type { ResolvedRiggingItem } from '@/lib/equipment/rigging-item';
 import { addDays, DUE_SOON_DAYS } from '@/lib/dates';
+import { notForLifting } from '@/lib/equipment/rigging-ratings';
 
 type Db = Kysely<Database>;
 
@@ -14,6 +15,8 @@ export interface RiggingItem {
   length: number | null;
   ratings: { vertical: number | null; choker: number | null; basket: number | null };
   ratingSource: string;
+  /** Why the item cannot be used as lifting rigging (a recovery strap, grade 70 chain, a tie-down rating), or null. */
+  notForLifting: string | null;
   status: RiggingStatus;
   lastInspection: string | null;
   nextInspectionDue: string | null;
@@ -30,6 +33,7 @@ export function toRiggingItem(r: RiggingItemRow): RiggingItem {
     length: r.length,
     ratings: { vertical: r.rating_vertical, choker: r.rating_choker, basket: r.rating_basket },
     ratingSource: r.rating_source,
+    notForLifting: notForLifting(r.kind, r.size, r.rating_source)?.reason ?? null,
     status: r.status,
     lastInspection: r.last_inspection,
     nextInspectionDue: r.next_inspection_due,

@@ -1,19 +1,20 @@
 import { KG_PER_LB } from '@/lib/units';
-import { roundSlingRating, shackleWll, SHACKLE_SIZES, type RoundSlingColour } from '@/lib/lift/rigging-tables';
-import { roundSlingColours } from '@/lib/lift/schema';
+import {
+  alloyChainRow, describeSource, LIFTING_CHAIN_GRADES, LIFTING_CHAIN_SIZES, liftingUse, parseChain, roundSlingColours, roundSlingRating,
+  roundSlingRow, shackleRow, SHACKLE_SIZES, TIE_DOWN_RATED, TIE_DOWN_SOURCE_ID, type NotForLifting, type RoundSlingColour,
+} from '@/lib/lift/ratings';
 import type { RiggingKind } from '@/lib/domain';
 
 /**
- * Ratings filled in from built-in standard tables where one applies. Every table lives in the engine
- * (lib/lift/rigging-tables.ts) or here with its source; values marked "value from memory" follow
- * /work/shared/reference.md and are not yet checked against the primary text.
+ * Ratings filled in from the engine's rating tables (lib/lift/ratings, one file per table, each row with
+ * its source) where one applies, so the inventory and the rigging check read the same figures.
  */
 export interface StandardRating {
   vertical: number;
   choker: number | null;
   basket: number | null;
   /** Short id stored with the item. */
-  source: 'wstda-rs1' | 'shackle-wll' | 'cfr-393-108';
+  source: 'wstda-rs1' | 'shackle-wll' | 'astm-a906';
   /** What a person reads beside the auto-filled value. */
   note: string;
 }
@@ -21,52 +22,40 @@ export interface StandardRating {
 export const ROUND_SLING_COLOURS = roundSlingColours;
 export { SHACKLE_SIZES };
 
-/**
- * Chain tie-down working load limits, lb, by grade and nominal size: 49 CFR 393.108 table (read).
- * These are tie-down limits for cargo securement, not overhead lifting ratings.
- */
-export const CHAIN_TIEDOWN_LB: Record<'70' | '80' | '100', Record<string, number>> = {
-  '70': { '1/4': 3150, '5/16': 4700, '3/8': 6600, '1/2': 11300, '5/8': 15800 },
-  '80': { '1/4': 3500, '5/16': 4500, '3/8': 7100, '1/2': 12000, '5/8': 18100 },
-  '100': { '1/4': 4300, '5/16': 5700, '3/8': 8800, '1/2': 15000, '5/8': 22600 },
-};
-export const CHAIN_SIZES = ['1/4', '5/16', '3/8', '1/2', '5/8'] as const;
-export const CHAIN_GRADES = ['70', '80', '100'] as const;
-
-/** "3/8 in grade 80", "3/8 G80", "3/8in g80" → { size: '3/8', grade: '80' }. */
-export function parseChainSize(text: string): { size: string; grade: '70' | '80' | '100' } | null {
-  const m = text.trim().match(/^(\d+\/\d+|\d+)\s*(?:in|")?\s*(?:grade|g)\s*(70|80|100)$/i);
-  if (!m || !(CHAIN_SIZES as readonly string[]).includes(m[1])) return null;
-  return { size: m[1], grade: m[2] as '70' | '80' | '100' };
-}
+/** "3/8 in grade 80" and so on: the lifting chain sizes the form offers. */
+export const LIFTING_CHAIN_CHOICES = LIFTING_CHAIN_GRADES.flatMap((g) => LIFTING_CHAIN_SIZES.filter((s) => alloyChainRow(g, s)).map((s) => `${s} in grade ${g}`));
 
 export function standardRating(kind: RiggingKind, size: string): StandardRating | null {
   const s = size.trim().toLowerCase();
   if (kind === 'round-sling') {
-    const colour = s === 'gray' ? 'grey' : s;
+    const colour = (s === 'gray' ? 'grey' : s) as RoundSlingColour;
     if (!(roundSlingColours as readonly string[]).includes(colour)) return null;
-    // The engine's own table, so the inventory and the rigging check read the same ratings.
-    return {
-      ...roundSlingRating(colour as RoundSlingColour),
-      source: 'wstda-rs1',
-      note: 'Polyester round sling by colour, WSTDA RS-1 (value from memory). Check the sling’s own tag.',
-    };
+    return { ...roundSlingRating(colour), source: 'wstda-rs1', note: `Polyester round sling by colour, ${describeSource(roundSlingRow(colour).source)}. Check the sling’s own tag.` };
   }
   if (kind === 'shackle') {
-    const wll = shackleWll(s);
-    if (wll === null) return null;
-    return { vertical: wll, choker: null, basket: null, source: 'shackle-wll', note: 'Screw-pin anchor shackle WLL by size (value from memory; 1/2–3/4 in agree with RR-C-271D ÷ 5). Check the shackle’s marking.' };
+    const row = shackleRow(s);
+    if (!row) return null;
+    return { vertical: row.tons * 2000 * KG_PER_LB, choker: null, basket: null, source: 'shackle-wll', note: `Screw-pin anchor shackle WLL by size, ${describeSource(row.source)}. Check the shackle’s marking.` };
   }
   if (kind === 'chain') {
-    const c = parseChainSize(s);
-    if (!c) return null;
+    const c = parseChain(s);
+    const row = c.grade && c.size ? alloyChainRow(c.grade, c.size) : null;
+    if (!row) return null;
     return {
-      vertical: CHAIN_TIEDOWN_LB[c.grade][c.size] * KG_PER_LB,
+      vertical: row.lb * KG_PER_LB,
       choker: null,
       basket: null,
-      source: 'cfr-393-108',
-      note: 'Chain tie-down WLL, 49 CFR 393.108 table. A tie-down limit, not an overhead lifting rating.',
+      source: 'astm-a906',
+      note: `Alloy chain sling, single leg vertical WLL, ${describeSource(row.source)}. Choker and basket follow the hitch factors; check the sling’s tag.`,
     };
   }
   return null;
+}
+
+/**
+ * Why an inventory row cannot be used as lifting rigging, or null. Rows entered before the lifting rules
+ * keep their stored figures and are flagged here, never re-rated or deleted behind the user's back.
+ */
+export function notForLifting(kind: RiggingKind, size: string, ratingSource: string): NotForLifting | null {
+  return liftingUse(kind, size) ?? (ratingSource === TIE_DOWN_SOURCE_ID ? TIE_DOWN_RATED : null);
 }

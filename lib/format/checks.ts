@@ -3,6 +3,7 @@ import type { TruckSide } from '@/lib/lift/names';
 import type { PowerLineRule } from '@/lib/lift/power-lines';
 import { ftToM, type UnitSystem } from '@/lib/units';
 import { formatNumber } from './number';
+import { elementWords, riggingSentence } from './rigging-words';
 import { formatAngle, formatForce, formatLength, formatMass, formatPercent, formatQuantity } from './quantity';
 
 /**
@@ -89,7 +90,7 @@ function marginWords(c: Check, units: UnitSystem): string {
   const over = c.status === 'beyond';
   if (c.quantity === 'percent') return tippingMargin(c.value, c.limit);
   if (c.quantity === 'length') return `${formatLength(Math.abs(c.value - c.limit), units)} ${over ? 'short' : 'to spare'}`;
-  if (c.code === 'rigging') return `${formatNumber(100 * (c.ratio ?? 0))} % of capacity used`;
+  if (c.code === 'rigging') return c.facts.refused ? 'not lifting rigging' : `${formatNumber(100 * (c.ratio ?? 0))} % of capacity used`;
   return `${formatNumber(Math.abs(100 - 100 * (c.ratio ?? 0)))} % ${over ? 'above' : 'below'}`;
 }
 
@@ -108,7 +109,7 @@ function titleOf(c: Check): string {
       case 'power-line':
         return `Power line ${name}`;
       case 'rigging':
-        return c.facts.element === 'winch' ? 'Winch line pull' : `${cap(c.facts.element)} ${name}`;
+        return c.facts.element === 'winch' ? 'Winch line pull' : `${elementWords(c.facts.element)} ${name}`;
       case 'load-chart':
         return 'Load chart';
     }
@@ -159,18 +160,8 @@ function body(c: Check, units: UnitSystem, verdict: string): string {
       const required = c.facts.rule.feet !== null ? formatLength(ftToM(c.facts.rule.feet), units) : q(c.limit);
       return `${cap(near)} comes within ${q(c.value ?? 0)} of the line “${name}” at slew ${slewWords(c.slew)}; ${powerRuleWords(c.facts.rule, required)} (${verdict}).`;
     }
-    case 'rigging': {
-      const f = c.facts;
-      if (f.element === 'winch') {
-        const lead = f.leadSheaves === 1 ? '1 lead sheave' : `${f.leadSheaves ?? 0} lead sheaves`;
-        return `Line pull on the winch is ${q(c.value ?? 0)} against a rated pull of ${q(c.limit ?? 0)} (${f.parts} parts of line over ${f.sheaves} sheaves, ${lead}, lead-line factor ${formatNumber(f.leadLineFactor ?? 0, 4)}) (${verdict}).`;
-      }
-      const how =
-        f.element === 'sling'
-          ? `${f.legs} × ${f.colour ? `${f.colour} round sling` : 'sling'}, ${f.hitch} hitch at ${formatAngle(f.angleFromHorizontal ?? 90, 0)} from horizontal`
-          : `${f.size ? `${f.size} in shackle` : 'shackle'}, one of ${f.legs}`;
-      return `${cap(f.element)} ${name} (${how}) carries ${q(c.value ?? 0)} against a capacity of ${q(c.limit ?? 0)} (${verdict}).`;
-    }
+    case 'rigging':
+      return riggingSentence(c, name, q, verdict);
     case 'load-chart': {
       const f = c.facts;
       if (c.value === null || f.rated === null) {

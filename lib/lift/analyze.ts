@@ -10,7 +10,7 @@ import { powerLineOver } from './power-lines';
 import { prepareLift, slewAt, withLoadMass, type PreparedLift } from './prepare';
 import { createReactionState, describeReactions, reactionsAt } from './reactions';
 import type { LiftResult, WorstCase } from './result';
-import { shackleVerdict, slingVerdict, winchVerdict, type RiggingVerdict } from './rigging';
+import { riggingVerdicts, type RiggingVerdict } from './rigging';
 import type { LiftInput, LiftInputIn } from './schema';
 import { insideDistance } from './support-polygon';
 import { sweepSamples, sweepTipping } from './sweep';
@@ -39,16 +39,7 @@ function worstCaseOf(p: PreparedLift, step: number): { worst: WorstCase; sweep: 
   };
 }
 
-function riggingVerdicts(p: PreparedLift): RiggingVerdict[] {
-  const r = p.input.rigging;
-  if (!r) return [];
-  const load = p.input.load.mass;
-  return [
-    ...r.slings.map((s) => slingVerdict(s, load)),
-    ...r.shackles.map((s) => shackleVerdict(s, load)),
-    ...(r.winch ? [winchVerdict(r.winch, p.hookLoad)] : []),
-  ];
-}
+const liftRigging = (p: PreparedLift) => riggingVerdicts(p.input.rigging, p.input.load.mass, p.hookLoad);
 
 function massChecks(p: PreparedLift, worst: WorstCase, maxima: ReactionMaximum[], rigging: RiggingVerdict[], uw: UpperWeight): Check[] {
   const { limits, soil, supports, loadChart, boom } = p.input;
@@ -80,7 +71,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
   const clearances = p.targets.map((t) => clearanceOver(p, t));
   const boomClearances = p.targets.filter(boomMeets).map((t) => boomClearanceOver(p, t));
   const powerLines = p.powerLines.map((l) => powerLineOver(p, l));
-  const rigging = riggingVerdicts(p);
+  const rigging = liftRigging(p);
 
   const a = (worst.slew * Math.PI) / 180;
   const hx = Math.cos(a) * p.hookX0 - Math.sin(a) * p.hookY0;
@@ -103,7 +94,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
     const uMax = reactionMaxima(up, step);
     upper = { loadMass: up.input.load.mass, hookLoad: up.hookLoad, worstCase: u, reactionMaxima: uMax };
     const uw = { percent: p.input.weightUncertainty, loadMass: up.input.load.mass };
-    checks.push(...massChecks(up, u, uMax, riggingVerdicts(up), uw));
+    checks.push(...massChecks(up, u, uMax, liftRigging(up), uw));
   }
 
   const chart = p.input.loadChart;

@@ -15,7 +15,7 @@ import type { RiggingFacts, RiggingVerdict } from './rigging';
 export type QuantityKind = 'force' | 'pressure' | 'length' | 'angle' | 'percent' | 'mass';
 export type CheckStatus = 'within' | 'near' | 'beyond';
 export type CheckCode = 'stability' | 'bearing' | 'clearance' | 'power-line' | 'rigging' | 'load-chart';
-export type SubjectKind = 'tipping-line' | 'pad' | 'truck-part' | 'obstacle' | 'power-line' | 'sling' | 'shackle' | 'winch' | 'load-chart';
+export type SubjectKind = 'tipping-line' | 'pad' | 'truck-part' | 'obstacle' | 'power-line' | 'sling' | 'shackle' | 'hook' | 'snatch-block' | 'winch' | 'load-chart';
 
 /** SI units of each quantity kind inside the engine. */
 export const SI_UNIT: Record<QuantityKind, string> = { force: 'kN', pressure: 'kPa', length: 'm', angle: '°', percent: '%', mass: 'kg' };
@@ -157,7 +157,8 @@ export function powerLineCheck(pl: PowerLineClearance): Check {
 export function riggingCheck(r: RiggingVerdict, uw: UpperWeight = null): Check {
   return {
     id: `rigging:${r.element}:${r.id}${suffix(uw)}`, code: 'rigging', subject: { kind: r.element, ids: [r.id], names: [r.name] }, quantity: 'mass',
-    ...figures({ value: r.demand, limit: r.capacity, sense: 'at-most' }),
+    // Not lifting rigging has no limit at all, so the check fails (status beyond).
+    ...figures({ value: r.demand, limit: r.facts.refused ? null : r.capacity, sense: 'at-most' }),
     slew: null, upperWeight: uw, facts: { ...r.facts, element: r.element },
   };
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { riggingSchema } from './rigging-schema';
 
 /**
  * The analysis input, validated at every boundary (route, CLI, library). Field names are the contract of
@@ -139,49 +140,6 @@ export const powerLineSchema = z.object({
   required: within(0.01, RANGE.height, 'm').optional(),
 });
 
-const hitch = z.enum(['vertical', 'choker', 'basket']);
-export const roundSlingColours = ['purple', 'green', 'yellow', 'tan', 'red', 'white', 'blue', 'grey', 'brown', 'olive', 'black'] as const;
-
-export const slingSchema = z.object({
-  id,
-  name,
-  /** Vertical rated capacity, kg. Give this or a round-sling colour. */
-  verticalRating: pos.optional(),
-  colour: z.enum(roundSlingColours).optional(),
-  hitch,
-  /** Choke angle in degrees (choker hitch only); 120° or more when omitted. */
-  chokeAngle: z.number().min(0).max(180).optional(),
-  /** Sling leg angle from horizontal, degrees; 90 = straight up. */
-  angleFromHorizontal: z.number().gt(0).max(90).default(90),
-  legs: z.number().int().min(1).max(8).default(1),
-});
-
-export const shackleSchema = z.object({
-  id,
-  name,
-  /** Nominal size code, e.g. "5/8" or "1-1/4" (inches). Give this or wll. */
-  size: z.string().optional(),
-  /** Working load limit, kg. */
-  wll: pos.optional(),
-  /** Shackles sharing the load, one per leg. */
-  legs: z.number().int().min(1).max(8).default(1),
-  angleFromHorizontal: z.number().gt(0).max(90).default(90),
-});
-
-export const winchSchema = z.object({
-  /** Rated line pull of the winch on its working layer, kg. */
-  ratedLinePull: pos,
-  parts: z.number().int().min(1).max(16),
-  sheaves: z.enum(['bushed', 'roller']),
-  leadSheaves: z.number().int().min(0).max(8).default(0),
-});
-
-export const riggingSchema = z.object({
-  slings: z.array(slingSchema).max(32).default([]),
-  shackles: z.array(shackleSchema).max(32).default([]),
-  winch: winchSchema.optional(),
-});
-
 export const loadChartSchema = z.object({
   /** Load radii from the slew axis, m, ascending. */
   radii: z.array(within(0.001, 1000, 'm')).min(1).max(64),
@@ -235,8 +193,4 @@ export type MassItem = LiftInput['masses'][number];
 export type Footprint = LiftInput['load']['footprint'];
 export type Prism = LiftInput['obstacles'][number];
 export type PowerLine = LiftInput['powerLines'][number];
-export type Rigging = z.output<typeof riggingSchema>;
 export type LoadChart = z.output<typeof loadChartSchema>;
-export type SlingInput = z.output<typeof slingSchema>;
-export type ShackleInput = z.output<typeof shackleSchema>;
-export type WinchInput = z.output<typeof winchSchema>;

@@ -34,7 +34,15 @@ export const riggingPickSchema = z.object({
   itemId: z.number().int().positive().nullable(),
   tag: z.string().max(60),
   kind: z.string().max(40),
+  /** The inventory's size text (a chain's size and grade, e.g. "3/8 in grade 80"). */
+  size: z.string().max(60).default(''),
   hitch: z.enum(['vertical', 'choker', 'basket']),
+  /** Choker hitch: the choke angle, degrees; null = not measured (a free-hanging choke is assumed). */
+  chokeAngle: z.number().min(0).max(180).nullable().default(null),
+  /** Basket hitch: D/d, the diameter bent around ÷ the sling body's diameter; null = not given. */
+  bendRatio: z.number().positive().max(1000).nullable().default(null),
+  /** Snatch block: the angle between its two parts of line, degrees; null = parallel lines assumed. */
+  lineAngle: z.number().min(0).max(180).nullable().default(null),
   legs: z.number().int().min(1).max(8).default(1),
   /** Leg angle from horizontal, degrees (90 = straight up). */
   angleFromHorizontal: z.number().gt(0).max(90).default(90),

@@ -1,5 +1,6 @@
 import type { LiftInputIn } from '@/lib/lift/schema';
 import { truckToLiftParts, TruckSetupError, type TruckSetup } from '@/lib/equipment/to-lift-input';
+import { picksToRigging } from '@/lib/equipment/rigging-to-lift';
 import type { SceneDocument } from './schema';
 import type { LoadObject, ObstacleObject, TrailerObject, TruckObject } from './objects';
 import type { TruckModel } from './truck/truck-model';
@@ -34,8 +35,6 @@ export function loadFootprint(load: LoadObject, truck: TruckObject, pickSlew: nu
   return { kind: 'polygon', points: loadLocalOutline(s).map((p) => rotate(p, relative)) };
 }
 
-const isShackle = (kind: string) => /shackle/i.test(kind);
-
 /**
  * Scene (site frame) → lift engine input (truck frame for the truck's own parts; site objects go in
  * `site` with the truck's pose, and the engine turns them into the truck frame).
@@ -67,8 +66,6 @@ export function sceneToLiftInput(doc: SceneDocument, model: TruckModel | null): 
     const ends = wireEnds(o);
     return ends ? [{ id: o.id, name: names[o.id], a: { ...ends[0], z: o.height }, b: { ...ends[1], z: o.height }, kV: o.voltageKV }] : [];
   });
-  const slings = load.rigging.filter((r) => !isShackle(r.kind));
-  const shackles = load.rigging.filter((r) => isShackle(r.kind));
   const input: LiftInputIn = {
     supports: parts.supports,
     masses: parts.masses,
@@ -83,10 +80,7 @@ export function sceneToLiftInput(doc: SceneDocument, model: TruckModel | null): 
     ...(load.weightUncertainty > 0 ? { weightUncertainty: load.weightUncertainty } : {}),
     ...(load.rigging.length
       ? {
-          rigging: {
-            slings: slings.map((r) => ({ id: r.tag, name: r.tag, verticalRating: r.ratings?.vertical ?? r.ratingKg, hitch: r.hitch, angleFromHorizontal: r.angleFromHorizontal, legs: r.legs })),
-            shackles: shackles.map((r) => ({ id: r.tag, name: r.tag, wll: r.ratingKg, legs: r.legs, angleFromHorizontal: r.angleFromHorizontal })),
-          },
+          rigging: picksToRigging(load.rigging),
         }
       : {}),
     site: { x: truck.x, y: truck.y, heading: truck.rotation, obstacles: prisms, powerLines },

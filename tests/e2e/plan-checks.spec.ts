@@ -14,7 +14,7 @@ interface Item {
   notes: string;
 }
 
-const pickOf = (it: Item) => ({ itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: it.ratings.vertical ?? it.ratings.basket ?? it.ratings.choker, ratings: it.ratings, massKg: 0 });
+const pickOf = (it: Item) => ({ itemId: it.id, tag: it.tag, kind: it.kind, size: it.size, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: it.ratings.vertical ?? it.ratings.basket ?? it.ratings.choker, ratings: it.ratings, massKg: 0 });
 
 /** The demo coil transfer's id (other specs add scenes with "coil" in their titles). */
 async function demoCoilId(page: Page): Promise<number> {
@@ -64,22 +64,29 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
   await expect(page.locator('[data-testid="rigging-row-HR-RS-05"]')).toHaveCount(2);
   await screens(page, 'editor-load-rigging', ['laptop', 'tablet-portrait']);
 
-  // An item tagged out after the list was loaded is refused when added, with the reason.
-  const strap = byTag('HR-ST-01');
-  const { id: _id, ...body } = strap;
+  // A recovery strap is not lifting rigging: it is offered with that said, and refused with the reason.
+  expect(options).toContain('HR-ST-01 · recovery-strap 100 mm × 9 m (example) · not lifting rigging');
   await select.selectOption({ label: options.find((o) => o.startsWith('HR-ST-01'))! });
-  const put = await page.request.put(`/api/rigging/${strap.id}`, { data: { ...body, status: 'tagged_out' } });
+  await page.getByRole('button', { name: 'Add', exact: true }).click();
+  await expect(page.getByTestId('rigging-add-notice')).toHaveText(/^HR-ST-01 is not lifting rigging and cannot be added to a lift plan: A recovery strap is made for pulling/);
+  await expect(page.getByTestId('rigging-row-HR-ST-01')).toHaveCount(0);
+
+  // An item tagged out after the list was loaded is refused when added, with the reason.
+  const web = byTag('HR-WS-01');
+  const { id: _id, ...body } = web;
+  await select.selectOption({ label: options.find((o) => o.startsWith('HR-WS-01'))! });
+  const put = await page.request.put(`/api/rigging/${web.id}`, { data: { ...body, status: 'tagged_out' } });
   expect(put.ok()).toBe(true);
   try {
     await page.getByRole('button', { name: 'Add', exact: true }).click();
-    await expect(page.getByTestId('rigging-add-notice')).toHaveText('HR-ST-01 is tagged out and cannot be added to a plan.');
-    await expect(page.getByTestId('rigging-row-HR-ST-01')).toHaveCount(0);
+    await expect(page.getByTestId('rigging-add-notice')).toHaveText('HR-WS-01 is tagged out and cannot be added to a plan.');
+    await expect(page.getByTestId('rigging-row-HR-WS-01')).toHaveCount(0);
     const doc = await page.evaluate(() => window.__arclineEditor!.store.getState().document.objects.find((o) => o.kind === 'load'));
     expect((doc as { rigging: { tag: string }[] }).rigging.map((r) => r.tag)).toEqual(['HR-RS-05', 'HR-CH-02', 'HR-RS-05']);
-    // The list is refreshed: the strap is no longer offered.
-    await expect(select.locator('option', { hasText: 'HR-ST-01' })).toHaveCount(0);
+    // The list is refreshed: the web sling is no longer offered.
+    await expect(select.locator('option', { hasText: 'HR-WS-01' })).toHaveCount(0);
   } finally {
-    const back = await page.request.put(`/api/rigging/${strap.id}`, { data: body });
+    const back = await page.request.put(`/api/rigging/${web.id}`, { data: body });
     expect(back.ok()).toBe(true);
   }
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  coilMass, hitchFactor, IBC_1806_2, leadLineFactor, presumptiveBearing, requiredClearance, ROUND_SLING_LB,
+  chokeAngleFactor, coilMass, IBC_1806_2, leadLineFactor, presumptiveBearing, requiredClearance, ROUND_SLING_LB,
   roundSlingRating, shackleWll, SHEAVE_K, slingCapacity, SOIL_CHOICES, STEEL_DENSITY, winchCapacity, boxMass, upperWeight,
 } from '@/lib/lift';
 import { KG_PER_LB, M_PER_FT, M_PER_IN } from '@/lib/units';
@@ -56,14 +56,15 @@ describe('round slings and hitches', () => {
   });
   it('hitch factors and the sling angle factor sin θ', () => {
     // Source: ASME B30.9 hitch factors (value from memory); sin 60° = 0.866, 45° = 0.707, 30° = 0.5 [derived].
-    expect(hitchFactor('vertical')).toBe(1);
-    expect(hitchFactor('basket')).toBe(2);
-    expect(hitchFactor('choker')).toBeCloseTo(0.8, 12);
-    expect(hitchFactor('choker', 100)).toBeCloseTo(0.8 * 0.71, 12);
+    // Choke factor from the corrected ASME B30.9 choke-angle table [read]; a 100° choke is in the 90–120° band.
+    expect(chokeAngleFactor(100).factor).toBe(0.87);
     const base = { id: 's', verticalRating: 1000, hitch: 'vertical' as const, legs: 2 };
     expect(slingCapacity({ ...base, angleFromHorizontal: 60 })).toBeCloseTo(2 * 1000 * 0.8660254, 4);
     expect(slingCapacity({ ...base, angleFromHorizontal: 45 })).toBeCloseTo(2 * 1000 * 0.7071068, 4);
     expect(slingCapacity({ ...base, angleFromHorizontal: 30 })).toBeCloseTo(1000, 9);
+    expect(slingCapacity({ ...base, hitch: 'basket', angleFromHorizontal: 90, legs: 1 })).toBeCloseTo(2000, 9);
+    // A web sling in a choker at 100°: 1 000 × 0.8 (memory) × 0.87 (read).
+    expect(slingCapacity({ ...base, material: 'web-sling', hitch: 'choker', chokeAngle: 100, angleFromHorizontal: 90, legs: 1 })).toBeCloseTo(1000 * 0.8 * 0.87, 9);
     expect(slingCapacity({ id: 'b', colour: 'blue', hitch: 'basket', angleFromHorizontal: 90, legs: 1 })).toBeCloseTo(42400 * KG_PER_LB, 6);
   });
 });

@@ -34,7 +34,10 @@ const stability: Check = {
 const sling: Check = {
   ...base, id: 'rigging:sling:HR-RS-06:upper-weight', code: 'rigging', subject: { kind: 'sling', ids: ['HR-RS-06'], names: ['HR-RS-06'] }, quantity: 'mass',
   value: lbToKg(20000), limit: lbToKg(24000), ratio: 20000 / 24000, status: 'within', ok: true, upperWeight: { percent: 10, loadMass: lbToKg(20000) },
-  facts: { element: 'sling', legs: 2, hitch: 'basket', angleFromHorizontal: 60, colour: null, size: null, parts: null, sheaves: null, leadSheaves: null, leadLineFactor: null },
+  facts: {
+    element: 'sling', legs: 2, legsCounted: 2, hitch: 'basket', angleFromHorizontal: 60, lowAngle: false, colour: null, material: 'other', grade: null, size: null,
+    choke: null, bend: null, lineAngle: null, linePull: null, linePullFrom: null, parts: null, sheaves: null, leadSheaves: null, leadLineFactor: null, ratingSource: 'the tag', refused: null,
+  },
 };
 
 const powerLine: Check = {

@@ -1,10 +1,11 @@
 import { HttpError } from '@/lib/api/errors';
-import { resolveRatings } from '@/lib/equipment/rigging-item';
+import { resolveRatings, type StoredKindSize } from '@/lib/equipment/rigging-item';
 import type { RiggingItemData } from '@/lib/validations/rigging';
 
 
-export function resolvedOr400(data: RiggingItemData) {
-  const r = resolveRatings(data);
+/** `stored`: the row as it is before an update, so an item stored before the lifting rules can still be edited. */
+export function resolvedOr400(data: RiggingItemData, stored?: StoredKindSize) {
+  const r = resolveRatings(data, stored);
   if (!r.ok) throw new HttpError(400, `Invalid body: ${r.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, r.issues);
   return r.item;
 }

@@ -4,9 +4,10 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LoadObject, RiggingPick } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
-import { formatMass } from '@/lib/format/quantity';
+import { loadMass } from '@/lib/scene/geometry/load';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { NumberField, SelectField } from '../fields';
+import { SelectField } from '../fields';
+import { Notice, RiggingPickRow } from './rigging-pick-row';
 import { addVerdict, firstRating, isOverdue, pickNotices, type InventoryStatus, type RiggingNotice } from './rigging-status';
 
 interface InventoryItem extends InventoryStatus {
@@ -15,15 +16,6 @@ interface InventoryItem extends InventoryStatus {
 }
 
 const INVENTORY_KEY = ['rigging', 'editor-inventory'] as const;
-
-function Notice({ notice, testId }: { notice: RiggingNotice; testId?: string }) {
-  const stop = notice.tone === 'stop';
-  return (
-    <p data-testid={testId} role={stop ? 'alert' : 'status'} className={`mt-1 rounded border-l-4 px-2 py-1 text-xs font-medium ${stop ? 'border-over bg-over-light text-over' : 'border-signal-dark bg-signal-light text-ink'}`}>
-      {notice.text.split(/(\d{4}-\d{2}-\d{2})/).map((part, i) => (i % 2 ? <span key={i} className="whitespace-nowrap">{part}</span> : part))}
-    </p>
-  );
-}
 
 /**
  * Rigging from the inventory; ratings are copied into the plan. Only in-service items are offered, each is
@@ -44,6 +36,8 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
   const today = inventory.data?.today ?? new Date().toISOString().slice(0, 10);
   const byId = new Map((items ?? []).map((it) => [it.id, it]));
   const offered = (items ?? []).filter((it) => it.status === 'in_service');
+  const mass = loadMass(load);
+  const hookLoad = mass + load.blockMassKg + load.rigging.reduce((a, r) => a + r.massKg, 0);
   const set = (rigging: RiggingPick[]) => store.getState().run(updateObject(load.id, { rigging }));
 
   async function add() {
@@ -62,7 +56,8 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
       const rating = firstRating(it)!;
       const rigging = store.getState().document.objects.find((o) => o.id === load.id);
       const current = rigging && rigging.kind === 'load' ? rigging.rigging : load.rigging;
-      set([...current, { itemId: it.id, tag: it.tag, kind: it.kind, hitch: 'vertical', legs: 1, angleFromHorizontal: 90, ratingKg: rating, ratings: { vertical: it.ratings.vertical ?? null, choker: it.ratings.choker ?? null, basket: it.ratings.basket ?? null }, massKg: 0 }]);
+      const ratings = { vertical: it.ratings.vertical ?? null, choker: it.ratings.choker ?? null, basket: it.ratings.basket ?? null };
+      set([...current, { itemId: it.id, tag: it.tag, kind: it.kind, size: it.size ?? '', hitch: 'vertical', chokeAngle: null, bendRatio: null, lineAngle: null, legs: 1, angleFromHorizontal: 90, ratingKg: rating, ratings, massKg: 0 }]);
       setAddNotice(verdict.warning ? { tone: 'warn', text: verdict.warning } : null);
       setPick('');
     } catch {
@@ -78,25 +73,17 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
       {load.rigging.length === 0 && <p className="mb-2 text-sm text-ink-muted">No rigging picked yet.</p>}
       <ul className="space-y-2">
         {load.rigging.map((r, i) => (
-          <li key={i} className="rounded-md border border-paper-line p-2 text-sm" data-testid={`rigging-row-${r.tag}`}>
-            <div className="flex items-center justify-between">
-              <span className="font-semibold">
-                {r.tag} · {r.kind}
-              </span>
-              {!ro && (
-                <button type="button" className="min-h-11 px-2 text-over" onClick={() => set(load.rigging.filter((_, j) => j !== i))}>
-                  Remove
-                </button>
-              )}
-            </div>
-            {items && pickNotices(r, r.itemId === null ? undefined : byId.get(r.itemId), today).map((n) => <Notice key={n.text} notice={n} />)}
-            <div className="mt-1 grid grid-cols-3 gap-2">
-              <SelectField label="Hitch" value={r.hitch} disabled={ro} options={[{ value: 'vertical', label: 'Vertical' }, { value: 'choker', label: 'Choker' }, { value: 'basket', label: 'Basket' }]} onCommit={(hitch) => set(load.rigging.map((q, j) => (j === i ? { ...q, hitch, ratingKg: q.ratings?.[hitch] ?? q.ratingKg } : q)))} />
-              <NumberField label="Legs" value={r.legs} min={1} max={8} digits={0} disabled={ro} onCommit={(legs) => set(load.rigging.map((q, j) => (j === i ? { ...q, legs: Math.round(legs) } : q)))} />
-              <NumberField label="Angle (° up)" value={r.angleFromHorizontal} min={1} max={90} disabled={ro} onCommit={(a) => set(load.rigging.map((q, j) => (j === i ? { ...q, angleFromHorizontal: a } : q)))} />
-            </div>
-            <p className="mt-1 text-xs text-ink-muted">Rated {formatMass(r.ratingKg, units)} in this hitch</p>
-          </li>
+          <RiggingPickRow
+            key={i}
+            pick={r}
+            notices={items ? pickNotices(r, r.itemId === null ? undefined : byId.get(r.itemId), today) : []}
+            loadMass={mass}
+            hookLoad={hookLoad}
+            units={units}
+            readOnly={ro}
+            onChange={(p) => set(load.rigging.map((q, j) => (j === i ? p : q)))}
+            onRemove={() => set(load.rigging.filter((_, j) => j !== i))}
+          />
         ))}
       </ul>
       {inventory.isError && <p className="mt-2 text-sm text-over">The rigging inventory could not be loaded, so the items’ current status cannot be shown.</p>}
@@ -116,7 +103,7 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
                   { value: '', label: offered.length ? 'Choose an item…' : 'No in-service items' },
                   ...offered.map((it) => ({
                     value: String(it.id),
-                    label: `${it.tag} · ${it.kind}${it.size ? ` ${it.size}` : ''}${isOverdue(it, today) ? ` · inspection overdue since ${it.nextInspectionDue}` : ''}`,
+                    label: `${it.tag} · ${it.kind}${it.size ? ` ${it.size}` : ''}${it.notForLifting ? ' · not lifting rigging' : isOverdue(it, today) ? ` · inspection overdue since ${it.nextInspectionDue}` : ''}`,
                   })),
                 ]}
               />

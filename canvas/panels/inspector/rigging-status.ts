@@ -8,6 +8,8 @@ export interface InventoryStatus {
   tag: string;
   status: string;
   nextInspectionDue?: string | null;
+  /** Why the item is not lifting rigging (from the inventory), or null. */
+  notForLifting?: string | null;
   ratings: { vertical?: number | null; choker?: number | null; basket?: number | null };
 }
 
@@ -28,6 +30,7 @@ export function pickNotices(pick: { itemId: number | null }, item: InventoryStat
   const out: RiggingNotice[] = [];
   const label = OUT_OF_SERVICE[item.status];
   if (label) out.push({ tone: 'stop', text: `${label}: remove it from the plan` });
+  if (item.notForLifting) out.push({ tone: 'stop', text: `Not lifting rigging: ${item.notForLifting} Remove it from the plan.` });
   if (isOverdue(item, today)) out.push({ tone: 'warn', text: `Inspection overdue since ${item.nextInspectionDue}` });
   return out;
 }
@@ -42,6 +45,7 @@ export function addVerdict(item: InventoryStatus, today: string): AddVerdict {
   const label = OUT_OF_SERVICE[item.status];
   if (label) return { ok: false, reason: `${item.tag} is ${label.toLowerCase()} and cannot be added to a plan.` };
   if (item.status !== 'in_service') return { ok: false, reason: `${item.tag} is not in service and cannot be added to a plan.` };
+  if (item.notForLifting) return { ok: false, reason: `${item.tag} is not lifting rigging and cannot be added to a lift plan: ${item.notForLifting}` };
   const rating = firstRating(item);
   if (!(rating !== null && rating > 0)) return { ok: false, reason: `${item.tag} has no working load limit in the inventory; add its rating there first.` };
   if (isOverdue(item, today)) return { ok: true, warning: `${item.tag} added, but its inspection has been overdue since ${item.nextInspectionDue}: have it inspected before the lift.` };

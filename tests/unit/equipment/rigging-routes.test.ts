@@ -23,7 +23,7 @@ describe('rigging list and filters', () => {
   it('lists the seeded inventory of the organisation only', async () => {
     signInAs(await demoUser('supervisor@harrow.example'));
     const all = await items();
-    expect(all.length).toBe(14);
+    expect(all.length).toBe(15);
     expect(all.every((i) => i.tag.startsWith('HR-'))).toBe(true);
   });
   it('filters by kind, status and inspection due', async () => {
@@ -55,14 +55,52 @@ describe('rigging items: create, update, inspect', () => {
     expect(it.ratings.basket).toBeCloseTo(2 * it.ratings.vertical!, 6);
     expect(it.ratingSource).toBe('wstda-rs1');
   });
-  it('fills a 5/8 shackle (3.25 t = 6 500 lb, value from memory) and a 3/8 grade 80 chain (7 100 lb, 49 CFR 393.108)', async () => {
+  it('fills a 5/8 shackle (3.25 t = 6 500 lb, value from memory) and a 3/8 grade 80 chain (7 100 lb, ASTM A906 sling table, read)', async () => {
     signInAs(await demoUser('admin@harrow.example'));
     const sh = (await (await create(new Request(url, json('POST', { tag: 'HR-SH-20', kind: 'shackle', size: '5/8' })))).json()) as Item;
     expect(sh.ratings.vertical).toBeCloseTo(6500 * KG_PER_LB, 6);
     const ch = (await (await create(new Request(url, json('POST', { tag: 'HR-CH-20', kind: 'chain', size: '3/8 G80', length: 6 })))).json()) as Item;
     expect(ch.ratings.vertical).toBeCloseTo(7100 * KG_PER_LB, 6);
-    expect(ch.ratingSource).toBe('cfr-393-108');
+    expect(ch.ratingSource).toBe('astm-a906');
+    // A real 7/32 in grade 80 sling: 2 100 lb (makers' A906 tables, read), not the tie-down table's 3 500.
+    const small = (await (await create(new Request(url, json('POST', { tag: 'HR-CH-21', kind: 'chain', size: '7/32 in grade 80' })))).json()) as Item;
+    expect(small.ratings.vertical).toBeCloseTo(2100 * KG_PER_LB, 6);
   });
+  it('refuses items that are not lifting rigging, naming the field and saying why', async () => {
+    signInAs(await demoUser('operator@harrow.example'));
+    const g70 = await create(new Request(url, json('POST', { tag: 'HR-CH-22', kind: 'chain', size: '3/8 in grade 70' })));
+    expect(g70.status).toBe(400);
+    const g70Issue = (await g70.json()).issues[0];
+    expect(g70Issue.path).toBe('size');
+    expect(g70Issue.message).toMatch(/^Not lifting rigging: Grade 70 chain is tie-down and towing chain, not a lifting sling/);
+    // The tie-down table's "1/4 in" (7 mm) is sold for lifting as 9/32 in.
+    const quarter = await create(new Request(url, json('POST', { tag: 'HR-CH-23', kind: 'chain', size: '1/4 in grade 80' })));
+    expect((await quarter.json()).issues[0].message).toMatch(/sold as 9\/32 in/);
+    const strap = await create(new Request(url, json('POST', { tag: 'HR-ST-22', kind: 'recovery-strap', size: '75 mm', ratings: { vertical: 5000, choker: null, basket: null } })));
+    expect(strap.status).toBe(400);
+    expect((await strap.json()).issues[0]).toEqual({ path: 'kind', message: 'Not lifting rigging: A recovery strap is made for pulling (winching), not for lifting: it has no sling rating.' });
+  });
+  it('flags rows stored before the lifting rules with the reason, keeps their figures, and lets them be edited as they are', async () => {
+    signInAs(await demoUser('operator@harrow.example'));
+    const strap = (await items('?kind=recovery-strap'))[0] as Item & { notForLifting: string | null; size: string; length: number | null };
+    expect(strap.notForLifting).toMatch(/made for pulling/);
+    expect(strap.ratings.vertical).toBe(9072);
+    const id = String(strap.id);
+    const body = { tag: strap.tag, kind: strap.kind, size: strap.size, length: strap.length, ratings: strap.ratings, status: 'retired' };
+    const put = await update(new Request(`${url}/${id}`, json('PUT', body)), ctx({ id }));
+    expect(put.status).toBe(200);
+    expect(await put.json()).toMatchObject({ status: 'retired', notForLifting: strap.notForLifting, ratings: { vertical: 9072 } });
+    // Turning a lifting item into a non-lifting one is refused like a new one.
+    const sling = (await items('?kind=round-sling'))[0] as Item & { notForLifting: string | null };
+    expect(sling.notForLifting).toBeNull();
+    const sid = String(sling.id);
+    expect((await update(new Request(`${url}/${sid}`, json('PUT', { tag: sling.tag, kind: 'recovery-strap', size: 'x' })), ctx({ id: sid }))).status).toBe(400);
+    signInAs(await demoUser('operator@cobalt.example'));
+    const g70 = (await items('?kind=chain')).find((i) => i.tag === 'CF-CH-01') as Item & { notForLifting: string | null };
+    expect(g70.notForLifting).toMatch(/^Grade 70 chain/);
+    expect(g70.ratingSource).toBe('cfr-393-108');
+  });
+
   it('asks for a rating where no table applies, and refuses a duplicate tag with 409', async () => {
     signInAs(await demoUser('operator@harrow.example'));
     const res = await create(new Request(url, json('POST', { tag: 'HR-SB-20', kind: 'snatch-block', size: 'big' })));
@@ -112,12 +150,18 @@ describe('rigging CSV import and export', () => {
   const header = 'tag,kind,size,length_m,vertical_kg,choker_kg,basket_kg,status,last_inspection,next_inspection_due,notes';
   it('imports every row of a good file', async () => {
     signInAs(await demoUser('operator@cobalt.example'));
-    const csv = [header, 'CF-RS-10,round-sling,yellow,3.05,,,,in_service,2026-11-01,2027-11-01,', 'CF-ST-10,recovery-strap,"100 mm, 9 m",9.1,9000,,,,,,"strap, ""new"""'].join('\n');
+    const csv = [header, 'CF-RS-10,round-sling,yellow,3.05,,,,in_service,2026-11-01,2027-11-01,', 'CF-WS-10,web-sling,"50 mm, 2-ply",3,1450,1160,2900,,,,"web, ""new"""'].join('\n');
     const res = await importCsv(new Request(`${url}/import`, json('POST', { csv })));
     expect(res.status).toBe(201);
     expect(await res.json()).toEqual({ imported: 2 });
-    const strap = (await items('?kind=recovery-strap'))[0] as Item & { size: string; notes: string };
-    expect(strap).toMatchObject({ tag: 'CF-ST-10', size: '100 mm, 9 m', notes: 'strap, "new"', ratings: { vertical: 9000, choker: null, basket: null } });
+    const web = (await items('?kind=web-sling'))[0] as Item & { size: string; notes: string };
+    expect(web).toMatchObject({ tag: 'CF-WS-10', size: '50 mm, 2-ply', notes: 'web, "new"', ratings: { vertical: 1450, choker: 1160, basket: 2900 } });
+  });
+  it('refuses a recovery strap in an import, with the reason on its row', async () => {
+    signInAs(await demoUser('operator@cobalt.example'));
+    const res = await importCsv(new Request(`${url}/import`, json('POST', { csv: [header, 'CF-ST-10,recovery-strap,100 mm,9.1,9000,,,,,,'].join('\n') })));
+    expect(res.status).toBe(422);
+    expect((await res.json()).rowErrors).toEqual([{ row: 2, field: 'kind', message: expect.stringMatching(/^Not lifting rigging: A recovery strap is made for pulling/) }]);
   });
   it('imports nothing when any row is bad, and names each row and field', async () => {
     signInAs(await demoUser('operator@cobalt.example'));
@@ -150,11 +194,16 @@ describe('rigging CSV import and export', () => {
     const text = await res.text();
     const lines = text.trim().split('\r\n');
     expect(lines[0]).toBe(header);
-    // 3/8 grade 70 chain: 6 600 lb tie-down WLL (49 CFR 393.108) = 2 993.7 kg.
+    // A row carried over from before the lifting rules exports as stored: 3/8 grade 70 chain rated from the
+    // tie-down table, 6 600 lb (49 CFR 393.108) = 2 993.7 kg. 9/32 grade 100: 4 300 lb = 1 950.4 kg (A906, read).
     expect(lines[1]).toMatch(/^CF-CH-01,chain,3\/8 in grade 70,4\.9,2993\.7,,,in_service,/);
+    expect(lines[2]).toMatch(/^CF-CH-02,chain,9\/32 in grade 100,3\.05,1950\.4,,,in_service,/);
     const { parseRiggingCsv } = await import('@/lib/equipment/rigging-csv');
-    const again = parseRiggingCsv(text);
-    expect(again.ok && again.items.map((i) => [i.tag, i.ratings.vertical])).toEqual([['CF-CH-01', 2993.7]]);
+    // The lifting chain imports again as the same item; the grade 70 row is refused with the reason.
+    const again = parseRiggingCsv([lines[0], lines[2]].join('\n'));
+    expect(again.ok && again.items.map((i) => [i.tag, i.ratings.vertical])).toEqual([['CF-CH-02', 1950.4]]);
+    const g70 = parseRiggingCsv(text);
+    expect(!g70.ok && g70.errors).toEqual([{ row: 2, field: 'size', message: expect.stringMatching(/^Not lifting rigging: Grade 70/) }]);
   });
   it('refuses an operator of another role: a trainer gets 403 on import', async () => {
     signInAs(await demoUser('trainer@harrow.example'));

@@ -34,6 +34,11 @@ export default async function RiggingItemPage({ params, searchParams }: { params
       <div className="mb-5 space-y-3">
         <ExampleValuesNote />
         {(await searchParams).saved && <Notice tone="success">Item saved.</Notice>}
+        {item.notForLifting && (
+          <Notice tone="error" title="Not lifting rigging">
+            {item.notForLifting} The stored figures are kept as they were; the editor will not add this item to a lift plan.
+          </Notice>
+        )}
         {item.status === 'tagged_out' && <Notice tone="error" title="Tagged out">The editor refuses this item until it is back in service.</Notice>}
         {due === 'overdue' && <Notice tone="warning" title="Inspection overdue">It was due on {item.nextInspectionDue}. The editor warns when this item is picked.</Notice>}
       </div>

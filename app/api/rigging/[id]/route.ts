@@ -18,10 +18,12 @@ export const GET = route({ params: idParams }, async ({ user, params }) => {
 });
 
 export const PUT = route({ roles: rolesFor('manageRigging'), params: idParams, body: riggingItemSchema }, async ({ user, params, body }) => {
-  const item = resolvedOr400(body);
   return getDb()
     .transaction()
     .execute(async (trx) => {
+      const stored = await findRiggingItem(trx, user.organisationId, params.id);
+      if (!stored) throw notFound();
+      const item = resolvedOr400(body, stored);
       const row = await updateRiggingItem(trx, user.organisationId, params.id, item).catch((e) => tagConflict(e, item.tag));
       if (!row) throw notFound();
       await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, action: 'rigging.update', detail: { id: row.id, status: row.status } });
