@@ -14,7 +14,8 @@ test('the operator downloads the lift plan PDF and the drawing from the editor, 
   await signIn(page, 'operator@harrow.example');
   const id = await coilId(page);
   await page.goto(`/scenes/${id}`);
-  await expect(page.getByTestId('results-summary')).toBeVisible({ timeout: 90_000 });
+  // The editor's own analysis (the results sit behind a tab at this width): the PDF's figures must match it.
+  await page.waitForFunction(() => !!window.__arclineEditor?.store.getState().analysis?.result, undefined, { timeout: 90_000 });
 
   const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByTestId('editor-download-plan').click()]);
   expect(pdf.suggestedFilename()).toMatch(/^lift-plan-AL-\d+-rev\d+\.pdf$/);

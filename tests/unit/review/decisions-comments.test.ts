@@ -22,7 +22,7 @@ let awaiting: number;
 const rev = async (id: number) => (await getDb().selectFrom('scenes').select('revision').where('id', '=', id).executeTakeFirstOrThrow()).revision;
 const post = (handler: typeof decision.POST, id: number, body?: unknown) => call({ handler, method: 'POST', id: String(id), body });
 const patch = (sceneId: number, commentId: number, body: unknown) =>
-  comment.PATCH(new Request('http://arcline.test/x', { method: 'PATCH', body: JSON.stringify(body) }), { params: Promise.resolve({ id: String(sceneId), commentId: String(commentId) }) });
+  comment.PATCH(new Request('http://arcline.test/x', { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) }), { params: Promise.resolve({ id: String(sceneId), commentId: String(commentId) }) });
 let smtp: Awaited<ReturnType<typeof startFakeSmtp>>;
 
 beforeAll(async () => {
