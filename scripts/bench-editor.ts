@@ -170,7 +170,7 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
     await signIn(page);
     await page.goto(`${base}/scenes/${sceneId}/replay`, { waitUntil: 'networkidle' });
     await page.waitForFunction('!!window.__arclineReplay?.store.getState().analysis?.result', null, { timeout: 60_000 });
-    const script = (frames: number, timed: boolean) => `new Promise((resolve) => {
+    const script = (frames: number) => `new Promise((resolve) => {
       const r = window.__arclineReplay;
       const span = r.playback.clock.arc.span;
       const times = []; const work = [];
@@ -186,8 +186,8 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
       };
       requestAnimationFrame(frame);
     })`;
-    await page.evaluate(script(180, false));
-    return (await page.evaluate(script(360, true))) as { frames: number[]; work: number[] };
+    await page.evaluate(script(180)); // untimed warm-up
+    return (await page.evaluate(script(360))) as { frames: number[]; work: number[] };
   } finally {
     await browser.close();
   }

@@ -36,8 +36,6 @@ export const RANGE = {
 
 const within = (min: number, max: number, unit: string) =>
   z.number().min(min, `must be from ${min} to ${max} ${unit}`).max(max, `must be from ${min} to ${max} ${unit}`);
-/** Ratings and other positive quantities without a tighter range of their own (kg or m). */
-const pos = z.number().positive().max(RANGE.mass);
 const massKg = within(0, RANGE.mass, 'kg');
 const truckCoord = within(-RANGE.truck, RANGE.truck, 'm');
 const siteCoord = within(-RANGE.site, RANGE.site, 'm');

@@ -24,8 +24,14 @@ export function sceneExtent(document: unknown): Extent {
   const xs: number[] = [0];
   const ys: number[] = [0];
   for (const o of objectsOf(document)) {
-    if (num(o.x) && num(o.y)) xs.push(o.x), ys.push(o.y);
-    if (num(o.x2) && num(o.y2)) xs.push(o.x2), ys.push(o.y2);
+    if (num(o.x) && num(o.y)) {
+      xs.push(o.x);
+      ys.push(o.y);
+    }
+    if (num(o.x2) && num(o.y2)) {
+      xs.push(o.x2);
+      ys.push(o.y2);
+    }
   }
   return { minX: Math.min(...xs) - EXTENT_MARGIN, minY: Math.min(...ys) - EXTENT_MARGIN, maxX: Math.max(...xs) + EXTENT_MARGIN, maxY: Math.max(...ys) + EXTENT_MARGIN };
 }
