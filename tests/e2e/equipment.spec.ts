@@ -86,7 +86,7 @@ test('rigging inventory: filters, import with row errors (nothing imported), the
   await page.goto('/rigging');
   const table = page.getByRole('table', { name: 'Rigging inventory' });
   const count = page.getByTestId('rigging-count');
-  await expect(count).toHaveText('14 items');
+  await expect(count).toHaveText('15 items');
   await screens(page, 'rigging-list');
 
   await page.getByLabel('Inspection due').selectOption('overdue');
@@ -100,7 +100,7 @@ test('rigging inventory: filters, import with row errors (nothing imported), the
   await page.getByLabel('Kind').selectOption('shackle');
   await expect(table.getByRole('link')).toHaveText(['HR-SH-01', 'HR-SH-02', 'HR-SH-03']);
   await page.getByLabel('Kind').selectOption('');
-  await expect(count).toHaveText('14 items');
+  await expect(count).toHaveText('15 items');
 
   const header = 'tag,kind,size,length_m,vertical_kg,choker_kg,basket_kg,status,last_inspection,next_inspection_due,notes';
   await page.getByLabel('Or paste the CSV').fill([header, 'HR-RS-30,round-sling,tan,3,,,,,,,', 'HR-XX-30,rope,,,,,,,,,', 'HR-SH-30,shackle,5/8,,,,,,2026-13-01,,'].join('\n'));
@@ -111,7 +111,7 @@ test('rigging inventory: filters, import with row errors (nothing imported), the
   await expect(problems.locator('tbody tr').first()).toContainText('3');
   await expect(problems.locator('tbody tr').first()).toContainText('kind');
   await expect(problems.locator('tbody tr').nth(1)).toContainText('last_inspection');
-  await expect(count).toHaveText('14 items');
+  await expect(count).toHaveText('15 items');
   await screens(page, 'rigging-import-errors');
 
   await page.getByLabel('Or paste the CSV').fill([header, 'HR-RS-30,round-sling,tan,3,,,,,,,', 'HR-SH-30,shackle,5/8,,,,,,,,'].join('\n'));
