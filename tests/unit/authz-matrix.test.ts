@@ -409,7 +409,7 @@ const routes: MatrixRoute[] = [
   },
   // ── the review desk ────────────────────────────────────────────────────
   {
-    method: 'POST', path: '/api/scenes/[id]/submit', handler: submit.POST, writes: ['scenes', 'scene_submissions', 'audit_log', 'notifications', 'mail_outbox'],
+    method: 'POST', path: '/api/scenes/[id]/submit', handler: submit.POST, writes: ['scenes', 'scene_revisions', 'scene_submissions', 'audit_log', 'notifications', 'mail_outbox'],
     body: (t) => ({ revision: t.revision }),
     expect: {
       'Harrow: operator’s draft': [401, 200, 403, 403, 403, 404],
