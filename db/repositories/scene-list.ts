@@ -87,7 +87,8 @@ export function ftsQuery(text: string): string | null {
   return words.slice(0, 12).map((w) => `"${w}"*`).join(' ');
 }
 
-function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
+/** The scenes a user may read: their organisation's, not deleted; operators see their own plus approved ones. */
+export function visibleScenes(db: Db, user: CurrentUser) {
   let q = db
     .selectFrom('scenes')
     .innerJoin('users', 'users.id', 'scenes.owner_id')
@@ -96,6 +97,11 @@ function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
   if (!mayReadAllScenes(user)) {
     q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
   }
+  return q;
+}
+
+function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
+  let q = visibleScenes(db, user);
   if (opts.status) q = q.where('scenes.status', '=', opts.status);
   if (opts.inTrainingSet !== undefined) q = q.where('scenes.in_training_set', '=', opts.inTrainingSet ? 1 : 0);
   if (opts.q !== undefined) {

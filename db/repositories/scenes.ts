@@ -1,12 +1,11 @@
 import type { Kysely } from 'kysely';
 import type { Database, SceneRow } from '../schema';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
-import { mayReadAllScenes } from '@/lib/auth/permissions';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
 import { compressedSnapshot } from './revision-storage';
 
-import type { SceneSummary } from './scene-list';
+import { visibleScenes, type SceneSummary } from './scene-list';
 
 export type { SceneSummary } from './scene-list';
 
@@ -43,21 +42,9 @@ function toScene(row: SceneWithOwner): Scene {
   };
 }
 
-/** The scenes a user may read: their organisation's, not deleted; operators see their own plus approved ones. */
-function visibleTo(db: Db, user: CurrentUser) {
-  let q = db
-    .selectFrom('scenes')
-    .innerJoin('users', 'users.id', 'scenes.owner_id')
-    .where('scenes.organisation_id', '=', user.organisationId)
-    .where('scenes.deleted_at', 'is', null);
-  if (!mayReadAllScenes(user)) {
-    q = q.where((eb) => eb.or([eb('scenes.owner_id', '=', user.id), eb('scenes.status', '=', 'approved')]));
-  }
-  return q;
-}
 
 export async function getScene(db: Db, user: CurrentUser, id: number): Promise<Scene | undefined> {
-  const row = await visibleTo(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
+  const row = await visibleScenes(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
   return row ? toScene(row as SceneWithOwner) : undefined;
 }
 
