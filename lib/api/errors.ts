@@ -38,3 +38,12 @@ export function describeIssues(issues: FieldIssue[]): string {
 export function jsonError(status: number, error: string, issues?: FieldIssue[]): Response {
   return Response.json(issues ? { error, issues } : { error }, { status });
 }
+
+/** The body of a 409 for a write based on an older revision: names the field and carries the current revision. */
+export function staleRevisionBody(what: string, sent: number, current: number) {
+  return {
+    error: `revision: ${what} was based on revision ${sent}, but the scene is now at revision ${current}`,
+    issues: [{ path: 'revision', message: 'Stale revision' }],
+    currentRevision: current,
+  };
+}

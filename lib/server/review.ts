@@ -1,3 +1,4 @@
+import { staleRevisionBody } from '@/lib/api/errors';
 import { keepRevision } from '@/db/repositories/revision-storage';
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
@@ -25,8 +26,7 @@ export interface Outcome {
   body: Record<string, unknown>;
 }
 const fail = (status: number, error: string, extra: Record<string, unknown> = {}): Outcome => ({ status, body: { error, ...extra } });
-const stale = (sent: number, current: number) =>
-  fail(409, `revision: this request was based on revision ${sent}, but the scene is now at revision ${current}`, { issues: [{ path: 'revision', message: 'Stale revision' }], currentRevision: current });
+const stale = (sent: number, current: number): Outcome => ({ status: 409, body: staleRevisionBody('this request', sent, current) });
 
 type Db = Kysely<Database>;
 

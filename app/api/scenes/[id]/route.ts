@@ -3,7 +3,7 @@ import { inTransaction } from '@/db/transaction';
 import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError, staleRevisionBody } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
 import { isEditable, transition } from '@/lib/review/lifecycle';
@@ -40,14 +40,7 @@ export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body:
   });
   if (outcome.kind === 'missing') throw notFound();
   if (outcome.kind === 'stale') {
-    return Response.json(
-      {
-        error: `revision: this save was based on revision ${body.revision}, but the scene is now at revision ${outcome.current}`,
-        issues: [{ path: 'revision', message: 'Stale revision' }],
-        currentRevision: outcome.current,
-      },
-      { status: 409 },
-    );
+    return Response.json(staleRevisionBody('this save', body.revision, outcome.current), { status: 409 });
   }
   scheduleThinning(getDb(), params.id);
   return { revision: outcome.revision, savedAt: outcome.savedAt };

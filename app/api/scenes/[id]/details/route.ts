@@ -3,7 +3,7 @@ import { inTransaction } from '@/db/transaction';
 import { getScene } from '@/db/repositories/scenes';
 import { planDetailsAt, savePlanDetails } from '@/db/repositories/plan-details';
 import { idParams, route } from '@/lib/api/route';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError, staleRevisionBody } from '@/lib/api/errors';
 import { planRevisionQuery, savePlanDetailsSchema } from '@/lib/validations/plan';
 import { planRevision } from '../plan-revision';
 import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
@@ -28,14 +28,7 @@ export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body:
   });
   if (outcome.kind === 'missing') throw new HttpError(404, 'Scene not found');
   if (outcome.kind === 'stale') {
-    return Response.json(
-      {
-        error: `revision: these details were based on revision ${body.revision}, but the scene is now at revision ${outcome.current}`,
-        issues: [{ path: 'revision', message: 'Stale revision' }],
-        currentRevision: outcome.current,
-      },
-      { status: 409 },
-    );
+    return Response.json(staleRevisionBody('these details', body.revision, outcome.current), { status: 409 });
   }
   return { id: params.id, revision: outcome.revision, savedAt: outcome.savedAt, savedBy: user.name, details: body.details };
 });
