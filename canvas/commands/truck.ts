@@ -1,6 +1,6 @@
 import { wrap360 } from '@/lib/angles';
 import type { SceneDocument, Swing } from '@/lib/scene/schema';
-import type { TruckObject } from '@/lib/scene/objects';
+import { legSetupSchema, type TruckObject } from '@/lib/scene/objects';
 import type { Capture, Command } from './command';
 import { maxExtension, type TruckModel } from '@/lib/scene/truck/truck-model';
 
@@ -19,10 +19,13 @@ export const setBoom =
   (boom: Partial<TruckObject['boom']>, capture: Capture = 'commit'): Command =>
   (doc) => ({ document: mapTruck(doc, (t) => ({ ...t, boom: { ...t.boom, ...boom } })), capture });
 
+/** The document's own bound on an extension, so no edit leaves a document the schema refuses. */
+const EXTENSION_MAX = legSetupSchema.shape.extension.maxValue ?? 15;
+
 export const setLegExtension =
   (legId: string, extension: number, capture: Capture): Command =>
   (doc) => ({
-    document: mapTruck(doc, (t) => ({ ...t, legs: { ...t.legs, [legId]: { cribbing: t.legs[legId]?.cribbing ?? null, extension: Math.max(0, extension) } } })),
+    document: mapTruck(doc, (t) => ({ ...t, legs: { ...t.legs, [legId]: { cribbing: t.legs[legId]?.cribbing ?? null, extension: Math.min(EXTENSION_MAX, Math.max(0, extension)) } } })),
     capture,
   });
 

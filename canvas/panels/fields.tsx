@@ -1,38 +1,33 @@
 'use client';
 import { useState } from 'react';
-import { kgToLb, type UnitSystem } from '@/lib/units';
-import { formatNumber } from '@/lib/format/number';
-import { parseLength, parseMass, parseNumber } from '@/lib/format/parse';
-import { formatFeetInches } from '@/lib/format/quantity';
+import type { UnitSystem } from '@/lib/units';
+import { commitField, initialField, revertField, syncField, typeInField, type FieldSpec, type FieldState } from './field-logic';
+import { lengthSpec, massSpec, numberSpec } from './field-specs';
 
 interface FieldProps<T> {
   label: string;
   value: T;
   onCommit(v: T): void;
   disabled?: boolean;
-  hint?: string;
   testId?: string;
 }
 
-/** A text box that shows a formatted value and commits the parsed one on Enter or leaving the field. */
-function ParsedField<T>({ label, value, onCommit, disabled, hint, testId, format, parse, suffix }: FieldProps<T> & { format(v: T): string; parse(s: string): T | null; suffix?: string }) {
-  const [text, setText] = useState(format(value));
-  const [bad, setBad] = useState(false);
-  // A new value from outside (undo, another field) replaces what is typed: adjusted while rendering.
-  const [shown, setShown] = useState(value);
-  if (!Object.is(shown, value)) {
-    setShown(value);
-    setText(format(value));
-    setBad(false);
-  }
+/**
+ * A text box that shows the plan's value and commits the parsed one on Enter or leaving the field. The
+ * rules (range refused or clamped, with a message) are in field-logic.ts.
+ */
+export function SpecField({ label, value, onCommit, disabled, testId, spec }: FieldProps<number> & { spec: FieldSpec }) {
+  const [raw, setState] = useState<FieldState>(() => initialField(spec, value));
+  // A new value from outside (undo, another field, this field's own commit) replaces what is typed: adjusted while rendering.
+  const state = syncField(raw, spec, value);
+  if (state !== raw) setState(state);
   const commit = () => {
-    const v = parse(text);
-    if (v === null) return setBad(true);
-    setBad(false);
-    if (format(v) !== format(value)) onCommit(v);
-    else setText(format(value));
+    const r = commitField(state, spec, value);
+    setState(r.state);
+    if (r.commit !== undefined) onCommit(r.commit);
   };
   const id = `f-${label.replace(/\W+/g, '-').toLowerCase()}`;
+  const msg = state.message;
   return (
     <div className="flex flex-col gap-0.5">
       <label htmlFor={id} className="text-xs font-medium text-ink-soft">
@@ -42,66 +37,42 @@ function ParsedField<T>({ label, value, onCommit, disabled, hint, testId, format
         <input
           id={id}
           data-testid={testId}
-          value={text}
+          value={state.text}
           disabled={disabled}
-          aria-invalid={bad}
-          onChange={(e) => setText(e.target.value)}
+          aria-invalid={msg?.tone === 'error'}
+          aria-describedby={msg ? `${id}-msg` : undefined}
+          onChange={(e) => setState(typeInField(state, e.target.value))}
           onBlur={commit}
           onKeyDown={(e) => {
             if (e.key === 'Enter') commit();
-            if (e.key === 'Escape') setText(format(value));
+            if (e.key === 'Escape') setState(revertField(state, spec, value));
           }}
-          className={`min-h-11 w-full rounded-md border bg-paper-raised px-2 text-sm tabular-nums disabled:bg-paper-sunk ${bad ? 'border-over' : 'border-paper-line'}`}
+          className={`min-h-11 w-full min-w-0 rounded-md border bg-paper-raised px-2 text-sm tabular-nums disabled:bg-paper-sunk ${msg?.tone === 'error' ? 'border-over' : msg ? 'border-signal-dark' : 'border-paper-line'}`}
         />
-        {suffix && <span className="text-xs text-ink-muted">{suffix}</span>}
+        {spec.unit && <span className="text-xs text-ink-muted">{spec.unit}</span>}
       </div>
-      {bad && <span className="text-xs text-over">Not a value this field reads{hint ? ` (${hint})` : ''}</span>}
+      {msg && (
+        <span id={`${id}-msg`} role={msg.tone === 'error' ? 'alert' : 'status'} data-testid={testId ? `${testId}-message` : undefined} className={`text-xs ${msg.tone === 'error' ? 'text-over' : 'rounded bg-signal-light px-1 text-ink'}`}>
+          {msg.text}
+        </span>
+      )}
     </div>
   );
 }
 
-export function LengthField(p: FieldProps<number> & { units: UnitSystem; min?: number }) {
-  const metric = p.units === 'metric';
-  return (
-    <ParsedField
-      {...p}
-      hint={metric ? 'metres, e.g. 4.25' : `feet and inches, e.g. 14' 6"`}
-      suffix={metric ? 'm' : undefined}
-      format={(v) => (metric ? formatNumber(v, 2) : formatFeetInches(v))}
-      parse={(s) => {
-        const v = parseLength(s, p.units);
-        return v === null || (p.min !== undefined && v < p.min) ? null : v;
-      }}
-    />
-  );
+type Ranged = { min?: number; max?: number; clamp?: boolean; rangeWhy?: string };
+const range = (p: Ranged) => ({ min: p.min, max: p.max, outOfRange: p.clamp ? ('clamp' as const) : ('refuse' as const), rangeWhy: p.rangeWhy });
+
+export function LengthField(p: FieldProps<number> & Ranged & { units: UnitSystem }) {
+  return <SpecField {...p} spec={lengthSpec(p.units, range(p))} />;
 }
 
-export function MassField(p: FieldProps<number> & { units: UnitSystem }) {
-  const metric = p.units === 'metric';
-  return (
-    <ParsedField
-      {...p}
-      suffix={metric ? 'kg' : 'lb'}
-      format={(v) => formatNumber(metric ? v : kgToLb(v))}
-      parse={(s) => {
-        const v = parseMass(s, p.units);
-        return v === null || v < 0 ? null : v;
-      }}
-    />
-  );
+export function MassField(p: FieldProps<number> & Ranged & { units: UnitSystem }) {
+  return <SpecField {...p} spec={massSpec(p.units, { ...range(p), min: p.min ?? 0 })} />;
 }
 
-export function NumberField(p: FieldProps<number> & { suffix?: string; min?: number; max?: number; digits?: number }) {
-  return (
-    <ParsedField
-      {...p}
-      format={(v) => (p.digits === undefined ? String(Math.round(v * 10) / 10) : formatNumber(v, p.digits))}
-      parse={(s) => {
-        const v = parseNumber(s.replace(/\s*[°%]$/, ''));
-        return v === null || (p.min !== undefined && v < p.min) || (p.max !== undefined && v > p.max) ? null : v;
-      }}
-    />
-  );
+export function NumberField(p: FieldProps<number> & Ranged & { suffix?: string; digits?: number }) {
+  return <SpecField {...p} spec={numberSpec({ ...range(p), unit: p.suffix, digits: p.digits })} />;
 }
 
 export function SelectField<T extends string>({ label, value, options, onCommit, disabled, testId }: { label: string; value: T; options: { value: T; label: string }[]; onCommit(v: T): void; disabled?: boolean; testId?: string }) {

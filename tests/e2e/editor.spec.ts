@@ -41,7 +41,7 @@ test('sketch a lift from scratch, read the results, and find the same scene afte
   await clickSite(page, 0, 0);
   await expect(page.getByTestId('inspector-truck')).toBeVisible();
   // Pads: cribbing under the front left pad, and the rear right leg partly in.
-  await page.getByTestId('crib-FL').fill('16');
+  await page.getByTestId('crib-FL').fill(`4' 0"`);
   await page.getByTestId('crib-FL').press('Enter');
   await page.getByTestId('ext-RR').fill(`4' 0"`);
   await page.getByTestId('ext-RR').press('Enter');

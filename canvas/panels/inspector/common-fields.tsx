@@ -2,11 +2,13 @@
 import type { SceneObject } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
-import { LengthField, NumberField, TextField } from '../fields';
+import { TextField } from '../fields';
+import { Bound } from './bound-field';
+import { objectFields } from './object-fields';
 import { Section } from './section';
 
 /** Position, turn, label and lock: every object has them. */
-export function CommonFields({ o, turnLabel = 'Turned (° from east, CCW)' }: { o: SceneObject; turnLabel?: string }) {
+export function CommonFields({ o }: { o: SceneObject }) {
   const { store } = useEditorContext();
   const units = useEditorState((s) => s.units);
   const viewOnly = useEditorState((s) => s.readOnly);
@@ -14,9 +16,9 @@ export function CommonFields({ o, turnLabel = 'Turned (° from east, CCW)' }: { 
   const up = (patch: Record<string, unknown>) => store.getState().run(updateObject(o.id, patch as Partial<SceneObject>));
   return (
     <Section title="Where">
-      <LengthField label="East (x)" value={o.x} units={units} disabled={ro} onCommit={(x) => up({ x })} testId="field-x" />
-      <LengthField label="North (y)" value={o.y} units={units} disabled={ro} onCommit={(y) => up({ y })} testId="field-y" />
-      {o.kind !== 'tape' && <NumberField label={turnLabel} value={o.rotation} suffix="°" disabled={ro} onCommit={(rotation) => up({ rotation })} testId="field-rotation" />}
+      {objectFields(o, units).map((f) => (
+        <Bound key={f.key} field={f} disabled={ro} />
+      ))}
       <div className="col-span-2">
         <TextField label="Label on the plan" value={o.label} disabled={viewOnly} onCommit={(label) => up({ label })} />
       </div>

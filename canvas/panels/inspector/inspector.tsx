@@ -10,6 +10,7 @@ import { LengthField, TextField } from '../fields';
 import { Section } from './section';
 import { deleteSelection, duplicate } from '../../editor/actions';
 import type { SceneObject } from '@/lib/scene/objects';
+import { SITE_LIMIT } from '@/lib/scene/primitives';
 
 const KIND_NAMES: Record<SceneObject['kind'], string> = { truck: 'Truck', load: 'Load', trailer: 'Receiving trailer', obstacle: 'Obstacle', note: 'Note', tape: 'Measuring tape' };
 
@@ -57,9 +58,9 @@ export function Inspector() {
       {o.kind === 'obstacle' && <ObstacleInspector o={o} />}
       {o.kind === 'trailer' && (
         <Section title="Trailer">
-          <LengthField label="Length" value={o.length} units={units} min={1} disabled={ro} onCommit={(length) => up({ length })} />
-          <LengthField label="Width" value={o.width} units={units} min={0.5} disabled={ro} onCommit={(width) => up({ width })} />
-          <LengthField label="Deck height" value={o.deckHeight} units={units} min={0} disabled={ro} onCommit={(deckHeight) => up({ deckHeight })} testId="field-deck-height" />
+          <LengthField label="Length" value={o.length} units={units} min={1} max={30} disabled={ro} onCommit={(length) => up({ length })} />
+          <LengthField label="Width" value={o.width} units={units} min={0.5} max={4} disabled={ro} onCommit={(width) => up({ width })} />
+          <LengthField label="Deck height" value={o.deckHeight} units={units} min={0} max={200} disabled={ro} onCommit={(deckHeight) => up({ deckHeight })} testId="field-deck-height" />
         </Section>
       )}
       {o.kind === 'note' && (
@@ -69,11 +70,11 @@ export function Inspector() {
       )}
       {o.kind === 'tape' && (
         <Section title="Far end">
-          <LengthField label="East (x)" value={o.x2} units={units} disabled={ro} onCommit={(x2) => up({ x2 })} />
-          <LengthField label="North (y)" value={o.y2} units={units} disabled={ro} onCommit={(y2) => up({ y2 })} />
+          <LengthField label="East (x)" value={o.x2} units={units} min={-SITE_LIMIT} max={SITE_LIMIT} disabled={ro} onCommit={(x2) => up({ x2 })} />
+          <LengthField label="North (y)" value={o.y2} units={units} min={-SITE_LIMIT} max={SITE_LIMIT} disabled={ro} onCommit={(y2) => up({ y2 })} />
         </Section>
       )}
-      <CommonFields o={o} turnLabel={o.kind === 'truck' ? 'Heading of the cab (° from east, CCW)' : undefined} />
+      <CommonFields o={o} />
     </div>
   );
 }

@@ -38,22 +38,22 @@ export function LoadInspector({ load }: { load: LoadObject }) {
         {s.kind === 'coil' ? (
           <>
             <SelectField label="Eye" value={s.eye} disabled={ro} options={[{ value: 'horizontal', label: 'Eye horizontal (on its roll)' }, { value: 'vertical', label: 'Eye vertical (on its face)' }]} onCommit={(eye) => shape({ eye })} />
-            <LengthField label="Outside diameter" value={s.outerDiameter} units={units} min={0.1} disabled={ro} onCommit={(outerDiameter) => shape({ outerDiameter })} />
-            <LengthField label="Inside diameter" value={s.innerDiameter} units={units} min={0.01} disabled={ro} onCommit={(innerDiameter) => shape({ innerDiameter })} />
-            <LengthField label="Width" value={s.width} units={units} min={0.1} disabled={ro} onCommit={(width) => shape({ width })} />
+            <LengthField label="Outside diameter" value={s.outerDiameter} units={units} min={0.1} max={5} disabled={ro} onCommit={(outerDiameter) => shape({ outerDiameter })} />
+            <LengthField label="Inside diameter" value={s.innerDiameter} units={units} min={0.01} max={Math.min(4, s.outerDiameter - 0.01)} rangeWhy="inside the outside diameter:" disabled={ro} onCommit={(innerDiameter) => shape({ innerDiameter })} />
+            <LengthField label="Width" value={s.width} units={units} min={0.1} max={5} disabled={ro} onCommit={(width) => shape({ width })} />
           </>
         ) : (
           <>
-            <LengthField label="Length" value={s.length} units={units} min={0.1} disabled={ro} onCommit={(length) => shape({ length })} />
-            <LengthField label="Width" value={s.width} units={units} min={0.1} disabled={ro} onCommit={(width) => shape({ width })} />
-            <LengthField label="Height" value={s.height} units={units} min={0.1} disabled={ro} onCommit={(height) => shape({ height })} />
+            <LengthField label="Length" value={s.length} units={units} min={0.1} max={30} disabled={ro} onCommit={(length) => shape({ length })} />
+            <LengthField label="Width" value={s.width} units={units} min={0.1} max={s.kind === 'box' ? 10 : 5} disabled={ro} onCommit={(width) => shape({ width })} />
+            <LengthField label="Height" value={s.height} units={units} min={0.1} max={s.kind === 'box' ? 10 : 6} disabled={ro} onCommit={(height) => shape({ height })} />
           </>
         )}
       </Section>
       <Section title="Weight">
         <SelectField label="Weight from" value={load.massMode} disabled={ro} options={[{ value: 'given', label: 'Known weight' }, { value: 'estimate', label: 'Estimate from size' }]} onCommit={(massMode) => up({ massMode, ...(massMode === 'given' ? { massKg: Math.round(loadMass(load)) } : {}) })} />
         {load.massMode === 'given' ? (
-          <MassField label="Weight" value={load.massKg} units={units} disabled={ro} onCommit={(massKg) => up({ massKg })} testId="field-load-mass" />
+          <MassField label="Weight" value={load.massKg} units={units} max={500_000} disabled={ro} onCommit={(massKg) => up({ massKg })} testId="field-load-mass" />
         ) : (
           <NumberField label="Density (kg/m³)" value={load.density} min={1} digits={0} disabled={ro} onCommit={(density) => up({ density })} />
         )}
@@ -64,10 +64,10 @@ export function LoadInspector({ load }: { load: LoadObject }) {
         </div>
       </Section>
       <Section title="Hook and centre of gravity">
-        <LengthField label="Tip to load bottom" value={load.hang} units={units} min={0} disabled={ro} onCommit={(hang) => up({ hang })} />
-        <MassField label="Hook block" value={load.blockMassKg} units={units} disabled={ro} onCommit={(blockMassKg) => up({ blockMassKg })} />
-        <LengthField label="CG along" value={load.cg.x} units={units} disabled={ro} onCommit={(x) => up({ cg: { ...load.cg, x } })} />
-        <LengthField label="CG up from bottom" value={load.cg.z} units={units} min={0} disabled={ro} onCommit={(z) => up({ cg: { ...load.cg, z } })} />
+        <LengthField label="Tip to load bottom" value={load.hang} units={units} min={0} max={60} disabled={ro} onCommit={(hang) => up({ hang })} />
+        <MassField label="Hook block" value={load.blockMassKg} units={units} max={5000} disabled={ro} onCommit={(blockMassKg) => up({ blockMassKg })} />
+        <LengthField label="CG along" value={load.cg.x} units={units} min={-15} max={15} disabled={ro} onCommit={(x) => up({ cg: { ...load.cg, x } })} />
+        <LengthField label="CG up from bottom" value={load.cg.z} units={units} min={0} max={10} disabled={ro} onCommit={(z) => up({ cg: { ...load.cg, z } })} />
       </Section>
       <RiggingPicker load={load} />
     </>

@@ -32,7 +32,7 @@ export function ObstacleInspector({ o }: { o: ObstacleObject }) {
         options={OBSTACLE_KINDS.filter((k) => k !== 'power-line' || wire).map((k) => ({ value: k, label: KIND_LABEL[k] }))}
         onCommit={(obstacleKind) => up({ obstacleKind })}
       />
-      <LengthField label={wire ? 'Lowest wire height' : 'Height of its top'} value={o.height} units={units} min={0} disabled={ro} onCommit={(height) => up({ height })} testId="field-height" />
+      <LengthField label={wire ? 'Lowest wire height' : 'Height of its top'} value={o.height} units={units} min={0} max={200} disabled={ro} onCommit={(height) => up({ height })} testId="field-height" />
       {wire && (
         <NumberField
           label="Voltage (kV; blank if unknown)"
@@ -46,12 +46,12 @@ export function ObstacleInspector({ o }: { o: ObstacleObject }) {
       )}
       {s.kind === 'rect' && (
         <>
-          <LengthField label="Length" value={s.length} units={units} min={0.05} disabled={ro} onCommit={(length) => up({ shape: { ...s, length } })} />
-          <LengthField label="Width" value={s.width} units={units} min={0.05} disabled={ro} onCommit={(width) => up({ shape: { ...s, width } })} />
+          <LengthField label="Length" value={s.length} units={units} min={0.05} max={500} disabled={ro} onCommit={(length) => up({ shape: { ...s, length } })} />
+          <LengthField label="Width" value={s.width} units={units} min={0.05} max={500} disabled={ro} onCommit={(width) => up({ shape: { ...s, width } })} />
         </>
       )}
-      {s.kind === 'circle' && <LengthField label="Diameter" value={s.diameter} units={units} min={0.05} disabled={ro} onCommit={(diameter) => up({ shape: { ...s, diameter } })} />}
-      {s.kind === 'line' && <LengthField label="Span shown" value={s.length} units={units} min={1} disabled={ro} onCommit={(length) => up({ shape: { ...s, length } })} />}
+      {s.kind === 'circle' && <LengthField label="Diameter" value={s.diameter} units={units} min={0.05} max={100} disabled={ro} onCommit={(diameter) => up({ shape: { ...s, diameter } })} />}
+      {s.kind === 'line' && <LengthField label="Span shown" value={s.length} units={units} min={1} max={1000} disabled={ro} onCommit={(length) => up({ shape: { ...s, length } })} />}
       {s.kind === 'polygon' && <p className="col-span-2 text-xs text-ink-muted">{s.points.length} corners. Redraw with the outline tool (P) to change the shape.</p>}
     </Section>
   );

@@ -1,13 +1,14 @@
 'use client';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { setDocumentFields, setSwing } from '../../commands/truck';
-import { NumberField, SelectField } from '../fields';
+import { SelectField } from '../fields';
+import { Bound } from './bound-field';
+import { sceneFields } from './bound-fields';
 import { Section } from './section';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
 import { arcOf } from '@/lib/lift/swing';
 import { BackgroundPanel } from '../../background/background-panel';
 import { screenToWorld } from '../../editor/camera';
-import { inToM, kpaToPsf, mToIn, psfToKpa } from '@/lib/units';
 import { formatPressure } from '@/lib/format/quantity';
 
 /** What the engine will analyse for these fields (lib/lift/swing.ts), so 0° → 360° is never read as one slew. */
@@ -26,13 +27,14 @@ export function SceneSettings() {
   const ro = useEditorState((s) => s.readOnly);
   const run = store.getState().run;
   const sceneId = useEditorState((s) => s.sceneId);
-  const metric = units === 'metric';
+  const fields = sceneFields(units);
   return (
     <div data-testid="scene-settings">
       <p className="mb-3 text-sm text-ink-muted">Nothing selected. Press an object on the plan to see its exact values; these settings belong to the whole scene.</p>
       <Section title="Swing plan">
-        <NumberField label="Pick at slew (°)" value={doc.swing.from} suffix="°" min={0} max={360} disabled={ro} onCommit={(from) => run(setSwing({ from }))} testId="field-pick" />
-        <NumberField label="Set at slew (°)" value={doc.swing.to} suffix="°" min={0} max={360} disabled={ro} onCommit={(to) => run(setSwing({ to }))} testId="field-set" />
+        {fields.slice(0, 2).map((f) => (
+          <Bound key={f.key} field={f} disabled={ro} />
+        ))}
         <div className="col-span-2">
           <SelectField
             label="Direction"
@@ -63,20 +65,12 @@ export function SceneSettings() {
             }}
           />
         </div>
-        <NumberField
-          label={`Allowable pressure (${metric ? 'kPa' : 'psf'})`}
-          value={metric ? doc.soil.allowable : kpaToPsf(doc.soil.allowable)}
-          min={1}
-          digits={0}
-          disabled={ro}
-          testId="field-allowable"
-          onCommit={(v) => run(setDocumentFields({ soil: { preset: 'custom', allowable: metric ? v : psfToKpa(v) } }))}
-        />
+        <Bound field={fields[2]} disabled={ro} />
       </Section>
       <Section title="Limits of this plan">
-        <NumberField label="Percent of tipping" value={doc.limits.percentOfTipping} suffix="%" min={1} max={100} disabled={ro} onCommit={(percentOfTipping) => run(setDocumentFields({ limits: { ...doc.limits, percentOfTipping } }))} />
-        <NumberField label={`Clearance (${metric ? 'm' : 'in'})`} value={metric ? doc.limits.clearance : mToIn(doc.limits.clearance)} min={0} digits={metric ? 2 : 0} disabled={ro} onCommit={(v) => run(setDocumentFields({ limits: { ...doc.limits, clearance: metric ? v : inToM(v) } }))} />
-        <NumberField label="Percent of load chart" value={doc.limits.percentOfRated} suffix="%" min={1} max={100} disabled={ro} onCommit={(percentOfRated) => run(setDocumentFields({ limits: { ...doc.limits, percentOfRated } }))} />
+        {fields.slice(3).map((f) => (
+          <Bound key={f.key} field={f} disabled={ro} />
+        ))}
       </Section>
       {sceneId !== null && (
         <section className="mb-4">
