@@ -73,7 +73,7 @@ export function SceneEditor(props: SceneEditorProps) {
     <EditorContext.Provider value={value}>
       <div className="flex h-full flex-col">
         <TopBar scene={props.scene} user={props.user} />
-        <div className="relative flex min-h-0 flex-1">
+        <div className="relative flex min-h-0 flex-1" data-drawer-host>
           <ToolRail />
           <div className="relative flex min-w-0 flex-1 flex-col">
             <div className="relative min-h-0 flex-1">

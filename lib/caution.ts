@@ -9,3 +9,6 @@ export const CAUTION_LINES = [
 ] as const;
 
 export const CAUTION_TEXT = CAUTION_LINES.join(' ');
+
+/** The caution in one line, beside a verdict or a figure; the full text (CAUTION_LINES) is a click away. */
+export const CAUTION_SHORT = "Planning aid only: the manufacturer's load chart and manual govern, a qualified operator decides, local codes apply.";

@@ -4,7 +4,7 @@ import type { PlaceKind } from '@/lib/scene/factories';
 import type { Command } from '../commands/command';
 import type { SceneObject } from '@/lib/scene/objects';
 import { objectAt, type GeometryContext } from '@/lib/scene/geometry/footprints';
-import { handleAt, handlesFor, type Handle } from './handles';
+import { MIN_DRAWN_PX, handleAt, handlesFor, type Handle } from './handles';
 import { screenToWorld } from './camera';
 import type { Pt } from '@/lib/scene/geometry/vec';
 
@@ -101,7 +101,12 @@ export class Editor {
   }
 
   objectAt(p: Pt): SceneObject | null {
-    return objectAt(this.state.document.objects, p, this.geometry(), 4 / this.state.camera.pxPerM);
+    const objects = this.state.document.objects;
+    const hit = objectAt(objects, p, this.geometry(), 4 / this.state.camera.pxPerM);
+    if (hit) return hit;
+    // A small obstacle is drawn at a minimum size (obstacle-shape.tsx) and is pressed where it is drawn.
+    const r = MIN_DRAWN_PX / 2 / this.state.camera.pxPerM;
+    return [...objects].reverse().find((o) => o.kind === 'obstacle' && o.shape.kind !== 'line' && Math.hypot(o.x - p.x, o.y - p.y) <= r) ?? null;
   }
 
   handles(): Handle[] {

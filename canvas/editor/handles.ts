@@ -15,6 +15,8 @@ export type Handle =
 /** Handle radius on screen, px: large enough for a gloved finger (44 px target). */
 export const HANDLE_RADIUS_PX = 12;
 export const HANDLE_HIT_PX = 22;
+/** Smallest size an obstacle is drawn at on screen, px: a pole must not shrink to a dot you cannot find or press. */
+export const MIN_DRAWN_PX = 18;
 
 export function rotateHandlePoint(o: SceneObject, ctx: GeometryContext): Pt | null {
   if (o.kind === 'tape') return null;

@@ -20,4 +20,6 @@ export interface PlanDrawing {
   ratio: number;
   items: DrawItem[];
   legend: LegendEntry[];
+  /** What each pad code on the drawing stands for ("Pads: FL left front · FJ front jack"). */
+  padKey?: string;
 }

@@ -9,6 +9,8 @@ import { trailerFootprints } from '@/lib/scene/geometry/trailer';
 import { boundsOf, type Polygon, type Pt } from '@/lib/scene/geometry/vec';
 import { PAL } from '../view/palette';
 import { dualLength } from '@/lib/format/dual';
+import { tippingLineShort } from '@/lib/format/checks';
+import { padName } from '@/lib/lift/names';
 import type { UnitSystem } from '@/lib/units';
 import { chooseScale, clipPolygon, clipPolyline, toPaper } from './paper';
 import { placeLabels, type LabelRequest } from './labels';
@@ -91,7 +93,7 @@ export function planDrawing(input: PlanDrawingInput): PlanDrawing | null {
   labels.push({ site: geo.pick, text: `Pick (slew ${from.toFixed(0)}°)`, size: 7, colour: PAL.ink, bold: true });
   labels.push({ site: geo.set, text: `Set (slew ${to.toFixed(0)}°)`, size: 7, colour: PAL.amberDark, bold: true });
   if (geo.worst) labels.push({ site: geo.worst.to, text: `Worst case: ${worst.percentOfTipping.toFixed(1)} % at slew ${worst.slew.toFixed(0)}°`, size: 7, colour: GOVERNING, bold: true });
-  if (govLine) labels.push({ site: mid(govLine.a, govLine.b), text: `Governing tipping line ${govLine.id}`, size: 6.5, colour: GOVERNING, bold: true });
+  if (govLine) labels.push({ site: mid(govLine.a, govLine.b), text: `Governing tipping line: ${tippingLineShort({ side: govLine.side, code: govLine.id })}`, size: 6.5, colour: GOVERNING, bold: true });
   for (const z of geo.powerZones) {
     const req = z.required === null ? 'required distance set by the utility' : `keep ${dualLength(z.required, units)} away`;
     labels.push({ site: z.at, text: `${z.name}: ${req}`, size: 6.5, colour: PAL.over, bold: true });
@@ -130,7 +132,9 @@ export function planDrawing(input: PlanDrawingInput): PlanDrawing | null {
   const blocked = [...keep, { x: 8, y: height - 40, w: width / 4 + 60, h: 36 }, { x: width - 40, y: 6, w: 36, h: 44 }, { x: 4, y: 2, w: 150, h: 16 }];
   items.push(...placeLabels(labels.map((l) => ({ ...l, at: paper(l.site) })), width, height, blocked));
   items.push(...furniture);
-  return { width, height, scaleLabel: scale.label, ratio: scale.ratio, items, legend: LEGEND };
+  // The pads are labelled by their short codes on the drawing; the key says what each code is.
+  const padKey = `Pads: ${model.legs.map((l) => `${l.id} ${padName(l.id, l.mount.x, l.mount.y)}`).join(' · ')}`;
+  return { width, height, scaleLabel: scale.label, ratio: scale.ratio, items, legend: LEGEND, padKey };
 }
 
 const LEGEND: LegendEntry[] = [

@@ -4,14 +4,14 @@ import { useState } from 'react';
 import { useEditorContext, useEditorState } from '../editor-context';
 import { drawingAnalysis } from './revision-analysis';
 import { planDrawing } from './plan-drawing';
-import { planSvg } from './plan-svg';
+import { planSvg, svgHeight } from './plan-svg';
 
 /** Letter landscape less margins, points: the drawing exports at the same stated scale rules as the PDF. */
 const EXPORT_BOX = { width: 720, height: 540 };
 /** PNG pixels per point (about 200 dpi): sharp enough to print the drawing at its scale. */
 const PNG_SCALE = 2.8;
 
-const linkClass = 'flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk';
+const linkClass = 'flex min-h-11 items-center whitespace-nowrap rounded-md px-1.5 text-sm font-medium text-teal hover:bg-paper-sunk';
 
 function save(blob: Blob, name: string) {
   const url = URL.createObjectURL(blob);
@@ -73,16 +73,16 @@ export function PlanExportMenu({ sceneId, title }: { sceneId: number; title: str
     const d = drawing();
     if (!d) return setProblem('Place the truck and the load first.');
     try {
-      save(await svgToPng(planSvg(d, title), d.width, d.height), `${base}.png`);
+      save(await svgToPng(planSvg(d, title), d.width, svgHeight(d)), `${base}.png`);
     } catch (e) {
       setProblem((e as Error).message);
     }
   };
 
   return (
-    <div className="flex items-center gap-1" role="group" aria-label="Plan document">
-      <a href={`/api/scenes/${sceneId}/plan.pdf`} download className={linkClass} data-testid="editor-download-plan" title="The lift plan document of the saved plan (the approved revision if there is one, else the latest save)">
-        Download plan (PDF)
+    <div className="flex shrink-0 items-center" role="group" aria-label="Plan document">
+      <a href={`/api/scenes/${sceneId}/plan.pdf`} download className={linkClass} data-testid="editor-download-plan" aria-label="Download plan (PDF)" title="The lift plan document of the saved plan (the approved revision if there is one, else the latest save)">
+        Plan PDF
       </a>
       <Link href={`/scenes/${sceneId}/plan`} className={`${linkClass} hidden md:flex`} title="The job, people, weather, hazards and checklist the plan document carries">
         Plan details

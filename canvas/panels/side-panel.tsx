@@ -2,11 +2,17 @@
 import { useState } from 'react';
 import { Inspector } from './inspector/inspector';
 import { ResultsPanel } from './results/results-panel';
+import { CautionLine } from './caution-line';
+import { DRAWER_SNAPS, DrawerGrip } from './drawer-grip';
+import { useEditorState } from '../editor-context';
 
 /** Exact values and results beside the plan; on narrow screens it slides over the plan when asked for. */
 export function SidePanel() {
   const [tab, setTab] = useState<'inspector' | 'results'>('inspector');
   const [open, setOpen] = useState(false);
+  // Over the plan (below lg): a third of the editor's width until the grip moves it.
+  const [width, setWidth] = useState<number | string>(DRAWER_SNAPS[0]);
+  const selected = useEditorState((s) => s.selection.join(','));
   const tabs = (
     <div role="tablist" className="flex shrink-0 border-b border-paper-line">
       {(['inspector', 'results'] as const).map((t) => (
@@ -39,10 +45,17 @@ export function SidePanel() {
       </button>
       <aside
         aria-label="Details and results"
-        className={`${open ? 'flex' : 'hidden'} absolute inset-y-0 right-0 z-30 w-[min(380px,92vw)] flex-col border-l border-paper-line bg-paper-raised shadow-xl lg:static lg:flex lg:w-[360px] lg:shadow-none xl:w-[400px]`}
+        data-testid="side-panel"
+        style={{ '--drawer-w': typeof width === 'number' ? `${width * 100}%` : width } as React.CSSProperties}
+        className={`${open ? 'flex' : 'hidden'} absolute inset-y-0 right-0 z-30 w-[max(300px,var(--drawer-w))] max-w-[calc(100%-48px)] flex-col border-l border-paper-line bg-paper-raised shadow-xl lg:static lg:flex lg:w-[360px] lg:max-w-none lg:shadow-none xl:w-[400px]`}
       >
+        <DrawerGrip share={width} onResize={setWidth} />
         {tabs}
-        <div className="min-h-0 flex-1 overflow-y-auto p-3">{tab === 'inspector' ? <Inspector /> : <ResultsPanel />}</div>
+        {/* Keyed on the selection so the details of a newly selected object open at the top. */}
+        <div key={tab === 'inspector' ? `i:${selected}` : 'results'} className="min-h-0 flex-1 overflow-y-auto p-3">
+          {tab === 'inspector' ? <Inspector /> : <ResultsPanel />}
+        </div>
+        {tab === 'inspector' && <CautionLine className="shrink-0 border-t border-paper-line bg-signal-light px-3 py-1.5" testId="details-caution" />}
       </aside>
     </>
   );

@@ -17,11 +17,11 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
   const zoom = useEditorState((s) => zoomPercent(s.camera));
   const readOnly = useEditorState((s) => s.readOnly);
   return (
-    <header className="flex min-h-14 shrink-0 flex-wrap items-center gap-x-2 gap-y-1 border-b border-paper-line bg-paper-raised px-2 py-1">
+    <header className="flex min-h-14 shrink-0 flex-wrap items-center gap-x-1 gap-y-1 lg:flex-nowrap border-b border-paper-line bg-paper-raised px-2 py-1">
       <Link href="/scenes" className="flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk">
         ← Scenes
       </Link>
-      <div className="min-w-[7rem] flex-1 lg:min-w-[14rem]">
+      <div className="min-w-[7rem] flex-1 lg:min-w-[9rem]">
         <h1 className="truncate text-base font-semibold leading-tight" data-testid="scene-title">
           {scene.title}
         </h1>

@@ -18,11 +18,12 @@ interface Props<Doc> {
 }
 
 const buttonClass =
-  'inline-flex min-h-11 items-center gap-2 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm font-semibold text-ink hover:bg-paper-sunk disabled:opacity-60';
+  'inline-flex min-h-11 items-center gap-1.5 rounded-lg border border-paper-line bg-paper-raised px-2.5 text-sm font-semibold text-ink hover:bg-paper-sunk disabled:opacity-60';
 
 /** Export the open scene as an Arcline scene file, or import one as a new scene. */
 export function SceneFileActions<Doc>({ title, getDocument, parseDocument, canImport, compact, onImported }: Props<Doc>) {
-  const word = compact ? 'hidden xl:inline' : '';
+  // Words beside the icons from tablet width up; a phone's toolbar keeps the icons (with their labels for assistive tech).
+  const word = compact ? 'hidden sm:inline' : '';
   const input = useRef<HTMLInputElement>(null);
   const [issues, setIssues] = useState<FieldIssue[] | null>(null);
   const [fileName, setFileName] = useState('');

@@ -15,7 +15,7 @@ export function SceneLayer() {
     <>
       {objects.map((o) => (o.kind === 'obstacle' && o.obstacleKind === 'traffic-lane' ? <ObstacleShape key={o.id} obstacle={o} /> : null))}
       {objects.map((o) => (o.kind === 'trailer' ? <TrailerShape key={o.id} trailer={o} /> : null))}
-      {objects.map((o) => (o.kind === 'obstacle' && o.obstacleKind !== 'traffic-lane' ? <ObstacleShape key={o.id} obstacle={o} /> : null))}
+      {objects.map((o) => (o.kind === 'obstacle' && o.obstacleKind !== 'traffic-lane' ? <ObstacleShape key={o.id} obstacle={o} pxPerM={pxPerM} /> : null))}
       {objects.map((o) => (o.kind === 'load' ? <LoadRestShape key={o.id} load={o} /> : null))}
       {objects.map((o) => (o.kind === 'truck' && model ? <TruckShape key={o.id} truck={o} model={model} /> : null))}
       {objects.map((o) => (o.kind === 'tape' ? <TapeShape key={o.id} tape={o} pxPerM={pxPerM} /> : null))}

@@ -12,6 +12,9 @@ export const KIND_LABEL: Record<RiggingKind, string> = {
   'recovery-strap': 'Recovery strap',
 };
 
+/** A kind as people say it; a kind this build does not know is shown as it was stored. */
+export const kindLabel = (kind: string) => KIND_LABEL[kind as RiggingKind] ?? kind;
+
 export const STATUS_LABEL: Record<RiggingStatus, string> = { in_service: 'In service', tagged_out: 'Tagged out', retired: 'Retired' };
 
 export type DueState = 'overdue' | 'due-soon' | 'ok' | 'none';

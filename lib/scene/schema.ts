@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { sceneObjectSchema } from './objects';
 import { angle } from './primitives';
+import { psfToKpa } from '@/lib/units';
 
 /** The document version this code writes. Older versions are brought up by ./migrations. */
 export const CURRENT_VERSION = 2;
@@ -47,7 +48,8 @@ export const sceneDocumentSchema = z.object({
   version: z.literal(CURRENT_VERSION),
   objects: z.array(sceneObjectSchema).max(2000),
   swing: swingSchema.default({ from: 0, to: 90, direction: 'ccw' }),
-  soil: soilSchema.default({ preset: 'custom', allowable: 144 }),
+  // 3,000 psf (143.6 kPa): a round figure in either unit system (reads 144 kPa).
+  soil: soilSchema.default({ preset: 'custom', allowable: psfToKpa(3000) }),
   limits: limitsSchema.prefault({}),
   background: backgroundSchema.nullable().default(null),
   /** The units the author was using; each viewer still sees their own setting. */

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { HARROW_SCENES, screens, signIn } from './helpers';
+import { formatDate } from '@/lib/format/date';
 
 interface Item {
   id: number;
@@ -46,7 +47,9 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
   expect(taggedOut.status).toBe('tagged_out');
 
   await openCoilCopy(page, 'Rigging check: coil on an overdue sling and a tagged-out chain', [pickOf(overdue), pickOf(taggedOut)]);
-  await expect(page.getByTestId('rigging-row-HR-RS-05')).toContainText(`Inspection overdue since ${overdue.nextInspectionDue}`);
+  // Dates in the reader's locale, the app's one date format.
+  const due = formatDate(overdue.nextInspectionDue!, await page.evaluate(() => navigator.language));
+  await expect(page.getByTestId('rigging-row-HR-RS-05')).toContainText(`Inspection overdue since ${due}`);
   await expect(page.getByTestId('rigging-row-HR-CH-02')).toContainText('Tagged out: remove it from the plan');
   await expect(page.getByTestId('rigging-row-HR-RS-05')).not.toContainText('Tagged out');
 
@@ -54,13 +57,13 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
   const select = page.getByTestId('rigging-add-select');
   const options = await select.locator('option').allTextContents();
   expect(options.some((o) => o.startsWith('HR-CH-02'))).toBe(false);
-  expect(options).toContain(`HR-RS-05 · round-sling blue · inspection overdue since ${overdue.nextInspectionDue}`);
+  expect(options).toContain(`HR-RS-05 · Round sling blue · inspection overdue since ${due}`);
   expect(options.length - 1).toBe(inventory.items.filter((i) => i.status === 'in_service').length);
 
   // An overdue item goes in, with the warning in view.
   await select.selectOption({ label: options.find((o) => o.startsWith('HR-RS-05'))! });
   await page.getByRole('button', { name: 'Add', exact: true }).click();
-  await expect(page.getByTestId('rigging-add-notice')).toHaveText(`HR-RS-05 added, but its inspection has been overdue since ${overdue.nextInspectionDue}: have it inspected before the lift.`);
+  await expect(page.getByTestId('rigging-add-notice')).toHaveText(`HR-RS-05 added, but its inspection has been overdue since ${due}: have it inspected before the lift.`);
   await expect(page.locator('[data-testid="rigging-row-HR-RS-05"]')).toHaveCount(2);
   await screens(page, 'editor-load-rigging', ['laptop', 'tablet-portrait']);
 

@@ -1,3 +1,4 @@
+import { formatDate } from '@/lib/format/date';
 import { describe, expect, it } from 'vitest';
 import { addVerdict, firstRating, isOverdue, pickNotices, type InventoryStatus } from '@/canvas/panels/inspector/rigging-status';
 
@@ -18,13 +19,13 @@ describe('pickNotices (rows already in the plan)', () => {
     expect(pickNotices({ itemId: 4 }, item(), TODAY)).toEqual([]);
   });
   it('names the date an overdue inspection fell due', () => {
-    expect(pickNotices({ itemId: 4 }, item({ nextInspectionDue: '2026-11-12' }), TODAY)).toEqual([{ tone: 'warn', text: 'Inspection overdue since 2026-11-12' }]);
+    expect(pickNotices({ itemId: 4 }, item({ nextInspectionDue: '2026-11-12' }), TODAY)).toEqual([{ tone: 'warn', text: `Inspection overdue since ${formatDate('2026-11-12')}` }]);
   });
   it('tells the planner to remove an item tagged out or retired since it was picked', () => {
     expect(pickNotices({ itemId: 4 }, item({ status: 'tagged_out' }), TODAY)).toEqual([{ tone: 'stop', text: 'Tagged out: remove it from the plan' }]);
     expect(pickNotices({ itemId: 4 }, item({ status: 'retired', nextInspectionDue: '2026-01-05' }), TODAY)).toEqual([
       { tone: 'stop', text: 'Retired: remove it from the plan' },
-      { tone: 'warn', text: 'Inspection overdue since 2026-01-05' },
+      { tone: 'warn', text: `Inspection overdue since ${formatDate('2026-01-05')}` },
     ]);
   });
   it('flags an item that is no longer in the inventory, and leaves hand-entered rigging alone', () => {
@@ -40,7 +41,7 @@ describe('addVerdict (adding from the inventory)', () => {
   it('adds an overdue item but says so', () => {
     expect(addVerdict(item({ nextInspectionDue: '2026-11-12' }), TODAY)).toEqual({
       ok: true,
-      warning: 'HR-RS-09 added, but its inspection has been overdue since 2026-11-12: have it inspected before the lift.',
+      warning: `HR-RS-09 added, but its inspection has been overdue since ${formatDate('2026-11-12')}: have it inspected before the lift.`,
     });
   });
   it('refuses a tagged-out or retired item with the reason', () => {

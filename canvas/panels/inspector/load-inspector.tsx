@@ -2,7 +2,8 @@
 import type { LoadObject, LoadShape } from '@/lib/scene/objects';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
-import { LengthField, MassField, NumberField, SelectField } from '../fields';
+import { LengthField, MassField, NumberField, SelectField, SpecField } from '../fields';
+import { densitySpec, estimateWords } from './load-estimate';
 import { Section } from './section';
 import { loadMass } from '@/lib/scene/geometry/load';
 import { formatMass } from '@/lib/format/quantity';
@@ -16,6 +17,7 @@ export function LoadInspector({ load }: { load: LoadObject }) {
   const up = (patch: Partial<LoadObject>) => store.getState().run(updateObject(load.id, patch));
   const shape = (patch: Partial<LoadShape>) => up({ shape: { ...load.shape, ...patch } as LoadShape });
   const s = load.shape;
+  const metric = units === 'metric';
   return (
     <>
       <Section title="Shape">
@@ -51,15 +53,28 @@ export function LoadInspector({ load }: { load: LoadObject }) {
         )}
       </Section>
       <Section title="Weight">
+        {load.massMode === 'estimate' && (
+          <div className="col-span-2 rounded-md border border-signal-dark bg-signal-light p-2 text-sm" role="status" data-testid="weight-estimated">
+            <p>
+              <strong>Estimated from its size, not weighed:</strong> {estimateWords(load, units)}.
+            </p>
+            {!ro && (
+              <button type="button" className="mt-1 min-h-11 rounded-md border border-teal bg-paper-raised px-3 text-sm font-semibold text-teal" onClick={() => up({ massMode: 'given', massKg: Math.round(loadMass(load)) })}>
+                Enter the known weight instead
+              </button>
+            )}
+          </div>
+        )}
         <SelectField label="Weight from" value={load.massMode} disabled={ro} options={[{ value: 'given', label: 'Known weight' }, { value: 'estimate', label: 'Estimate from size' }]} onCommit={(massMode) => up({ massMode, ...(massMode === 'given' ? { massKg: Math.round(loadMass(load)) } : {}) })} />
         {load.massMode === 'given' ? (
           <MassField label="Weight" value={load.massKg} units={units} max={500_000} disabled={ro} onCommit={(massKg) => up({ massKg })} testId="field-load-mass" />
         ) : (
-          <NumberField label="Density (kg/m³)" value={load.density} min={1} digits={0} disabled={ro} onCommit={(density) => up({ density })} />
+          <SpecField label={`Density (${metric ? 'kg/m³' : 'lb/ft³'})`} value={load.density} spec={densitySpec(units)} disabled={ro} onCommit={(density) => up({ density })} testId="field-density" />
         )}
         <NumberField label="Uncertainty (±%)" value={load.weightUncertainty} suffix="%" min={0} max={100} disabled={ro} onCommit={(weightUncertainty) => up({ weightUncertainty })} />
         <div className="col-span-2 text-sm" data-testid="load-weight">
           Planned weight <strong>{formatMass(loadMass(load), units)}</strong>
+          {load.massMode === 'estimate' && ' (estimated)'}
           {load.weightUncertainty > 0 && <> · upper {formatMass(loadMass(load) * (1 + load.weightUncertainty / 100), units)}</>}
         </div>
       </Section>

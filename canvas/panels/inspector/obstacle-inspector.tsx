@@ -5,6 +5,7 @@ import { useEditorContext, useEditorState } from '../../editor-context';
 import { updateObject } from '../../commands/objects';
 import { LengthField, NumberField, SelectField } from '../fields';
 import { Section } from './section';
+import { touchHint, useTouch } from '../use-touch';
 
 const KIND_LABEL: Record<(typeof OBSTACLE_KINDS)[number], string> = {
   structure: 'Structure',
@@ -23,6 +24,7 @@ export function ObstacleInspector({ o }: { o: ObstacleObject }) {
   const up = (patch: Partial<ObstacleObject>) => store.getState().run(updateObject(o.id, patch as never));
   const s = o.shape;
   const wire = o.obstacleKind === 'power-line';
+  const touch = useTouch();
   return (
     <Section title={wire ? 'Power line' : 'Obstacle'}>
       <SelectField
@@ -52,7 +54,7 @@ export function ObstacleInspector({ o }: { o: ObstacleObject }) {
       )}
       {s.kind === 'circle' && <LengthField label="Diameter" value={s.diameter} units={units} min={0.05} max={100} disabled={ro} onCommit={(diameter) => up({ shape: { ...s, diameter } })} />}
       {s.kind === 'line' && <LengthField label="Span shown" value={s.length} units={units} min={1} max={1000} disabled={ro} onCommit={(length) => up({ shape: { ...s, length } })} />}
-      {s.kind === 'polygon' && <p className="col-span-2 text-xs text-ink-muted">{s.points.length} corners. Redraw with the outline tool (P) to change the shape.</p>}
+      {s.kind === 'polygon' && <p className="col-span-2 text-xs text-ink-muted">{s.points.length} corners. {touchHint('Redraw with the outline tool (P) to change the shape.', touch)}</p>}
     </Section>
   );
 }

@@ -1,4 +1,5 @@
 'use client';
+import { kindLabel } from '@/components/rigging/labels';
 import type { RiggingPick } from '@/lib/scene/objects';
 import type { UnitSystem } from '@/lib/units';
 import { formatMass } from '@/lib/format/quantity';
@@ -40,7 +41,7 @@ export function RiggingPickRow(props: { pick: RiggingPick; notices: RiggingNotic
     <li className="rounded-md border border-paper-line p-2 text-sm" data-testid={`rigging-row-${r.tag}`}>
       <div className="flex items-center justify-between gap-2">
         <span className="min-w-0 font-semibold">
-          {r.tag} · {r.kind}
+          {r.tag} · {kindLabel(r.kind)}
           {r.size ? <span className="font-normal text-ink-soft"> · {r.size}</span> : null}
         </span>
         {!ro && (

@@ -1,4 +1,6 @@
 'use client';
+import { formatDate } from '@/lib/format/date';
+import { kindLabel } from '@/components/rigging/labels';
 import { useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LoadObject, RiggingPick } from '@/lib/scene/objects';
@@ -103,7 +105,7 @@ export function RiggingPicker({ load }: { load: LoadObject }) {
                   { value: '', label: offered.length ? 'Choose an item…' : 'No in-service items' },
                   ...offered.map((it) => ({
                     value: String(it.id),
-                    label: `${it.tag} · ${it.kind}${it.size ? ` ${it.size}` : ''}${it.notForLifting ? ' · not lifting rigging' : isOverdue(it, today) ? ` · inspection overdue since ${it.nextInspectionDue}` : ''}`,
+                    label: `${it.tag} · ${kindLabel(it.kind)}${it.size ? ` ${it.size}` : ''}${it.notForLifting ? ' · not lifting rigging' : isOverdue(it, today) ? ` · inspection overdue since ${formatDate(it.nextInspectionDue!)}` : ''}`,
                   })),
                 ]}
               />

@@ -1,3 +1,5 @@
+import { formatDate } from '@/lib/format/date';
+
 /**
  * What the rigging picker says about an inventory item: on rows already in the plan, and when adding one.
  * Pure, so the wording and the rules are unit-tested. Dates are the inventory's YYYY-MM-DD strings, and
@@ -31,7 +33,7 @@ export function pickNotices(pick: { itemId: number | null }, item: InventoryStat
   const label = OUT_OF_SERVICE[item.status];
   if (label) out.push({ tone: 'stop', text: `${label}: remove it from the plan` });
   if (item.notForLifting) out.push({ tone: 'stop', text: `Not lifting rigging: ${item.notForLifting} Remove it from the plan.` });
-  if (isOverdue(item, today)) out.push({ tone: 'warn', text: `Inspection overdue since ${item.nextInspectionDue}` });
+  if (isOverdue(item, today)) out.push({ tone: 'warn', text: `Inspection overdue since ${formatDate(item.nextInspectionDue!)}` });
   return out;
 }
 
@@ -48,6 +50,6 @@ export function addVerdict(item: InventoryStatus, today: string): AddVerdict {
   if (item.notForLifting) return { ok: false, reason: `${item.tag} is not lifting rigging and cannot be added to a lift plan: ${item.notForLifting}` };
   const rating = firstRating(item);
   if (!(rating !== null && rating > 0)) return { ok: false, reason: `${item.tag} has no working load limit in the inventory; add its rating there first.` };
-  if (isOverdue(item, today)) return { ok: true, warning: `${item.tag} added, but its inspection has been overdue since ${item.nextInspectionDue}: have it inspected before the lift.` };
+  if (isOverdue(item, today)) return { ok: true, warning: `${item.tag} added, but its inspection has been overdue since ${formatDate(item.nextInspectionDue!)}: have it inspected before the lift.` };
   return { ok: true, warning: null };
 }

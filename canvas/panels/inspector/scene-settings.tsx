@@ -10,6 +10,10 @@ import { arcOf } from '@/lib/lift/swing';
 import { BackgroundPanel } from '../../background/background-panel';
 import { screenToWorld } from '../../editor/camera';
 import { formatPressure } from '@/lib/format/quantity';
+import { wrap180 } from '@/lib/angles';
+import { slewToward } from '../../commands/aim';
+import type { SceneDocument } from '@/lib/scene/schema';
+import type { SceneObject, TruckObject } from '@/lib/scene/objects';
 
 /** What the engine will analyse for these fields (lib/lift/swing.ts), so 0° → 360° is never read as one slew. */
 export function arcWords(swing: { from: number; to: number; direction: 'ccw' | 'cw' }): string {
@@ -17,6 +21,20 @@ export function arcWords(swing: { from: number; to: number; direction: 'ccw' | '
   if (a.fullTurn) return 'Checked over a full turn: every slew.';
   if (a.span === 0) return 'Pick and set are the same slew: checked at that one slew only.';
   return `Checked over ${Math.round(a.span * 10) / 10}° ${a.sign === 1 ? 'counter-clockwise' : 'clockwise'}.`;
+}
+
+/**
+ * Pick and set as the editor fills them in: when the load (or the receiving trailer) is placed, the swing's
+ * end is aimed at it. Said beside the fields while the figure still points there.
+ */
+export function autoFilledSwing(doc: SceneDocument): string[] {
+  const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck');
+  if (!truck) return [];
+  const aims = (o: SceneObject | undefined, slew: number) => !!o && Math.abs(wrap180(slewToward(truck, o) - slew)) < 0.05;
+  const out: string[] = [];
+  if (aims(doc.objects.find((o) => o.kind === 'load'), doc.swing.from)) out.push('Pick was filled in to point at the load.');
+  if (aims(doc.objects.find((o) => o.kind === 'trailer'), doc.swing.to)) out.push('Set was filled in to point at the receiving trailer.');
+  return out;
 }
 
 /** The swing plan, the ground and the plan's limits (nothing selected). */
@@ -28,6 +46,7 @@ export function SceneSettings() {
   const run = store.getState().run;
   const sceneId = useEditorState((s) => s.sceneId);
   const fields = sceneFields(units);
+  const auto = autoFilledSwing(doc);
   return (
     <div data-testid="scene-settings">
       <p className="mb-3 text-sm text-ink-muted">Nothing selected. Press an object on the plan to see its exact values; these settings belong to the whole scene.</p>
@@ -35,6 +54,11 @@ export function SceneSettings() {
         {fields.slice(0, 2).map((f) => (
           <Bound key={f.key} field={f} disabled={ro} />
         ))}
+        {auto.length > 0 && (
+          <p className="col-span-2 rounded bg-paper-sunk px-2 py-1 text-xs text-ink-soft" data-testid="swing-auto">
+            {auto.join(' ')} Type a figure to change it.
+          </p>
+        )}
         <div className="col-span-2">
           <SelectField
             label="Direction"

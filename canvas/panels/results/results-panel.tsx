@@ -1,6 +1,8 @@
 'use client';
 import { useEditorState } from '../../editor-context';
 import { CautionNote } from '@/components/caution-note';
+import { CautionLine } from '../caution-line';
+import { touchHint, useTouch } from '../use-touch';
 import { TippingChart } from './tipping-chart';
 import { ChecksList } from './checks-list';
 import { PadTable } from './pad-table';
@@ -20,9 +22,10 @@ export function ResultsPanel() {
   const doc = useEditorState((s) => s.document);
   const units = useEditorState((s) => s.units);
   const gesture = useEditorState((s) => s.gestureBase !== null);
+  const touch = useTouch();
   const body = (() => {
     if (!a) return <p className="text-sm text-ink-muted">Working…</p>;
-    if (!a.lift.ok) return <p className="rounded-md border border-paper-line bg-paper p-3 text-sm" data-testid="results-problem">{a.lift.problem.message}</p>;
+    if (!a.lift.ok) return <p className="rounded-md border border-paper-line bg-paper p-3 text-sm" data-testid="results-problem">{touchHint(a.lift.problem.message, touch)}</p>;
     if (a.error) {
       return (
         <p className="rounded-md border-2 border-over bg-over-light p-3 text-sm" data-testid="results-error">
@@ -38,6 +41,7 @@ export function ResultsPanel() {
       <>
         <div className={`mb-3 rounded-md border-2 p-3 ${over ? 'border-over bg-over-light' : 'border-within bg-within-light'}`} data-testid="results-summary">
           <p className="text-sm font-semibold" data-testid="results-headline">{checksHeadline(r.checks)}</p>
+          <CautionLine className="mt-1 border-t border-ink/20 pt-1" testId="results-caution" />
           <p className="mt-1 text-sm" data-testid="worst-case">
             Worst case: <strong data-testid="worst-percent">{formatPercent(r.worstCase.percentOfTipping)}</strong> of tipping about the <strong data-testid="worst-line">{lineWords(r, r.worstCase.line)}</strong> at slew{' '}
             <strong data-testid="worst-slew">{formatAngle(r.worstCase.slew)}</strong> (limit {formatPercent(limit, 0)}).

@@ -1,14 +1,15 @@
 'use client';
 import { memo } from 'react';
-import { Group, Line } from 'react-konva';
+import { Circle, Group, Line } from 'react-konva';
 import type { ObstacleObject } from '@/lib/scene/objects';
 import { PAL } from '../../view/palette';
+import { MIN_DRAWN_PX } from '../../editor/handles';
 import { obstacleFootprints, wireEnds } from '@/lib/scene/geometry/obstacle';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 
 /** Obstacles by kind; a power line is a wire (its approach zone is an overlay). */
-export const ObstacleShape = memo(function ObstacleShape({ obstacle }: { obstacle: ObstacleObject }) {
+export const ObstacleShape = memo(function ObstacleShape({ obstacle, pxPerM }: { obstacle: ObstacleObject; pxPerM?: number }) {
   const colour = PAL.obstacle[obstacle.obstacleKind] ?? PAL.muted;
   const ends = wireEnds(obstacle);
   if (ends) {
@@ -16,8 +17,15 @@ export const ObstacleShape = memo(function ObstacleShape({ obstacle }: { obstacl
   }
   const [poly] = obstacleFootprints(obstacle);
   const lane = obstacle.obstacleKind === 'traffic-lane';
+  const xs = poly.map((p) => p.x);
+  const ys = poly.map((p) => p.y);
+  const sizePx = pxPerM ? Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)) * pxPerM : Infinity;
   return (
     <Group listening={false}>
+      {/* Too small to see at this zoom: a ring at the minimum size marks where it stands (the outline inside stays true to size). */}
+      {sizePx < MIN_DRAWN_PX && pxPerM && (
+        <Circle x={obstacle.x} y={obstacle.y} radius={MIN_DRAWN_PX / 2 / pxPerM} fill={colour} opacity={0.35} stroke={PAL.ink} strokeWidth={1.5} dash={[3, 2]} strokeScaleEnabled={false} perfectDrawEnabled={false} />
+      )}
       <Line
         points={flat(poly)}
         closed

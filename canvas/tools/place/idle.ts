@@ -22,7 +22,7 @@ export const placeIdle: ToolState = {
     }
     const profile = s.profiles[0];
     const truck = profile ? { profileId: profile.id, profileVersion: profile.version, model: truckModelFromProfile(profile) } : null;
-    const obj = newObject(kind, newId(kind.split('-')[0]), at, truck);
+    const obj = newObject(kind, newId(kind.split('-')[0]), at, truck, ed.state.units);
     if (!obj) return ed.transition('select.idle');
     ed.run((doc) => {
       const added = addObjects([obj])(doc).document;

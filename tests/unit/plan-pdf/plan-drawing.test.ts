@@ -7,7 +7,8 @@ import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
 import { truckModelFromProfile } from '@/lib/scene/truck/from-spec';
 import { drawingAnalysis } from '@/canvas/export/revision-analysis';
 import { planDrawing } from '@/canvas/export/plan-drawing';
-import { planSvg } from '@/canvas/export/plan-svg';
+import { CAUTION_STRIP_PT, planSvg } from '@/canvas/export/plan-svg';
+import { CAUTION_LINES } from '@/lib/caution';
 import { chooseScale, clipPolygon, PT_PER_M_AT_1_TO_1 } from '@/canvas/export/paper';
 
 const coil = { document: sceneDocumentSchema.parse(DEMO_SCENES.find((s) => s.title.startsWith('Coil transfer'))!.document) };
@@ -44,7 +45,8 @@ describe('plan drawing export', { timeout: 60_000 }, () => {
     expect(texts).toContain(`Scale ${d.scaleLabel}`);
     expect(texts).toContain('N');
     expect(texts).toContain(`Worst case: ${result.worstCase.percentOfTipping.toFixed(1)} % at slew ${result.worstCase.slew.toFixed(0)}°`);
-    expect(texts).toContain(`Governing tipping line ${result.worstCase.line}`);
+    // By its side with the short code second (the pads' codes are explained in the key under the drawing).
+    expect(texts.some((t) => /^Governing tipping line: [a-z ]+ \(/.test(t) && t.endsWith(`(${result.worstCase.line})`))).toBe(true);
     for (const pad of ['FL', 'FR', 'RL', 'RR', 'FJ']) expect(texts).toContain(pad);
     expect(texts.some((t) => t.startsWith('Feeder 13.8 kV: keep 10′ 0″ (3.05 m) away'))).toBe(true);
     for (const i of d.items) {
@@ -58,10 +60,13 @@ describe('plan drawing export', { timeout: 60_000 }, () => {
     }
   });
 
-  it('writes a standalone SVG sized in points', () => {
+  it('writes a standalone SVG sized in points, the caution and the pad key in a strip under the drawing', () => {
     const { d } = drawing('metric');
     const svg = planSvg(d, 'Coil <transfer>');
-    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg" width="540pt" height="540pt"')).toBe(true);
+    expect(svg.startsWith(`<svg xmlns="http://www.w3.org/2000/svg" width="540pt" height="${540 + CAUTION_STRIP_PT}pt"`)).toBe(true);
+    for (const line of CAUTION_LINES) expect(svg).toContain(line);
+    expect(svg).toMatch(/Pads: FL left front · FR right front/);
+    expect(svg).not.toMatch(/Governing tipping line [A-Z]+-[A-Z]+</);
     expect(svg).toContain('<title>Coil &lt;transfer&gt;: plan drawing, scale 1:');
     expect((svg.match(/<polygon /g) ?? []).length).toBeGreaterThan(20);
     expect(svg).toContain('(1 cm = ');
