@@ -46,7 +46,10 @@ export interface RevisionSummary {
   revision: number;
   savedAt: string;
   author: string;
-  /** The scene's status for its latest revision; "superseded" for every earlier one. */
+  /**
+   * The scene's status for its latest revision. For an earlier one, the latest review decision on that
+   * revision ("approved", "returned", "withdrawn", or "submitted" while pending), else "superseded".
+   */
   status: string;
   /** Headline figures, or null when the engine had nothing to compute (see `problem`). */
   figures: HeadlineFigures | null;

@@ -3,6 +3,7 @@ vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
 import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
 import * as analysis from '@/app/api/scenes/[id]/analysis/route';
+import * as newRevision from '@/app/api/scenes/[id]/new-revision/route';
 import { getDb } from '@/db';
 import { updateScene } from '@/db/repositories/scenes';
 import { signInAs } from '@/tests/setup/auth-mock';
@@ -57,6 +58,20 @@ describe('GET /api/scenes/{id}/revisions', () => {
   it('another organisation gets 404', async () => {
     signInAs(await demoUser('operator@cobalt.example'));
     expect((await list(coil)).status).toBe(404);
+  });
+  it('an earlier revision carries the review decision on it: the approved revision stays "approved" after a new revision', async () => {
+    const reefer = await sceneIdByTitle('Overturned reefer trailer, Mill Creek on-ramp');
+    signInAs(await demoUser('operator@harrow.example'));
+    const before = (await (await list(reefer)).json()) as Summary[];
+    const approved = before[0]!;
+    expect(approved.status).toBe('approved');
+    const started = await newRevision.POST(new Request(`http://arcline.test/api/scenes/${reefer}/new-revision`, { method: 'POST' }), ctx({ id: String(reefer) }));
+    expect(started.status).toBe(200);
+    const after = (await (await list(reefer)).json()) as Summary[];
+    expect(after[0]).toMatchObject({ revision: approved.revision + 1, status: 'draft' });
+    expect(after.find((r) => r.revision === approved.revision)!.status).toBe('approved');
+    // Revisions no review ever saw are simply superseded.
+    expect(after.filter((r) => r.revision < approved.revision).every((r) => r.status === 'superseded')).toBe(true);
   });
 });
 
