@@ -12,7 +12,7 @@ import { sceneIdByTitle } from '@/tests/setup/fixtures';
 
 /** The revisions API: each revision's figures are the server's engine result for that revision. */
 let coil = 0;
-type Fig = { worstPercentOfTipping: number; worstSlew: number; governingLine: string; highestPadPressure: number; highestPadPressureSupport: string; leastClearance: number; leastClearanceTarget: string };
+type Fig = { worstPercentOfTipping: number; worstSlew: number; governingLine: string; highestPadPressure: number; highestPadPressureSupport: string; highestPadPressureSupportName: string; leastClearance: number; leastClearanceTarget: string; leastClearanceTargetName: string };
 type Summary = { revision: number; savedAt: string; author: string; status: string; figures: Fig | null };
 const ctx = (p: Record<string, string>) => ({ params: Promise.resolve(p) });
 const req = (path: string) => new Request(`http://arcline.test${path}`);
@@ -51,6 +51,11 @@ describe('GET /api/scenes/{id}/revisions', () => {
       expect(r.figures!.highestPadPressure).toBe(Math.max(...pressures));
       const gaps = (a.clearances as { overlapsInPlan: boolean; vertical: number; horizontal: number }[]).map((c) => (c.overlapsInPlan ? c.vertical : Math.max(c.horizontal, c.vertical)));
       expect(r.figures!.leastClearance).toBe(Math.min(...gaps));
+      // Named as on the plan, never by id.
+      const nearest = (a.clearances as { name: string }[])[gaps.indexOf(Math.min(...gaps))]!;
+      expect(r.figures!.leastClearanceTargetName).toBe(nearest.name);
+      expect(r.figures!.leastClearanceTargetName).not.toMatch(/^(obstacle|trailer|load)-[a-z0-9]+$/);
+      expect(r.figures!.highestPadPressureSupportName).toBe(({ FL: 'left front', FR: 'right front', RL: 'left rear', RR: 'right rear', FJ: 'front jack' } as Record<string, string>)[r.figures!.highestPadPressureSupport]);
     }
     // Pulling one outrigger in shrinks the support polygon: the worst case gets worse.
     expect(items[0].figures!.worstPercentOfTipping).toBeGreaterThan(items[1].figures!.worstPercentOfTipping);
