@@ -64,16 +64,21 @@ function rowMaxima(p: PreparedLift, nS: number, step: number, pick: number, cos:
   const vPick = at(pick);
   for (const dir of [1, -1] as const) {
     const out = dir === 1 ? ccw : cw;
-    // Nodes and peaks in order of their distance along the arc from the pick.
-    const along = (deg: number) => ((((dir * (deg - pick)) % 360) + 360) % 360);
-    const events: { t: number; v: number; node: number }[] = [];
-    for (let k = 0; k < nS; k++) events.push({ t: along(k * step), v: v[k], node: k });
-    for (const q of peaks) events.push({ t: along(q.deg), v: q.v, node: -1 });
-    events.sort((a, b) => a.t - b.t || b.node - a.node);
+    // Walk the nodes in order of their distance along the arc from the pick, taking in the refined peaks
+    // passed on the way (few: sorted once per direction).
+    const along = (deg: number) => (((dir * (deg - pick)) % 360) + 360) % 360;
+    const ps = peaks.map((q) => ({ t: along(q.deg), v: q.v })).sort((a, b) => a.t - b.t);
+    const first = dir === 1 ? Math.ceil(pick / step - 1e-12) : Math.floor(pick / step + 1e-12);
     let m = vPick;
-    for (const e of events) {
-      if (e.v > m) m = e.v;
-      if (e.node >= 0) out[o + e.node] = m;
+    let q = 0;
+    for (let i = 0; i < nS; i++) {
+      const k = (((first + dir * i) % nS) + nS) % nS;
+      const t0 = along(k * step);
+      // A node a hair behind the pick (rounding) is the pick's own node, not the far end of the turn.
+      const t = t0 > 360 - 1e-9 ? 0 : t0;
+      while (q < ps.length && ps[q].t <= t) m = Math.max(m, ps[q++].v);
+      if (v[k] > m) m = v[k];
+      out[o + k] = m;
     }
   }
 }
