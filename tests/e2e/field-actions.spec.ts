@@ -1,6 +1,9 @@
 import { expect, test } from '@playwright/test';
 import { PASSWORD, createSceneViaApi, listedTitles, signIn } from './helpers';
 
+// Several pages and two browser contexts per test, on a machine shared with other builds.
+test.describe.configure({ timeout: 150_000 });
+
 test('delete then restore: the scene leaves the list, an admin finds it under Recently deleted and restores it', async ({ page, browser }) => {
   await signIn(page, 'operator@harrow.example');
   const title = `Delete me: tow dolly at the depot ${Date.now()}`;
