@@ -91,8 +91,8 @@ test('on a tablet the details drawer opens at a third, resizes by its grip and s
   const page = await context.newPage();
   await signIn(page, 'operator@harrow.example');
   await openCoilCopy(page, 'Field check: drawer on a tablet');
-  await expect(page.getByRole('button', { name: 'Export' })).toContainText('Export');
-  await expect(page.getByRole('button', { name: 'Import' })).toContainText('Import');
+  await expect(page.getByRole('button', { name: 'Export', exact: true }).first()).toHaveText('Export');
+  await expect(page.getByRole('button', { name: 'Import', exact: true }).first()).toHaveText('Import');
   await page.getByTestId('open-panel').click();
   const panel = page.getByTestId('side-panel');
   const host = (await page.locator('[data-drawer-host]').boundingBox())!;

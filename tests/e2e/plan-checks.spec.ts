@@ -68,7 +68,7 @@ test('rigging picker: in-service items only, overdue inspections and tagged-out 
   await screens(page, 'editor-load-rigging', ['laptop', 'tablet-portrait']);
 
   // A recovery strap is not lifting rigging: it is offered with that said, and refused with the reason.
-  expect(options).toContain('HR-ST-01 · recovery-strap 100 mm × 9 m (example) · not lifting rigging');
+  expect(options).toContain('HR-ST-01 · Recovery strap 100 mm × 9 m (example) · not lifting rigging');
   await select.selectOption({ label: options.find((o) => o.startsWith('HR-ST-01'))! });
   await page.getByRole('button', { name: 'Add', exact: true }).click();
   await expect(page.getByTestId('rigging-add-notice')).toHaveText(/^HR-ST-01 is not lifting rigging and cannot be added to a lift plan: A recovery strap is made for pulling/);

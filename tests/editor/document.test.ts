@@ -32,7 +32,8 @@ describe('scene document', () => {
     const up = migrateDocument(v1) as Record<string, unknown>;
     expect(up.version).toBe(2);
     const parsed = parseSceneDocument(v1);
-    expect(parsed.ok && parsed.document).toEqual(emptySceneDocument());
+    // A version-1 document keeps the ground figure it was made with (144 kPa); new blank scenes start at 3,000 psf.
+    expect(parsed.ok && parsed.document).toEqual({ ...emptySceneDocument(), soil: { preset: 'custom', allowable: 144 } });
   });
 
   it('a version-1 document with objects keeps them through the migration', () => {
