@@ -57,11 +57,33 @@ async function computeAndStore(db: Kysely<Database>, organisationId: number, s: 
     beyond_count: f?.beyond ?? null,
     problem: a.ok ? null : a.message,
   };
-  await inTransaction(db, async (trx) => {
-    await trx.deleteFrom('scene_figures').where('scene_id', '=', s.id).execute();
-    await trx.insertInto('scene_figures').values({ scene_id: s.id, revision: s.revision, engine_version: ENGINE_VERSION, computed_at: new Date().toISOString(), ...row }).execute();
-  });
+  storeLater(db, s, row);
   return figuresFromRow(row);
+}
+
+const pending = new Set<Promise<void>>();
+
+/**
+ * Stores a computed row after the answer, never inside it: a listing is a read and must answer even while
+ * another process holds the write lock (tests/unit/security/contention.test.ts). A store that fails (busy,
+ * or a test's database already closed) is dropped; the next read computes the figures again.
+ */
+function storeLater(db: Kysely<Database>, s: { id: number; revision: number }, row: FigureRow) {
+  const write = new Promise<void>((resolve) => setTimeout(resolve, 0))
+    .then(() =>
+      inTransaction(db, async (trx) => {
+        await trx.deleteFrom('scene_figures').where('scene_id', '=', s.id).execute();
+        await trx.insertInto('scene_figures').values({ scene_id: s.id, revision: s.revision, engine_version: ENGINE_VERSION, computed_at: new Date().toISOString(), ...row }).execute();
+      }),
+    )
+    .catch(() => undefined)
+    .finally(() => pending.delete(write));
+  pending.add(write);
+}
+
+/** Resolves when every figure store scheduled so far has finished (tests, the backfill). */
+export async function figureWritesSettled(): Promise<void> {
+  while (pending.size) await Promise.all([...pending]);
 }
 
 /** Fills the figures of every live scene (the seed and the test fixtures call this, so a first list read writes nothing). */
@@ -70,5 +92,6 @@ export async function backfillSceneFigures(db: Kysely<Database>): Promise<number
   const byOrg = new Map<number, { id: number; revision: number }[]>();
   for (const s of scenes) byOrg.set(s.organisation_id, [...(byOrg.get(s.organisation_id) ?? []), s]);
   for (const [org, list] of byOrg) await figuresFor(db, org, list);
+  await figureWritesSettled();
   return scenes.length;
 }

@@ -7,6 +7,7 @@ import * as scenes from '@/app/api/scenes/route';
 import * as scene from '@/app/api/scenes/[id]/route';
 import { getDb } from '@/db';
 import { analyseSavedScene } from '@/lib/server/scene-analysis';
+import { figureWritesSettled } from '@/lib/server/scene-figures';
 import { planFigures } from '@/lib/scene/plan-figures';
 import { headlineFigures } from '@/lib/replay/headline-figures';
 import type { ListFigures } from '@/lib/scene/plan-figures';
@@ -14,7 +15,12 @@ import type { ListFigures } from '@/lib/scene/plan-figures';
 const COIL = 'Coil transfer, Route 9 weigh station';
 type Item = { id: number; title: string; revision: number; figures: ListFigures };
 
-const list = async () => (await call({ handler: scenes.GET, method: 'GET', query: 'pageSize=100' })).json.items as Item[];
+const list = async () => {
+  const items = (await call({ handler: scenes.GET, method: 'GET', query: 'pageSize=100' })).json.items as Item[];
+  // The list stores newly computed figures just after it answers.
+  await figureWritesSettled();
+  return items;
+};
 const rowsFor = (id: number) => getDb().selectFrom('scene_figures').selectAll().where('scene_id', '=', id).execute();
 
 beforeAll(async () => {
