@@ -86,10 +86,10 @@ export function lipschitzLowerBound(f: (t: number) => number, span: number, step
  * steepest piece bounds it. Pieces: every plane fit on a contact set of three or more supports, and the
  * limit state on each hull edge (the lever rule, slope 1/edge length). Cached per support layout.
  */
-const slopes = new WeakMap<Float64Array, Float64Array>();
+const slopes = new WeakMap<object, Float64Array>();
 
-export function reactionSlopes(xs: Float64Array, ys: Float64Array): Float64Array {
-  const hit = slopes.get(xs);
+export function reactionSlopes(xs: Float64Array, ys: Float64Array, key: object = xs): Float64Array {
+  const hit = slopes.get(key);
   if (hit && hit.length === xs.length) return hit;
   const n = xs.length;
   const L = new Float64Array(n);
@@ -121,6 +121,6 @@ export function reactionSlopes(xs: Float64Array, ys: Float64Array): Float64Array
       if (len > 0) L[i] = Math.max(L[i], 1 / len);
     }
   }
-  slopes.set(xs, L);
+  slopes.set(key, L);
   return L;
 }

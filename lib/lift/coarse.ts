@@ -1,6 +1,7 @@
 import { G } from '@/lib/units';
 import { boomGapAt, boomMeets } from './boom-clearance';
 import { gapAt } from './clearance';
+import { pointSegmentDist2 } from './geometry';
 import { lipschitzLowerBound, reactionSlopes, ROUNDING, tippingOnArc } from './coarse-bounds';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
@@ -46,32 +47,48 @@ export const COARSE_STEP = 3;
 
 const DEG = Math.PI / 180;
 
-/** Upper bound of each support's largest reaction (kg) over the arc. */
+/**
+ * Upper bound of each support's largest reaction (kg) over the arc: samples every `step`°, then each
+ * interval whose Lipschitz bound rises more than REFINE above the best sample is halved (up to DEPTH
+ * times), so the bound is tight where the reaction peaks and the search pays for few extra solves.
+ */
+const REFINE = 0.01;
+const DEPTH = 5;
+
 function reactionBounds(p: PreparedLift, step: number): Float64Array {
   const n = p.supportX.length;
   const W = p.fixedMass + p.rotMass + p.hookLoad;
   const rx = p.rotMx0 + p.hookLoad * p.hookX0, ry = p.rotMy0 + p.hookLoad * p.hookY0;
   // The CG turns on a circle of this radius about its fixed part, m per radian of slew.
   const rho = Math.hypot(rx, ry) / W;
-  const slope = reactionSlopes(p.supportX, p.supportY);
+  // Keyed by the supports list, so a search that moves one truck around computes it once per leg set.
+  const slope = reactionSlopes(p.supportX, p.supportY, p.input.supports);
   const state = createReactionState(n);
-  const out = new Float64Array(n).fill(-Infinity);
-  const prev = new Float64Array(n);
   const samples = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
-  let prevT = 0;
+  const ts = new Float64Array(samples + 1);
+  const ms: Float64Array[] = [];
   for (let k = 0; k <= samples; k++) {
-    const t = Math.min(k * step, p.span);
-    reactionsAt(p, slewAt(p, t), state);
-    const travel = rho * (t - prevT) * DEG;
-    for (let i = 0; i < n; i++) {
-      const m = state.mass[i];
-      const between = k > 0 ? (prev[i] + m + W * slope[i] * travel) / 2 : m;
-      out[i] = Math.max(out[i], m, between);
-      prev[i] = m;
-    }
-    prevT = t;
+    ts[k] = Math.min(k * step, p.span);
+    ms.push(Float64Array.from(reactionsAt(p, slewAt(p, ts[k]), state).mass));
   }
-  for (let i = 0; i < n; i++) out[i] = Math.max(0, out[i]) * (1 + ROUNDING) + ROUNDING * W;
+  const out = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    // Reaction change per degree of slew at most.
+    const K = W * slope[i] * rho * DEG;
+    let best = -Infinity;
+    for (const m of ms) best = Math.max(best, m[i]);
+    const upper = (t0: number, m0: number, t1: number, m1: number, depth: number): number => {
+      const bound = (m0 + m1 + K * (t1 - t0)) / 2;
+      if (depth === 0 || bound <= best + REFINE * Math.abs(best)) return Math.max(bound, m0, m1);
+      const tm = (t0 + t1) / 2;
+      const mm = reactionsAt(p, slewAt(p, tm), state).mass[i];
+      best = Math.max(best, mm);
+      return Math.max(upper(t0, m0, tm, mm, depth - 1), upper(tm, mm, t1, m1, depth - 1));
+    };
+    let b = best;
+    for (let k = 1; k <= samples; k++) b = Math.max(b, upper(ts[k - 1], ms[k - 1][i], ts[k], ms[k][i], DEPTH));
+    out[i] = Math.max(0, b) * (1 + ROUNDING) + ROUNDING * W;
+  }
   return out;
 }
 
@@ -102,15 +119,57 @@ function loadGapBound(p: PreparedLift, t: Target, step: number, limit: number): 
   const rough = Math.max(0, hookArcDistance(p, t.cx, t.cy) - t.r - p.footprint.reach);
   if (rough >= decisive(limit) || p.loadBottom - t.top >= decisive(limit)) return rough;
   const lipschitz = (p.radius + p.footprint.reach) * DEG;
-  return Math.max(0, lipschitzLowerBound((u) => gapAt(p, t, slewAt(p, u)), p.span, step, lipschitz));
+  // Any lower bound of the gap at a sample keeps the interval bound valid: the bounding circles where
+  // they are far enough apart, the outlines where they come near.
+  const far = decisive(limit) + lipschitz * step;
+  const hookAngle = Math.atan2(p.hookY0, p.hookX0);
+  const gap = (u: number) => {
+    const deg = slewAt(p, u);
+    const a = deg * DEG + hookAngle;
+    const circles = Math.hypot(p.radius * Math.cos(a) - t.cx, p.radius * Math.sin(a) - t.cy) - t.r - p.footprint.reach;
+    return circles >= far ? circles : gapAt(p, t, deg);
+  };
+  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
 }
 
 function boomGapBound(p: PreparedLift, t: Target, step: number, limit: number): number {
   const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0));
   const plan = Math.hypot(t.cx, t.cy) - t.r - reach;
-  const rough = Math.max(0, Math.max(plan, Math.min(p.pivotZ, p.tipZ) - t.top) - p.boomRadius);
+  const above = Math.min(p.pivotZ, p.tipZ) - t.top;
+  const rough = Math.max(0, Math.max(plan, above, risingBoomGap(p, t)) - p.boomRadius);
   if (rough >= decisive(limit)) return rough;
-  return Math.max(0, lipschitzLowerBound((u) => boomGapAt(p, t, slewAt(p, u)), p.span, step, reach * DEG));
+  const lipschitz = reach * DEG;
+  const far = decisive(limit) + lipschitz * step;
+  const gap = (u: number) => {
+    const deg = slewAt(p, u);
+    const c = Math.cos(deg * DEG), s = Math.sin(deg * DEG);
+    const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
+    const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
+    const circle = Math.max(Math.sqrt(pointSegmentDist2(t.cx, t.cy, px, py, qx, qy)) - t.r, above) - p.boomRadius;
+    return circle >= far ? circle : boomGapAt(p, t, deg);
+  };
+  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
+}
+
+/**
+ * A raised boom climbs as it runs out: a boom point s metres out (in plan) from the pivot stands at least
+ * pivotZ + s·tan(elevation) high and at most |pivot| + s from the axis, while the part lies at least
+ * dmin = |centre| − r from the axis. Its gap is at least the larger of the plan and the height shortfall,
+ * and the smallest of that over s is where the two meet (or at an end).
+ */
+function risingBoomGap(p: PreparedLift, t: Target): number {
+  const run = Math.hypot(p.hookX0 - p.pivotX0, p.hookY0 - p.pivotY0);
+  if (!(p.tipZ > p.pivotZ) || !(run > 0)) return -Infinity;
+  const slope = (p.tipZ - p.pivotZ) / run;
+  const start = Math.max(0, Math.hypot(t.cx, t.cy) - t.r) - Math.hypot(p.pivotX0, p.pivotY0);
+  const lb = (s: number) => Math.max(start - s, p.pivotZ + s * slope - t.top);
+  const meet = Math.min(run, Math.max(0, (start - p.pivotZ + t.top) / (1 + slope)));
+  return Math.min(lb(0), lb(run), lb(meet));
+}
+
+/** Closed-form lower bound on the distance to a wire: every part swung lies within `reach` of the axis in plan. */
+function wireRough(p: PreparedLift, l: PreparedLift['powerLines'][number], reach: number): number {
+  return Math.max(0, Math.sqrt(pointSegmentDist2(0, 0, l.a.x, l.a.y, l.b.x, l.b.y)) - reach);
 }
 
 export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): CoarseFigures {
@@ -137,6 +196,8 @@ export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): Coa
     boomClearances: p.targets.filter(boomMeets).map((t) => ({ target: t.id, distance: boomGapBound(p, t, step, limit) })),
     powerLines: p.powerLines.map((l) => {
       const required = requiredClearance(l).required;
+      const rough = wireRough(p, l, reach);
+      if (required !== null && rough >= decisive(required)) return { id: l.id, distance: rough, required };
       const d = lipschitzLowerBound((u) => powerLineDistanceAt(p, l, slewAt(p, u)), p.span, step, reach * DEG);
       return { id: l.id, distance: Math.max(0, d), required };
     }),
