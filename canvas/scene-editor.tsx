@@ -10,6 +10,7 @@ import { TopBar } from './panels/top-bar';
 import { SidePanel } from './panels/side-panel';
 import { SlewScrubber } from './panels/slew-scrubber';
 import { ScaleBar } from './view/scale-bar';
+import { UsableAreaLayer } from './advisor/usable-area-layer';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
 import { attachLiveAnalysis } from './analysis/live-analysis';
@@ -78,6 +79,7 @@ export function SceneEditor(props: SceneEditorProps) {
           <div className="relative flex min-w-0 flex-1 flex-col">
             <div className="relative min-h-0 flex-1">
               <PlanView />
+              <UsableAreaLayer />
               <ScaleBar />
             </div>
             <SlewScrubber />
