@@ -11,6 +11,7 @@ import { SidePanel } from './panels/side-panel';
 import { SlewScrubber } from './panels/slew-scrubber';
 import { ScaleBar } from './view/scale-bar';
 import { UsableAreaLayer } from './advisor/usable-area-layer';
+import { ReachEnvelopeToggle } from './overlays/reach-envelope-toggle';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
 import { attachLiveAnalysis } from './analysis/live-analysis';
@@ -81,6 +82,7 @@ export function SceneEditor(props: SceneEditorProps) {
               <PlanView />
               <UsableAreaLayer />
               <ScaleBar />
+              <ReachEnvelopeToggle />
             </div>
             <SlewScrubber />
           </div>
