@@ -145,18 +145,28 @@ export interface QueueRow {
   submissionId: number;
 }
 
-/** The organisation's plans awaiting review, oldest submission first. */
-export async function listReviewQueue(db: Db, organisationId: number): Promise<QueueRow[]> {
-  const rows = await db
+/** Submissions awaiting a decision whose scene is still submitted: the review queue. */
+function awaitingReview(db: Db, organisationId: number) {
+  return db
     .selectFrom('scene_submissions as s')
     .innerJoin('scenes', 'scenes.id', 's.scene_id')
-    .innerJoin('users', 'users.id', 'scenes.owner_id')
-    .select(['scenes.id', 'scenes.title', 's.revision', 'scenes.owner_id', 'users.name as owner_name', 's.submitted_at', 'scenes.document', 's.figures', 's.id as submission_id'])
     .where('s.organisation_id', '=', organisationId)
     .where('scenes.organisation_id', '=', organisationId)
     .where('s.state', '=', 'pending')
     .where('scenes.status', '=', 'submitted')
-    .where('scenes.deleted_at', 'is', null)
+    .where('scenes.deleted_at', 'is', null);
+}
+
+export async function countReviewQueue(db: Db, organisationId: number): Promise<number> {
+  const r = await awaitingReview(db, organisationId).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+  return Number(r.n);
+}
+
+/** The organisation's plans awaiting review, oldest submission first. */
+export async function listReviewQueue(db: Db, organisationId: number): Promise<QueueRow[]> {
+  const rows = await awaitingReview(db, organisationId)
+    .innerJoin('users', 'users.id', 'scenes.owner_id')
+    .select(['scenes.id', 'scenes.title', 's.revision', 'scenes.owner_id', 'users.name as owner_name', 's.submitted_at', 'scenes.document', 's.figures', 's.id as submission_id'])
     .orderBy('s.submitted_at', 'asc')
     .orderBy('s.id', 'asc')
     .execute();
