@@ -14,6 +14,7 @@ import { riggingVerdicts, type RiggingVerdict } from './rigging';
 import type { LiftInput, LiftInputIn } from './schema';
 import { insideDistance } from './support-polygon';
 import { sweepSamples, sweepTipping } from './sweep';
+import { weightSensitivity } from './sensitivity';
 import { assertStandsUnloaded } from './tipping';
 import { LiftError } from './errors';
 
@@ -23,6 +24,11 @@ export const MIN_STEP = 0.01;
 export interface AnalyzeOptions {
   /** Sampling step of the swing sweeps, degrees, from MIN_STEP to 1 (the sweep array uses it too). */
   step?: number;
+  /**
+   * Work out the weight sensitivity (default true). It costs a few dozen reaction sweeps (tens of ms), so a
+   * caller that analyses many placements may leave it out; `weightSensitivity` is then null.
+   */
+  sensitivity?: boolean;
 }
 
 function worstCaseOf(p: PreparedLift, step: number): { worst: WorstCase; sweep: ReturnType<typeof sweepTipping> } {
@@ -114,6 +120,7 @@ export function analyzePrepared(p: PreparedLift, options: AnalyzeOptions = {}): 
     rigging,
     loadChart: chart ? { ...percentOfRated(chart, p.radius, p.input.boom.length, p.hookLoad), radius: p.radius, boomLength: p.input.boom.length } : null,
     upperWeight: upper,
+    weightSensitivity: options.sensitivity === false ? null : weightSensitivity(p, step, sweep),
     hook: { radius: p.radius, tipHeight: p.tipZ, loadBottom: p.loadBottom, hookLoad: p.hookLoad },
     checks,
     caution: CAUTION_LINES,

@@ -8,6 +8,7 @@ import type { SupportReaction } from './reactions';
 import type { RiggingVerdict } from './rigging';
 import type { TruckSide } from './names';
 import type { LineChange, SweepSample } from './sweep';
+import type { WeightSensitivity } from './sensitivity';
 
 /** The analysis result. The field names of issue 3's contract are kept; the rest are additions. */
 export interface TippingLineResult {
@@ -66,6 +67,8 @@ export interface LiftResult {
   rigging: RiggingVerdict[];
   loadChart: (ChartLookup & { percent: number | null; radius: number; boomLength: number }) | null;
   upperWeight: UpperWeightResult | null;
+  /** For each limit, the load mass at which it is reached over the whole swing, and curves over the weight band (sensitivity.ts); null when the caller asked for none. */
+  weightSensitivity: WeightSensitivity | null;
   hook: { radius: number; tipHeight: number; loadBottom: number; hookLoad: number };
   checks: Check[];
   /** The standing caution that goes with every result. */

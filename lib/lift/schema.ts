@@ -179,6 +179,10 @@ export const liftInputSchema = z.object({
   loadChart: loadChartSchema.optional(),
   /** Uncertainty of the load's weight, percent; the worst case is also reported at the upper weight. */
   weightUncertainty: z.number().min(0).max(100).optional(),
+  /** How the load's weight is known; 'estimated' (from its dimensions) widens the default sensitivity band (weight-band.ts). */
+  weightBasis: z.enum(['given', 'estimated']).optional(),
+  /** Band of load weights the weight sensitivity covers, percent below and above the load's mass (defaults: weight-band.ts). */
+  weightBand: z.object({ below: z.number().min(0).max(100), above: z.number().min(0).max(1000) }).optional(),
   site: siteSchema.optional(),
 });
 

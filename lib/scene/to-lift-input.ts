@@ -78,6 +78,8 @@ export function sceneToLiftInput(doc: SceneDocument, model: TruckModel | null): 
     limits: { ...doc.limits },
     loadChart: parts.loadChart,
     ...(load.weightUncertainty > 0 ? { weightUncertainty: load.weightUncertainty } : {}),
+    // An estimate from the dimensions gets the wider default band of the weight sensitivity.
+    ...(load.massMode === 'estimate' ? { weightBasis: 'estimated' as const } : {}),
     ...(load.rigging.length
       ? {
           rigging: picksToRigging(load.rigging),

@@ -18,6 +18,17 @@ describe('npm run analyze', () => {
     expect(result.worstCase.slew).toBeLessThan(300);
     expect(result.worstCase.slew).toBeGreaterThan(235);
   });
+  it('prints the weight sensitivity: the load mass at which each limit is reached', () => {
+    const result = JSON.parse(run('examples/lift/coil-transfer.json').stdout);
+    const ws = result.weightSensitivity;
+    expect(ws.loadMass).toBe(7990);
+    const kinds = ws.limits.map((l: { kind: string }) => l.kind);
+    expect(kinds).toEqual(expect.arrayContaining(['tipping-limit', 'tipping', 'load-chart', 'bearing', 'rigging']));
+    // Percent of tipping is proportional to the hook load (tipping.ts), so the 85 % mass is 85/100 of the 100 % one plus the block and rigging share.
+    const at = (k: string) => ws.limits.find((l: { kind: string }) => l.kind === k).loadMass;
+    const extra = result.hook.hookLoad - ws.loadMass;
+    expect((at('tipping-limit') + extra) / (at('tipping') + extra)).toBeCloseTo(0.85, 9);
+  });
   it('bad input: names the field on stderr, exit code 2', () => {
     const input = JSON.parse(fs.readFileSync(path.join(root, 'examples/lift/coil-transfer.json'), 'utf8'));
     input.boom.cgFraction = 'middle';
