@@ -41,10 +41,11 @@ export default async function ReviewQueuePage({ searchParams }: Props) {
     return s ? `/review?${s}` : '/review';
   };
   const chip = (active: boolean) =>
-    cx('inline-flex min-h-touch items-center rounded-plate border px-3 text-body font-semibold', active ? 'border-ink bg-ink text-paper-raised' : 'border-paper-line bg-paper-raised text-ink hover:border-ink');
+    cx('inline-flex min-h-touch shrink-0 items-center whitespace-nowrap rounded-plate border px-3 text-body font-semibold', active ? 'border-ink bg-ink text-paper-raised' : 'border-paper-line bg-paper-raised text-ink hover:border-ink');
   const row = (label: string, chips: { key: string; text: string; href: string; active: boolean }[]) => (
-    <div className="flex flex-wrap items-center gap-2">
-      <span className="w-16 text-label text-ink-muted">{label}</span>
+    // One scrolling row on a phone, so the filters do not push the plans off the first screen.
+    <div className="-mx-1 flex items-center gap-2 overflow-x-auto px-1 pb-1 sm:flex-wrap sm:overflow-visible">
+      <span className="w-16 shrink-0 text-label text-ink-muted">{label}</span>
       {chips.map((c) => (
         <Link key={c.key} href={c.href} className={chip(c.active)} aria-current={c.active ? 'true' : undefined}>
           {c.text}
