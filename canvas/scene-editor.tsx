@@ -17,6 +17,8 @@ import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { EditorStore } from './store/editor-store';
+import type { EditorReviewData } from '@/lib/review/page-data';
+import { EditorReview } from './review/editor-review';
 
 export interface SceneEditorProps {
   scene: { id: number; title: string; status: string; revision: number; ownerName: string; updatedAt: string };
@@ -25,6 +27,8 @@ export interface SceneEditorProps {
   readOnly: boolean;
   units: UnitSystem;
   user: { name: string; role: string };
+  /** The review desk's status, comments and actions (canvas/review). */
+  review?: EditorReviewData;
   /** Lets the page's other parts (saving, export) reach the store. */
   onStore?: (store: EditorStore) => void;
 }
@@ -79,6 +83,7 @@ export function SceneEditor(props: SceneEditorProps) {
             <div className="relative min-h-0 flex-1">
               <PlanView />
               <ScaleBar />
+              {props.review && <EditorReview sceneId={props.scene.id} review={props.review} />}
             </div>
             <SlewScrubber />
           </div>
