@@ -57,6 +57,26 @@ export interface SceneTable {
   created_at: Timestamp;
   updated_at: Timestamp;
   deleted_at: string | null;
+  /** The status an archived scene had before; unarchiving restores it. */
+  archived_from: SceneStatus | null;
+}
+
+/** The server's headline figures of one saved revision (lib/server/scene-figures.ts). */
+export interface SceneFiguresTable {
+  scene_id: number;
+  revision: number;
+  engine_version: string;
+  /** Worst % of tipping over the swing. */
+  percent_of_tipping: number | null;
+  /** Highest pad ground pressure as % of the allowable. */
+  percent_of_bearing: number | null;
+  /** Least clearance to a truck part or obstacle, m (negative: the load would strike it). */
+  least_clearance: number | null;
+  /** Checks beyond the plan's limits. */
+  beyond_count: number | null;
+  /** Why there is nothing to compute (null when computed). */
+  problem: string | null;
+  computed_at: string;
 }
 
 export interface SceneRevisionTable {
@@ -261,6 +281,7 @@ export interface Database {
   scene_plan_details: ScenePlanDetailsTable;
   lessons: LessonTable;
   lesson_steps: LessonStepTable;
+  scene_figures: SceneFiguresTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;

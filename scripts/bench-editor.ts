@@ -15,6 +15,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, type Page } from 'playwright-core';
 import { DEMO_SCENES } from '@/db/seed/demo-scenes';
+import type { SceneDocument } from '@/lib/scene/schema';
+import { dragParseFigures } from './bench-drag-parse';
 
 const root = process.cwd();
 if (!fs.existsSync(path.join(root, '.next', 'BUILD_ID'))) {
@@ -196,6 +198,9 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
 const ms = (x: number) => `${x.toFixed(2)} ms`;
 
 try {
+  const drag = dragParseFigures(benchDocument(1, 1) as unknown as SceneDocument);
+  console.log(`Editor drag, 300 obstacles, one obstacle dragged over ${drag.frames} frames, validating the engine input (Node):`);
+  console.log(`  full zod parse per frame: median ${ms(drag.fullMedian)}; incremental parse (what the editor runs): median ${ms(drag.incrementalMedian)} (${(drag.fullMedian / drag.incrementalMedian).toFixed(1)}× less); full parses during the drag: ${drag.fullParses - 1} after the first frame`);
   await waitForServer();
   const paced = await pass([], null);
   const unpaced = await pass(UNPACED, paced.sceneId);

@@ -1,4 +1,4 @@
-import { analyzePrepared, analyzeAtSlew, isLiftError, prepareLift, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
+import { analyzePrepared, analyzeAtSlew, isLiftError, parseLiftInputIncremental, prepareLift, type ParseMemo, type PreparedLift, type SlewSnapshot } from '@/lib/lift';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckObject } from '@/lib/scene/objects';
 import type { EditorStore } from '../store/editor-store';
@@ -25,11 +25,21 @@ export function sameExceptSlew(a: SceneDocument, b: SceneDocument): boolean {
   return true;
 }
 
-function prepare(doc: SceneDocument, model: TruckModel | null): Pick<LiveAnalysis, 'lift' | 'prepared' | 'error'> {
+/**
+ * The engine input of `doc`, prepared. `memo` carries the last frame's parsed input, so a drag parses only
+ * the parts of the input it changed (issue 10 item 5: no full zod parse per frame).
+ */
+export function prepareScene(
+  doc: SceneDocument,
+  model: TruckModel | null,
+  memo: { current: ParseMemo | null } = { current: null },
+): Pick<LiveAnalysis, 'lift' | 'prepared' | 'error'> {
   const lift = sceneToLiftInput(doc, model);
   if (!lift.ok) return { lift, prepared: null, error: null };
   try {
-    return { lift, prepared: prepareLift(lift.input), error: null };
+    const parsed = parseLiftInputIncremental(lift.input, memo.current);
+    memo.current = parsed.memo;
+    return { lift, prepared: prepareLift(parsed.input), error: null };
   } catch (e) {
     if (isLiftError(e)) return { lift, prepared: null, error: { code: e.code, message: e.message } };
     throw e;
@@ -61,6 +71,7 @@ export function attachLiveAnalysis(store: EditorStore, opts: { deferFull?: (run:
   let lastSlew: number | null | undefined;
   let fullPending = false;
   let generation = 0;
+  const parseMemo: { current: ParseMemo | null } = { current: null };
 
   const runFull = (gen: number) => {
     fullPending = false;
@@ -98,7 +109,7 @@ export function attachLiveAnalysis(store: EditorStore, opts: { deferFull?: (run:
       store.getState().set({ analysis: { ...s.analysis, slew, snapshot: snapshotAt(s.analysis.prepared, slew) } });
     } else if (docChanged) {
       generation += 1;
-      const p = prepare(doc, s.truck);
+      const p = prepareScene(doc, s.truck, parseMemo);
       store.getState().set({ analysis: { ...p, result: null, snapshot: snapshotAt(p.prepared, slew), slew } });
     } else if (s.analysis) {
       store.getState().set({ analysis: { ...s.analysis, slew, snapshot: snapshotAt(s.analysis.prepared, slew) } });

@@ -12,8 +12,8 @@ function figureWords(f: HeadlineFigures | null, units: UnitSystem) {
   if (!f) return { pct: '—', pad: '—', gap: '—' };
   return {
     pct: `${f.worstPercentOfTipping.toFixed(1)} %`,
-    pad: f.highestPadPressure === null ? '—' : `${formatPressure(f.highestPadPressure, units)} (${f.highestPadPressureSupport})`,
-    gap: f.leastClearance === null ? '—' : `${formatLength(f.leastClearance, units)} (${f.leastClearanceTarget})`,
+    pad: f.highestPadPressure === null ? '—' : `${formatPressure(f.highestPadPressure, units)} (${f.highestPadPressureSupportName})`,
+    gap: f.leastClearance === null ? '—' : `${formatLength(f.leastClearance, units)} (${f.leastClearanceTargetName})`,
   };
 }
 

@@ -21,11 +21,13 @@ export function useFieldError(name: string): string | undefined {
 }
 
 /** A number in the user's units, bound to an SI value in the form. */
-export function NumField({ name, label, quantity, hint, bare }: { name: string; label: string; quantity: Quantity; hint?: string; bare?: boolean }) {
+/** `optional`: an empty field is left out of the spec (the engine's documented default applies), not an error. */
+export function NumField({ name, label, quantity, hint, bare, optional }: { name: string; label: string; quantity: Quantity; hint?: string; bare?: boolean; optional?: boolean }) {
   const { units, readOnly } = useContext(FormUnits);
   const { field } = useController<FieldValues>({ name });
   const error = useFieldError(name);
-  return <UnitInput label={label} quantity={quantity} units={units} value={field.value as number | null} onChange={(v) => field.onChange(v === null ? NaN : v)} error={error} hint={hint} disabled={readOnly} bare={bare} />;
+  const empty = optional ? undefined : NaN;
+  return <UnitInput label={label} quantity={quantity} units={units} value={(field.value as number | null | undefined) ?? null} onChange={(v) => field.onChange(v === null ? empty : v)} error={error} hint={hint} disabled={readOnly} bare={bare} />;
 }
 
 export function TextInput({ name, label, hint }: { name: string; label: string; hint?: string }) {

@@ -6,6 +6,8 @@ import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/select';
 import { FormUnits, NumField, Row, Section, SubHeading, TextInput, useFieldError } from './form-fields';
 import { LoadChartGrid } from './load-chart-grid';
+import { formatLength } from '@/lib/format/quantity';
+import { BOOM_WIDTH } from '@/lib/lift/schema';
 
 const XYZ = ({ base, label }: { base: string; label: string }) => (
   <Row cols={3}>
@@ -96,7 +98,7 @@ export function UpperSection() {
 }
 
 export function BoomSection() {
-  const { readOnly } = useContext(FormUnits);
+  const { units, readOnly } = useContext(FormUnits);
   const { fields, append, remove } = useFieldArray<FieldValues>({ name: 'spec.boom.stages' });
   const stagesError = useFieldError('spec.boom.stages');
   return (
@@ -127,6 +129,15 @@ export function BoomSection() {
         <NumField name="spec.boom.elevation.min" label="Lowest elevation" quantity="angle" />
         <NumField name="spec.boom.elevation.max" label="Highest elevation" quantity="angle" />
         <NumField name="spec.boom.mass" label="Boom mass" quantity="mass" />
+      </Row>
+      <Row cols={3}>
+        <NumField
+          name="spec.boom.width"
+          label="Boom width (optional)"
+          quantity="length"
+          optional
+          hint={`Overall width, checked against obstacles and the truck's own body. Empty: ${formatLength(BOOM_WIDTH, units)}.`}
+        />
       </Row>
     </Section>
   );

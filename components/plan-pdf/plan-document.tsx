@@ -5,6 +5,7 @@ import { PageFrame, planNumber } from './page-frame';
 import { EquipmentSection, GroundSection, LoadSection, RiggingSection } from './sections-setup';
 import { ChecksSection, ClearanceSection, StabilitySection } from './sections-checks';
 import { DetailsSection, SignOffSection } from './sections-details';
+import { WeightSection } from './section-weight';
 import { governingLineWords, pct } from './format';
 import { checksHeadline } from '@/lib/format/checks';
 import { s } from './styles';
@@ -42,6 +43,7 @@ export function PlanDocument({ d }: { d: PlanData }) {
           <RiggingSection d={d} />
           <GroundSection d={d} />
           <StabilitySection d={d} />
+          <WeightSection d={d} />
           <ClearanceSection d={d} />
           <ChecksSection d={d} />
           <DetailsSection d={d} />

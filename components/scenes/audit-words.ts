@@ -11,6 +11,16 @@ export function describeAudit(action: string, detail: Record<string, unknown> | 
     }
     case 'scene.delete':
       return 'Deleted the scene';
+    case 'scene.restore':
+      return 'Restored the deleted scene';
+    case 'scene.archive':
+      return 'Archived the scene';
+    case 'scene.unarchive':
+      return 'Took the scene out of the archive';
+    case 'scene.duplicate':
+      return typeof d.title === 'string' ? `Created the scene as a copy of “${d.title}”` : 'Created the scene as a copy';
+    case 'scene.copied':
+      return 'Made a copy of the scene';
     case 'scene.training.add':
       return 'Added it to the training set';
     case 'scene.training.remove':

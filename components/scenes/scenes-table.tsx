@@ -17,10 +17,12 @@ import { SelectField } from '@/components/ui/select';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { formatWhen } from './format';
 import { Pager } from './pager';
+import { SceneActions } from './scene-actions';
+import type { Who } from '@/lib/auth/permissions';
 
 const col = createColumnHelper<SceneSummary>();
 
-const columns = [
+const columnsFor = (user: Who) => [
   col.accessor('title', {
     header: 'Title',
     meta: { className: 'lg:w-[36%]' },
@@ -43,15 +45,18 @@ const columns = [
   col.accessor('updatedAt', { header: 'Last saved', cell: (c) => <span className="whitespace-nowrap text-ink-soft">{formatWhen(c.getValue())}</span> }),
   col.display({
     id: 'details',
-    header: () => <span className="sr-only">Details</span>,
+    header: () => <span className="sr-only">Details and actions</span>,
     cell: (c) => (
-      <Link
-        href={`/scenes/${c.row.original.id}/details`}
-        aria-label={`Details of ${c.row.original.title}`}
-        className="inline-flex min-h-touch items-center rounded-plate px-2 font-semibold text-teal-dark underline-offset-4 hover:bg-teal-light hover:underline"
-      >
-        Details
-      </Link>
+      <div className="flex items-center justify-end gap-1">
+        <Link
+          href={`/scenes/${c.row.original.id}/details`}
+          aria-label={`Details of ${c.row.original.title}`}
+          className="inline-flex min-h-touch items-center rounded-plate px-2 font-semibold text-teal-dark underline-offset-4 hover:bg-teal-light hover:underline"
+        >
+          Details
+        </Link>
+        <SceneActions user={user} scene={c.row.original} layout="row" />
+      </div>
     ),
   }),
 ];
@@ -74,7 +79,8 @@ const SORTS = ['updatedAt', 'title', 'status', 'ownerName', 'revision'];
  * The list's state lives in the URL (search, status, sort and the keyset cursor), so a link to page 3 of a
  * filtered list opens that same page for a colleague.
  */
-export function ScenesTable({ canCreate }: { canCreate: boolean }) {
+export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who }) {
+  const columns = useMemo(() => columnsFor(user), [user]);
   const router = useRouter();
   const pathname = usePathname();
   const search = useSearchParams();

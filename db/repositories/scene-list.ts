@@ -102,7 +102,8 @@ export function visibleScenes(db: Db, user: CurrentUser) {
 
 function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
   let q = visibleScenes(db, user);
-  if (opts.status) q = q.where('scenes.status', '=', opts.status);
+  // Archived scenes leave the everyday list; asking for status=archived shows them.
+  q = opts.status ? q.where('scenes.status', '=', opts.status) : q.where('scenes.status', '!=', 'archived');
   if (opts.inTrainingSet !== undefined) q = q.where('scenes.in_training_set', '=', opts.inTrainingSet ? 1 : 0);
   if (opts.q !== undefined) {
     const match = ftsQuery(opts.q);

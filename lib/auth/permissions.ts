@@ -14,6 +14,10 @@ export const ROLES_FOR = {
   editScene: ['operator'],
   /** An operator deletes their own scene; an admin may delete any in the organisation but edits none. */
   deleteScene: ['operator', 'admin'],
+  /** Archiving follows deleting: the owning operator, or an admin for any scene. */
+  archiveScene: ['operator', 'admin'],
+  /** Only an admin brings back a deleted scene (within the restore window) and sees the deleted ones. */
+  restoreScene: ['admin'],
   /** Trainers pick the scenes that go into the training set. */
   markTraining: ['trainer'],
   /** Admins keep the truck profiles. */
@@ -47,3 +51,6 @@ export const mayReadScene = (user: Who, scene: SceneRef): boolean => mayReadAllS
 export const mayEditScene = (user: Who, scene: Pick<SceneRef, 'ownerId'>): boolean => may(user, 'editScene') && scene.ownerId === user.id;
 
 export const mayDeleteScene = (user: Who, scene: Pick<SceneRef, 'ownerId'>): boolean => user.role === 'admin' || mayEditScene(user, scene);
+
+/** Archive and unarchive: as delete (the owning operator, or an admin). */
+export const mayArchiveScene = mayDeleteScene;

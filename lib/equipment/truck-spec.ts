@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RANGE } from '@/lib/lift/range';
 
 /** The named parts of the body outline, rear to front. */
 export const BODY_PART_IDS = ['tailboard', 'body', 'cab'] as const;
@@ -15,14 +16,29 @@ export const BODY_PART_IDS = ['tailboard', 'body', 'cab'] as const;
  * with the slew. This is the lift engine's truck frame, which is why the conversion is a shift.
  */
 
-const num = (label: string) =>
+/**
+ * Every number has a physical range (issue 11): the lift engine's own ranges (lib/lift/schema RANGE), so a
+ * profile that saves is one the engine accepts, and a figure like 1e300 is refused with the range named.
+ */
+const within = (label: string, min: number, max: number, unit: string) =>
   // zod 4 numbers already refuse NaN and ±Infinity.
-  z.number({ error: `${label} must be a number` });
-export const length = (label: string) => num(label).refine((v) => v > 0, `${label} must be more than 0`);
-export const distance = (label: string) => num(label).refine((v) => v >= 0, `${label} cannot be negative`);
-export const mass = (label: string) => num(label).refine((v) => v >= 0, `${label} cannot be negative`);
+  z
+    .number({ error: `${label} must be a number` })
+    .refine(
+      (v) => v >= min && v <= max,
+      min === -Infinity ? `${label} must be at most ${max.toLocaleString('en-US')} ${unit}` : `${label} must be from ${min} to ${max.toLocaleString('en-US')} ${unit}`,
+    );
+const num = (label: string) => within(label, -RANGE.truck, RANGE.truck, 'm');
+export const length = (label: string) =>
+  within(label, -Infinity, RANGE.length, 'm').refine((v) => v > 0, `${label} must be more than 0`);
+export const distance = (label: string) =>
+  within(label, -Infinity, RANGE.length, 'm').refine((v) => v >= 0, `${label} cannot be negative`);
+export const mass = (label: string) =>
+  within(label, -Infinity, RANGE.mass, 'kg').refine((v) => v >= 0, `${label} cannot be negative`);
+const positiveMass = (label: string) =>
+  within(label, -Infinity, RANGE.mass, 'kg').refine((v) => v > 0, `${label} must be more than 0 (negative or zero masses are refused)`);
 const angle = (label: string, min: number, max: number) =>
-  num(label).refine((v) => v >= min && v <= max, `${label} must be between ${min}° and ${max}°`);
+  z.number({ error: `${label} must be a number` }).refine((v) => v >= min && v <= max, `${label} must be between ${min}° and ${max}°`);
 
 const point3 = (label: string) => z.object({ x: num(`${label} x`), y: num(`${label} y`), z: distance(`${label} height`) });
 
@@ -44,7 +60,7 @@ export const carrierSchema = z.object({
   tailboard: bodyPartSchema('Tailboard'),
   body: bodyPartSchema('Body'),
   cab: bodyPartSchema('Cab'),
-  mass: num('Carrier mass').refine((v) => v > 0, 'Carrier mass must be more than 0 (negative or zero masses are refused)'),
+  mass: positiveMass('Carrier mass'),
   cg: point3('Carrier CG'),
   stowedHeight: length('Stowed height'),
   boomStowed: z.object({ slew: angle('Stowed boom slew', -360, 360), elevation: angle('Stowed boom elevation', -30, 90) }),
@@ -57,7 +73,7 @@ export const upperSchema = z.object({
   /** null: slews all the way round. Otherwise the allowed arc from `min` to `max`, counter-clockwise. */
   slewLimits: z.object({ min: angle('Slew limit (from)', -360, 360), max: angle('Slew limit (to)', -360, 360) }).nullable(),
   /** Slew speed at full lever, degrees per second; the replay plays 1× at this rate (optional). */
-  slewSpeed: num('Slew speed').refine((v) => v > 0 && v <= 30, 'Slew speed must be more than 0 and at most 30 °/s').optional(),
+  slewSpeed: z.number({ error: 'Slew speed must be a number' }).refine((v) => v > 0 && v <= 30, 'Slew speed must be more than 0 and at most 30 °/s').optional(),
 });
 
 export const boomStageSchema = z.object({
@@ -65,16 +81,16 @@ export const boomStageSchema = z.object({
   /** Pivot-to-tip length with the boom extended to this stage. */
   length: length('Stage length'),
   /** Where the boom's own CG sits, as a fraction of the way from pivot to tip, at this length. */
-  cgFraction: num('Boom CG fraction').refine((v) => v > 0 && v < 1, 'Boom CG fraction must be between 0 and 1'),
+  cgFraction: z.number({ error: 'Boom CG fraction must be a number' }).refine((v) => v > 0 && v < 1, 'Boom CG fraction must be between 0 and 1'),
 });
 
 export const boomSchema = z.object({
   pivot: point3('Boom pivot'),
   stages: z.array(boomStageSchema).min(1, 'The boom needs at least its retracted length').max(8, 'At most 8 boom stages'),
   elevation: z.object({ min: angle('Lowest elevation', -30, 90), max: angle('Highest elevation', -30, 90) }),
-  mass: num('Boom mass').refine((v) => v > 0, 'Boom mass must be more than 0 (negative or zero masses are refused)'),
+  mass: positiveMass('Boom mass'),
   /** Overall width of the boom, m: the lift engine checks a capsule this wide against obstacles (its default when omitted). */
-  width: num('Boom width').refine((v) => v >= 0.05 && v <= 10, 'Boom width must be from 0.05 m to 10 m').optional(),
+  width: z.number({ error: 'Boom width must be a number' }).refine((v) => v >= 0.05 && v <= 10, 'Boom width must be from 0.05 m to 10 m').optional(),
 });
 
 export const legSchema = z.object({
@@ -92,14 +108,14 @@ export const legSchema = z.object({
     full: length('Full reach'),
   }),
   pad: z.object({ length: length('Pad length'), width: length('Pad width') }),
-  padRating: num('Pad rating').refine((v) => v > 0, 'Pad rating must be more than 0 (negative or zero masses are refused)'),
+  padRating: positiveMass('Pad rating'),
 });
 export type Leg = z.infer<typeof legSchema>;
 
 export const winchSchema = z.object({
   name: z.string().trim().min(1, 'Winch name is required').max(40),
   /** First-layer rated line pull, as the mass it holds (kg). */
-  ratedLinePull: num('Rated line pull').refine((v) => v > 0, 'Rated line pull must be more than 0'),
+  ratedLinePull: within('Rated line pull', -Infinity, RANGE.mass, 'kg').refine((v) => v > 0, 'Rated line pull must be more than 0'),
   ropeDiameter: length('Rope diameter'),
   ropeLength: length('Rope length'),
   maxParts: z.number({ error: 'Parts of line must be a number' }).int('Parts of line must be a whole number').min(1, 'Parts of line must be at least 1').max(12, 'Parts of line can be at most 12'),
@@ -120,7 +136,7 @@ export const loadChartSchema = z.object({
   /** Columns, pivot-to-tip boom lengths, strictly increasing. */
   boomLengths: z.array(length('Boom length')).min(1, 'The load chart needs at least one boom length').max(12, 'At most 12 boom lengths'),
   /** rated[row][column] in kg; null where the chart gives no rating. */
-  rated: z.array(z.array(num('Rated load').refine((v) => v > 0, 'Rated load must be more than 0; leave the cell empty where the chart gives no rating').nullable())),
+  rated: z.array(z.array(within('Rated load', -Infinity, RANGE.mass, 'kg').refine((v) => v > 0, 'Rated load must be more than 0; leave the cell empty where the chart gives no rating').nullable())),
   conditions: loadChartConditionsSchema,
 });
 export type LoadChart = z.infer<typeof loadChartSchema>;

@@ -5,6 +5,7 @@ export * from './schema';
 export * from './geometry';
 export * from './support-polygon';
 export * from './prepare';
+export * from './incremental-parse';
 export * from './tipping';
 export * from './sweep';
 export * from './reactions';

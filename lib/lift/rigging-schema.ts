@@ -1,12 +1,14 @@
 import { z } from 'zod';
 import { roundSlingColours } from './ratings/round-sling';
 import { slingMaterials } from './ratings/hitch';
+import { RANGE } from './range';
 
 /**
  * The rigging part of the analysis input. Units: kilograms and degrees. Ratings come from the tables in
  * ./ratings (each row sourced) or from the item's tag (entered ratings).
  */
-const pos = z.number().positive();
+/** A rating or a pull, kg: positive and within the engine's mass range (issue 9 item 5). */
+const pos = z.number().positive().max(RANGE.mass, `must be at most ${RANGE.mass} kg`);
 const id = z.string().min(1).max(64);
 /** What a person calls the item (its tag); results show it instead of the id. */
 const name = z.string().max(120).optional();

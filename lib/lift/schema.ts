@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RANGE } from './range';
 import { riggingSchema } from './rigging-schema';
 
 /**
@@ -7,32 +8,7 @@ import { riggingSchema } from './rigging-schema';
  * missing mass with its own typed error; shapes and types are checked here.
  * Units: metres, kilograms, degrees, kPa. Truck frame unless stated (see docs/engine.md).
  */
-/**
- * Physical ranges of every number (issue 9). A value outside its range (or not finite: zod refuses NaN and
- * ±Infinity) is a typed error naming the field: 400 at the route, LiftError in the library. The ranges are
- * far beyond any truck, load or site (common practice, no published source), and small enough that no
- * product of them overflows a double, so no result can come out NaN or infinite.
- */
-export const RANGE = {
-  /** kg, any one mass: 10 000 t. */
-  mass: 1e7,
-  /** m from the slew axis: the truck's own supports, masses, boom pivot. */
-  truck: 100,
-  /** m: positions of obstacles, power lines, body outlines and the truck on its site (100 km). */
-  site: 1e5,
-  /** m: heights of tops, wires and the pivot. */
-  height: 1000,
-  /** m: the boom, the load's size. */
-  length: 200,
-  /** m²: a pad or a mat, from 1 cm². */
-  areaMin: 1e-4,
-  areaMax: 100,
-  /** degrees: swing ends and headings, ±10 turns. */
-  angle: 3600,
-  /** kPa: allowable ground pressure. */
-  pressureMin: 1,
-  pressureMax: 1e5,
-} as const;
+export { RANGE } from './range';
 
 const within = (min: number, max: number, unit: string) =>
   z.number().min(min, `must be from ${min} to ${max} ${unit}`).max(max, `must be from ${min} to ${max} ${unit}`);

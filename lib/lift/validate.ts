@@ -10,6 +10,11 @@ import { siteToTruck, type SitePose } from './types';
 /** Inputs this module has validated itself, so the editor's repeated analyses skip re-parsing. */
 const validated = new WeakSet<object>();
 
+/** Marks an input parsed elsewhere in this library (incremental-parse.ts) so prepareLift does not parse it again. */
+export function markValidated(input: LiftInput): void {
+  validated.add(input);
+}
+
 /** zod-validates an input (defaults filled in); failures become LiftError naming the field. */
 export function parseLiftInput(raw: LiftInputIn | LiftInput): LiftInput {
   if (typeof raw === 'object' && raw !== null && validated.has(raw)) return raw as LiftInput;

@@ -18,17 +18,21 @@ export interface HeadlineFigures {
   governingLine: string;
   highestPadPressure: number | null;
   highestPadPressureSupport: string | null;
+  /** What people call that pad ("left rear"): the engine's name for it. */
+  highestPadPressureSupportName: string | null;
   leastClearance: number | null;
   leastClearanceTarget: string | null;
+  /** What people call that part or obstacle (its label on the plan), never its id. */
+  leastClearanceTargetName: string | null;
 }
 
 export function headlineFigures(r: Pick<LiftResult, 'worstCase' | 'reactions' | 'clearances'>): HeadlineFigures {
-  let pad: { pressure: number; support: string } | null = null;
-  for (const m of r.reactions.maxima) if (!pad || m.pressure > pad.pressure) pad = { pressure: m.pressure, support: m.support };
-  let gap: { value: number; target: string } | null = null;
+  let pad: { pressure: number; support: string; name: string } | null = null;
+  for (const m of r.reactions.maxima) if (!pad || m.pressure > pad.pressure) pad = { pressure: m.pressure, support: m.support, name: m.name };
+  let gap: { value: number; target: string; name: string } | null = null;
   for (const c of r.clearances) {
     const value = clearanceFigure(c);
-    if (!gap || value < gap.value) gap = { value, target: c.target };
+    if (!gap || value < gap.value) gap = { value, target: c.target, name: c.name };
   }
   return {
     worstPercentOfTipping: r.worstCase.percentOfTipping,
@@ -36,8 +40,10 @@ export function headlineFigures(r: Pick<LiftResult, 'worstCase' | 'reactions' | 
     governingLine: r.worstCase.line,
     highestPadPressure: pad?.pressure ?? null,
     highestPadPressureSupport: pad?.support ?? null,
+    highestPadPressureSupportName: pad?.name ?? null,
     leastClearance: gap?.value ?? null,
     leastClearanceTarget: gap?.target ?? null,
+    leastClearanceTargetName: gap?.name ?? null,
   };
 }
 
@@ -46,7 +52,10 @@ export interface RevisionSummary {
   revision: number;
   savedAt: string;
   author: string;
-  /** The scene's status for its latest revision; "superseded" for every earlier one. */
+  /**
+   * The scene's status for its latest revision. For an earlier one, the latest review decision on that
+   * revision ("approved", "returned", "withdrawn", or "submitted" while pending), else "superseded".
+   */
   status: string;
   /** Headline figures, or null when the engine had nothing to compute (see `problem`). */
   figures: HeadlineFigures | null;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RANGE } from '@/lib/lift/range';
 import { RIGGING_KINDS, RIGGING_STATUSES, type RiggingKind, type RiggingStatus } from '@/lib/domain';
 
 /** A calendar date, YYYY-MM-DD, that exists. */
@@ -11,8 +12,12 @@ export const isoDate = (label: string) =>
       return !Number.isNaN(t.getTime()) && t.toISOString().slice(0, 10) === d;
     }, `${label} is not a real calendar date`);
 
+/** Physical ranges (issue 11): the lift engine's own (lib/lift/schema RANGE), so 1e300 is refused with the range named. */
 const rating = (label: string) =>
-  z.number({ error: `${label} rating must be a number (kg)` }).refine((v) => v > 0, `${label} rating must be more than 0 kg`).nullable();
+  z
+    .number({ error: `${label} rating must be a number (kg)` })
+    .refine((v) => v > 0 && v <= RANGE.mass, `${label} rating must be more than 0 and at most ${RANGE.mass.toLocaleString('en-US')} kg`)
+    .nullable();
 
 export const riggingKind = z.enum(RIGGING_KINDS as [RiggingKind, ...RiggingKind[]], { error: `Kind must be one of: ${RIGGING_KINDS.join(', ')}` });
 export const riggingStatus = z.enum(RIGGING_STATUSES as [RiggingStatus, ...RiggingStatus[]], { error: `Status must be one of: ${RIGGING_STATUSES.join(', ')}` });
@@ -23,7 +28,7 @@ export const riggingItemSchema = z
     kind: riggingKind,
     size: z.string().trim().max(60, 'Size can be at most 60 characters').default(''),
     /** metres */
-    length: z.number({ error: 'Length must be a number (m)' }).refine((v) => v > 0, 'Length must be more than 0 m').nullable().default(null),
+    length: z.number({ error: 'Length must be a number (m)' }).refine((v) => v > 0 && v <= RANGE.length, `Length must be more than 0 and at most ${RANGE.length} m`).nullable().default(null),
     /** kg per hitch; all null → filled from a standard table where one applies. */
     ratings: z
       .object({ vertical: rating('Vertical'), choker: rating('Choker'), basket: rating('Basket') })

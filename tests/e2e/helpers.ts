@@ -31,6 +31,12 @@ export async function listedTitles(page: Page) {
   return table.locator('tbody tr td:first-child a').allTextContents();
 }
 
+/** A scene's id from its title, through the list API with the page's session. */
+export async function sceneIdByTitle(page: Page, title: string): Promise<number> {
+  const list = (await (await page.request.get(`/api/scenes?title=${encodeURIComponent(title)}`)).json()) as { items: { id: number; title: string }[] };
+  return list.items.find((s) => s.title === title)!.id;
+}
+
 /** Creates a scene through the API with the page's session (for setting up a test, not for the journey under test). */
 export async function createSceneViaApi(page: Page, title: string): Promise<number> {
   const res = await page.request.post('/api/scenes', { data: { title } });

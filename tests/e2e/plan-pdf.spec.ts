@@ -1,12 +1,9 @@
 import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { HARROW_SCENES, screens, signIn } from './helpers';
+import { HARROW_SCENES, sceneIdByTitle, screens, signIn } from './helpers';
 
-async function coilId(page: Page): Promise<number> {
-  const list = (await (await page.request.get(`/api/scenes?title=${encodeURIComponent(HARROW_SCENES.coil)}`)).json()) as { items: { id: number; title: string }[] };
-  return list.items.find((s) => s.title === HARROW_SCENES.coil)!.id;
-}
+const coilId = (page: Page) => sceneIdByTitle(page, HARROW_SCENES.coil);
 
 test('the operator downloads the lift plan PDF and the drawing from the editor, and edits the plan details', async ({ page }) => {
   // The server renders the PDF and the editor loads its canvas: generous on a machine shared with other builds.

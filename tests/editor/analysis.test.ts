@@ -1,8 +1,8 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { TestEditor } from './test-editor';
 import { attachLiveAnalysis } from '@/canvas/analysis/live-analysis';
 import { sceneToLiftInput } from '@/lib/scene/to-lift-input';
-import { analyzeLift, analyzeAtSlew, prepareLift } from '@/lib/lift';
+import { analyzeLift, analyzeAtSlew, liftInputSchema, prepareLift } from '@/lib/lift';
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
 import { setSlew } from '@/canvas/commands/truck';
 import { overlayGeometry } from '@/canvas/analysis/overlay-geometry';
@@ -71,6 +71,18 @@ describe('live analysis', () => {
     const g0 = gap();
     t.drag([shed.x, shed.y], [shed.x - 3.048, shed.y], { alt: true });
     expect(gap()).toBeCloseTo(g0 - 3.048, 3);
+  });
+
+  it('a drag does no full parse of the engine input per frame (issue 10 item 5), and ends on the full result', () => {
+    const t = coilScene();
+    const shed = t.byKind('obstacle')[0];
+    const full = vi.spyOn(liftInputSchema, 'safeParse');
+    t.drag([shed.x, shed.y], [shed.x + 2, shed.y], { alt: true }, 40);
+    expect(full).not.toHaveBeenCalled();
+    full.mockRestore();
+    const lift = sceneToLiftInput(t.doc, t.state.truck);
+    if (!lift.ok) throw new Error('expected an analysable scene');
+    expect(t.state.analysis!.result!.worstCase).toEqual(analyzeLift(lift.input).worstCase);
   });
 
   it('overlays while scrubbing: the swing geometry is kept, the tipping lines carry the snapshot’s figures', () => {

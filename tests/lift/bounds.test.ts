@@ -38,6 +38,9 @@ describe('bounds on every number of the engine input', () => {
     ['obstacles.0.top', { ...base, obstacles: [{ id: 'x', polygon: [{ x: 5, y: 0 }, { x: 6, y: 0 }, { x: 6, y: 1 }], top: 1e6 }] }, 'invalid-input'],
     ['obstacles.0.polygon.1.x', { ...base, obstacles: [{ id: 'x', polygon: [{ x: 5, y: 0 }, { x: 6e300, y: 0 }, { x: 6, y: 1 }], top: 1 }] }, 'invalid-input'],
     ['soil.allowable', { ...base, soil: { allowable: 1e-300 } }, 'invalid-input'],
+    ['rigging.snatchBlocks.0.wll', { ...base, rigging: { snatchBlocks: [{ id: 'B1', wll: 1e300 }] } }, 'invalid-input'],
+    ['rigging.snatchBlocks.0.linePull', { ...base, rigging: { snatchBlocks: [{ id: 'B1', wll: 8000, linePull: 1e300 }] } }, 'invalid-input'],
+    ['rigging.hooks.0.wll', { ...base, rigging: { hooks: [{ id: 'H1', wll: 2e7 }] } }, 'invalid-input'],
   ])('%s out of range → typed error naming it', (field, input, code) => {
     expect(fieldOf(input)).toBe(`${code} ${field}`);
   });

@@ -3,6 +3,7 @@ vi.mock('@/lib/auth/current-user', () => import('@/tests/setup/auth-mock'));
 import * as revisions from '@/app/api/scenes/[id]/revisions/route';
 import * as revisionOne from '@/app/api/scenes/[id]/revisions/[revision]/route';
 import * as analysis from '@/app/api/scenes/[id]/analysis/route';
+import * as newRevision from '@/app/api/scenes/[id]/new-revision/route';
 import { getDb } from '@/db';
 import { updateScene } from '@/db/repositories/scenes';
 import { signInAs } from '@/tests/setup/auth-mock';
@@ -11,7 +12,7 @@ import { sceneIdByTitle } from '@/tests/setup/fixtures';
 
 /** The revisions API: each revision's figures are the server's engine result for that revision. */
 let coil = 0;
-type Fig = { worstPercentOfTipping: number; worstSlew: number; governingLine: string; highestPadPressure: number; highestPadPressureSupport: string; leastClearance: number; leastClearanceTarget: string };
+type Fig = { worstPercentOfTipping: number; worstSlew: number; governingLine: string; highestPadPressure: number; highestPadPressureSupport: string; highestPadPressureSupportName: string; leastClearance: number; leastClearanceTarget: string; leastClearanceTargetName: string };
 type Summary = { revision: number; savedAt: string; author: string; status: string; figures: Fig | null };
 const ctx = (p: Record<string, string>) => ({ params: Promise.resolve(p) });
 const req = (path: string) => new Request(`http://arcline.test${path}`);
@@ -50,6 +51,11 @@ describe('GET /api/scenes/{id}/revisions', () => {
       expect(r.figures!.highestPadPressure).toBe(Math.max(...pressures));
       const gaps = (a.clearances as { overlapsInPlan: boolean; vertical: number; horizontal: number }[]).map((c) => (c.overlapsInPlan ? c.vertical : Math.max(c.horizontal, c.vertical)));
       expect(r.figures!.leastClearance).toBe(Math.min(...gaps));
+      // Named as on the plan, never by id.
+      const nearest = (a.clearances as { name: string }[])[gaps.indexOf(Math.min(...gaps))]!;
+      expect(r.figures!.leastClearanceTargetName).toBe(nearest.name);
+      expect(r.figures!.leastClearanceTargetName).not.toMatch(/^(obstacle|trailer|load)-[a-z0-9]+$/);
+      expect(r.figures!.highestPadPressureSupportName).toBe(({ FL: 'left front', FR: 'right front', RL: 'left rear', RR: 'right rear', FJ: 'front jack' } as Record<string, string>)[r.figures!.highestPadPressureSupport]);
     }
     // Pulling one outrigger in shrinks the support polygon: the worst case gets worse.
     expect(items[0].figures!.worstPercentOfTipping).toBeGreaterThan(items[1].figures!.worstPercentOfTipping);
@@ -57,6 +63,20 @@ describe('GET /api/scenes/{id}/revisions', () => {
   it('another organisation gets 404', async () => {
     signInAs(await demoUser('operator@cobalt.example'));
     expect((await list(coil)).status).toBe(404);
+  });
+  it('an earlier revision carries the review decision on it: the approved revision stays "approved" after a new revision', async () => {
+    const reefer = await sceneIdByTitle('Overturned reefer trailer, Mill Creek on-ramp');
+    signInAs(await demoUser('operator@harrow.example'));
+    const before = (await (await list(reefer)).json()) as Summary[];
+    const approved = before[0]!;
+    expect(approved.status).toBe('approved');
+    const started = await newRevision.POST(new Request(`http://arcline.test/api/scenes/${reefer}/new-revision`, { method: 'POST' }), ctx({ id: String(reefer) }));
+    expect(started.status).toBe(200);
+    const after = (await (await list(reefer)).json()) as Summary[];
+    expect(after[0]).toMatchObject({ revision: approved.revision + 1, status: 'draft' });
+    expect(after.find((r) => r.revision === approved.revision)!.status).toBe('approved');
+    // Revisions no review ever saw are simply superseded.
+    expect(after.filter((r) => r.revision < approved.revision).every((r) => r.status === 'superseded')).toBe(true);
   });
 });
 

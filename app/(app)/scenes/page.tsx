@@ -19,6 +19,7 @@ export default async function ScenesPage() {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
   const canCreate = may(user, 'createScene');
+  const canRestore = may(user, 'restoreScene');
   return (
     <>
       <PageHeader
@@ -26,14 +27,23 @@ export default async function ScenesPage() {
         title="Scenes"
         description={WHAT_YOU_SEE[user.role]}
         actions={
-          canCreate ? (
-            <ButtonLink href="/scenes/new" variant="signal" size="lg">
-              + New scene
-            </ButtonLink>
+          canCreate || canRestore ? (
+            <div className="flex flex-wrap gap-3">
+              {canRestore && (
+                <ButtonLink href="/scenes/deleted" variant="secondary" size="lg">
+                  Recently deleted
+                </ButtonLink>
+              )}
+              {canCreate && (
+                <ButtonLink href="/scenes/new" variant="signal" size="lg">
+                  + New scene
+                </ButtonLink>
+              )}
+            </div>
           ) : undefined
         }
       />
-      <ScenesTable canCreate={canCreate} />
+      <ScenesTable canCreate={canCreate} user={{ id: user.id, role: user.role }} />
     </>
   );
 }

@@ -4,6 +4,7 @@ import { CautionNote } from '@/components/caution-note';
 import { TippingChart } from './tipping-chart';
 import { ChecksList } from './checks-list';
 import { PadTable } from './pad-table';
+import { WeightSensitivityPanel } from './weight-sensitivity';
 import { checksHeadline, tippingLineWords } from '@/lib/format/checks';
 import { formatAngle, formatLength, formatMass, formatPercent } from '@/lib/format/quantity';
 import type { LiftResult } from '@/lib/lift';
@@ -51,6 +52,7 @@ export function ResultsPanel() {
             </p>
           )}
         </div>
+        <WeightSensitivityPanel r={r} units={units} tippingLimit={limit} chartLimit={doc.limits.percentOfRated} allowable={doc.soil.allowable} />
         <TippingChart result={r} limit={limit} slewNow={a.slew} from={doc.swing.from} direction={doc.swing.direction} />
         <PadTable result={r} snapshot={a.snapshot} units={units} allowable={doc.soil.allowable} />
         <ChecksList checks={r.checks} units={units} />

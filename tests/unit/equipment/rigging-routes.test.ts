@@ -210,3 +210,16 @@ describe('rigging CSV import and export', () => {
     expect((await importCsv(new Request(`${url}/import`, json('POST', { csv: header })))).status).toBe(403);
   });
 });
+
+// Source: issue 11 — a rating of 1e300 kg was accepted; the range is the lift engine's own (lib/lift/range.ts).
+describe('rigging physical ranges', () => {
+  it('refuses a rating or a length past its range, naming the field and the range', async () => {
+    signInAs(await demoUser('operator@harrow.example'));
+    const huge = await create(new Request(url, json('POST', { tag: 'HR-RS-90', kind: 'round-sling', ratings: { vertical: 1e300, choker: null, basket: null } })));
+    expect(huge.status).toBe(400);
+    expect((await huge.json()).issues[0]).toEqual({ path: 'ratings.vertical', message: 'Vertical rating must be more than 0 and at most 10,000,000 kg' });
+    const long = await create(new Request(url, json('POST', { tag: 'HR-RS-91', kind: 'round-sling', size: 'green', length: 1e6 })));
+    expect(long.status).toBe(400);
+    expect((await long.json()).issues[0]).toEqual({ path: 'length', message: 'Length must be more than 0 and at most 200 m' });
+  });
+});

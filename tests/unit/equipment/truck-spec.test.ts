@@ -148,3 +148,22 @@ describe('truck spec: load chart', () => {
       'Chart supports must be outriggers (full, intermediate or retracted) or on tyres',
     ));
 });
+
+// Source: issue 11 — a profile with 1e300 figures saved; the ranges are the lift engine's own (lib/lift/range.ts).
+describe('truck spec: physical ranges', () => {
+  it('refuses masses past 10,000 t with the range named', () => {
+    expectIssue((s) => (s.carrier.mass = 1e300), 'carrier.mass', 'Carrier mass must be at most 10,000,000 kg');
+    expectIssue((s) => (s.upper.counterweight.mass = 2e7), 'upper.counterweight.mass', /Counterweight mass must be at most 10,000,000 kg/);
+    expectIssue((s) => (s.outriggers.legs[0]!.padRating = 1e12), 'outriggers.legs.0.padRating', /Pad rating must be at most 10,000,000 kg/);
+    expectIssue((s) => (s.loadChart.rated[0]![0] = 1e300), 'loadChart.rated.0.0', /Rated load must be at most 10,000,000 kg/);
+  });
+  it('refuses lengths past 200 m and positions past 100 m from the truck', () => {
+    expectIssue((s) => (s.carrier.length = 1e300), 'carrier.length', /Overall length must be at most 200 m/);
+    expectIssue((s) => (s.boom.stages[0]!.length = 250), 'boom.stages.0.length', /Stage length must be at most 200 m/);
+    expectIssue((s) => (s.outriggers.legs[0]!.mount.x = 1e6), 'outriggers.legs.0.mount.x', 'Leg mount x must be from -100 to 100 m');
+    expectIssue((s) => (s.upper.slewAxis.y = -101), 'upper.slewAxis.y', 'Slew axis y must be from -100 to 100 m');
+  });
+  it('accepts the largest figures in range', () => {
+    expect(issuesOf((s) => (s.upper.counterweight.mass = 9_999_999))).toEqual([]);
+  });
+});

@@ -14,6 +14,8 @@ import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
 import { AuditTimeline } from '@/components/scenes/audit-timeline';
+import { SceneActions } from '@/components/scenes/scene-actions';
+import { sceneActionsFor } from '@/lib/scene/actions';
 import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
 import { mayEditScene } from '@/lib/auth/permissions';
 
@@ -37,6 +39,8 @@ export default async function SceneDetailsPage({ params }: Props) {
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
   const canRename = mayEditScene(user, scene);
+  const actionsNote = (rename: boolean, owner: string) =>
+    rename ? 'Rename, copy, archive or delete this scene.' : sceneActionsFor(user, scene).length ? `Only the owner, ${owner}, can rename this scene.` : `Only the owner, ${owner}, or an admin can change this scene.`;
 
   return (
     <>
@@ -86,9 +90,10 @@ export default async function SceneDetailsPage({ params }: Props) {
           </CardBody>
         </Card>
         <Card>
-          <CardHeader title="Rename" description={canRename ? undefined : `Only the owner, ${scene.ownerName}, can rename this scene.`} />
-          <CardBody>
-            {canRename ? <RenameSceneForm sceneId={scene.id} title={scene.title} revision={scene.revision} /> : <p className="text-body text-ink-muted">You can read this scene.</p>}
+          <CardHeader title="Actions" description={actionsNote(canRename, scene.ownerName)} />
+          <CardBody className="flex flex-col gap-5">
+            {canRename && <RenameSceneForm sceneId={scene.id} title={scene.title} revision={scene.revision} />}
+            <SceneActions user={{ id: user.id, role: user.role }} scene={{ id: scene.id, title: scene.title, status: scene.status, ownerId: scene.ownerId, inTrainingSet: scene.inTrainingSet }} layout="bar" afterDelete="list" />
           </CardBody>
         </Card>
         <Card>
