@@ -13,6 +13,7 @@ import type { PlanFigures } from './figures';
 /** A comment as GET /api/scenes/{id}/comments answers it. */
 export interface CommentView {
   id: number;
+  sceneId: number;
   parentId: number | null;
   revision: number;
   authorId: number;
