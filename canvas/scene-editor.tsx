@@ -10,6 +10,7 @@ import { TopBar } from './panels/top-bar';
 import { SidePanel } from './panels/side-panel';
 import { SlewScrubber } from './panels/slew-scrubber';
 import { ScaleBar } from './view/scale-bar';
+import { ReachEnvelopeToggle } from './overlays/reach-envelope-toggle';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
 import { attachLiveAnalysis } from './analysis/live-analysis';
@@ -83,6 +84,7 @@ export function SceneEditor(props: SceneEditorProps) {
             <div className="relative min-h-0 flex-1">
               <PlanView />
               <ScaleBar />
+              <ReachEnvelopeToggle />
               {props.review && <EditorReview sceneId={props.scene.id} review={props.review} />}
             </div>
             <SlewScrubber />
