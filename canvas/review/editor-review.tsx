@@ -75,7 +75,8 @@ export function EditorReview({ sceneId, review }: { sceneId: number; review: Edi
         draft={draft?.pick ? (draft.attach === 'object' && draft.pick.objectId ? { objectId: draft.pick.objectId } : draft.pick.point) : null}
         showResolved={false}
       />
-      <div className="pointer-events-none absolute inset-x-2 top-2 z-20 flex justify-center">
+      {/* Right of the reach-envelope switch (top left) and left of the north arrow (top right). */}
+      <div className="pointer-events-none absolute left-2 right-14 top-14 z-20 flex justify-end md:left-[18rem] md:top-2">
         <div className="pointer-events-auto flex max-w-full flex-wrap items-center gap-2 rounded-plate border-2 border-ink bg-paper-raised/95 px-2 py-1 shadow" data-testid="review-strip">
           <StatusPill status={s} />
           {message && <span className="text-body">{message}</span>}
