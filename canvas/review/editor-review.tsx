@@ -37,7 +37,7 @@ export function EditorReview({ sceneId, review }: { sceneId: number; review: Edi
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const unsaved = useUnsaved();
-  const names = useMemo(() => ({ ...Object.fromEntries(objects.map((o) => [o.id, o.label || o.id])), ...(analysisNames ?? {}) }), [objects, analysisNames]);
+  const names = useMemo(() => ({ ...Object.fromEntries(objects.flatMap((o) => (o.label ? [[o.id, o.label]] : []))), ...(analysisNames ?? {}) }), [objects, analysisNames]);
   const open = comments.threads.filter((t) => !t.resolved).length;
   const s = review.status;
   const last = review.lastDecision;

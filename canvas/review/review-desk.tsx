@@ -48,7 +48,7 @@ export function ReviewDesk(p: ReviewDeskProps) {
   const [selected, setSelected] = useState<number | null>(null);
   const analysis = useStore(ctx.store, (s) => s.analysis);
   const slew = useStore(ctx.store, (s) => s.scrubSlew);
-  const names = useMemo(() => ({ ...Object.fromEntries(p.document.objects.map((o) => [o.id, o.label || o.id])), ...(analysis?.lift.ok ? analysis.lift.names : {}) }), [analysis, p.document]);
+  const names = useMemo(() => ({ ...Object.fromEntries(p.document.objects.flatMap((o) => (o.label ? [[o.id, o.label]] : []))), ...(analysis?.lift.ok ? analysis.lift.names : {}) }), [analysis, p.document]);
   const changes = useMemo(() => (p.previous ? { sketch: sceneChanges(p.previous.document, p.document), figures: p.figures ? figureChanges(p.previous.figures, p.figures) : [] } : null), [p.previous, p.document, p.figures]);
   const open = comments.threads.filter((t) => !t.resolved).length;
   const mayDecide = p.decisionRefusal === null && p.submission !== null;
