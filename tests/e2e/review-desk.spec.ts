@@ -113,7 +113,8 @@ test('operator and supervisor take a plan through review to approval and a new r
   await operator.reload();
   await expect(operator.getByTestId('review-strip')).toContainText('Approved');
   await expect(operator.getByText('Read-only: you can look and scrub the slew, not edit')).toBeVisible();
-  const frozen = await operator.request.put(`/api/scenes/${id}`, { data: { revision: 1, title: 'x' } });
+  const current = ((await (await operator.request.get(`/api/scenes/${id}`)).json()) as { revision: number }).revision;
+  const frozen = await operator.request.put(`/api/scenes/${id}`, { data: { revision: current, title: 'Renamed while approved' } });
   expect(frozen.status()).toBe(409);
   await operator.getByTestId('new-revision').click();
   await expect(operator.getByTestId('review-strip')).toContainText('Draft');
