@@ -19,6 +19,8 @@ import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { EditorStore } from './store/editor-store';
+import type { EditorReviewData } from '@/lib/review/page-data';
+import { EditorReview } from './review/editor-review';
 
 export interface SceneEditorProps {
   scene: { id: number; title: string; status: string; revision: number; ownerName: string; updatedAt: string };
@@ -27,6 +29,8 @@ export interface SceneEditorProps {
   readOnly: boolean;
   units: UnitSystem;
   user: { name: string; role: string };
+  /** The review desk's status, comments and actions (canvas/review). */
+  review?: EditorReviewData;
   /** Lets the page's other parts (saving, export) reach the store. */
   onStore?: (store: EditorStore) => void;
 }
@@ -83,6 +87,7 @@ export function SceneEditor(props: SceneEditorProps) {
               <UsableAreaLayer />
               <ScaleBar />
               <ReachEnvelopeToggle />
+              {props.review && <EditorReview sceneId={props.scene.id} review={props.review} />}
             </div>
             <SlewScrubber />
           </div>
