@@ -2,14 +2,15 @@
 import { useState } from 'react';
 import { Inspector } from './inspector/inspector';
 import { ResultsPanel } from './results/results-panel';
+import { AdvisorPanel } from '../advisor/advisor-panel';
 
 /** Exact values and results beside the plan; on narrow screens it slides over the plan when asked for. */
 export function SidePanel() {
-  const [tab, setTab] = useState<'inspector' | 'results'>('inspector');
+  const [tab, setTab] = useState<'inspector' | 'results' | 'advisor'>('inspector');
   const [open, setOpen] = useState(false);
   const tabs = (
     <div role="tablist" className="flex shrink-0 border-b border-paper-line">
-      {(['inspector', 'results'] as const).map((t) => (
+      {(['inspector', 'results', 'advisor'] as const).map((t) => (
         <button
           key={t}
           role="tab"
@@ -19,7 +20,7 @@ export function SidePanel() {
           onClick={() => setTab(t)}
           className={`min-h-11 flex-1 text-sm font-semibold ${tab === t ? 'border-b-4 border-signal text-ink' : 'text-ink-muted hover:bg-paper-sunk'}`}
         >
-          {t === 'inspector' ? 'Details' : 'Results'}
+          {t === 'inspector' ? 'Details' : t === 'results' ? 'Results' : 'Placement'}
         </button>
       ))}
       <button type="button" onClick={() => setOpen(false)} className="min-h-11 px-3 text-sm text-teal lg:hidden" aria-label="Hide the panel">
@@ -42,7 +43,7 @@ export function SidePanel() {
         className={`${open ? 'flex' : 'hidden'} absolute inset-y-0 right-0 z-30 w-[min(380px,92vw)] flex-col border-l border-paper-line bg-paper-raised shadow-xl lg:static lg:flex lg:w-[360px] lg:shadow-none xl:w-[400px]`}
       >
         {tabs}
-        <div className="min-h-0 flex-1 overflow-y-auto p-3">{tab === 'inspector' ? <Inspector /> : <ResultsPanel />}</div>
+        <div className="min-h-0 flex-1 overflow-y-auto p-3">{tab === 'inspector' ? <Inspector /> : tab === 'results' ? <ResultsPanel /> : <AdvisorPanel />}</div>
       </aside>
     </>
   );

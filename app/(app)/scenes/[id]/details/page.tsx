@@ -13,9 +13,9 @@ import { Badge, StatusPill } from '@/components/ui/badge';
 import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
+import { AuditTimeline } from '@/components/scenes/audit-timeline';
 import { SceneActions } from '@/components/scenes/scene-actions';
 import { sceneActionsFor } from '@/lib/scene/actions';
-import { describeAudit } from '@/components/scenes/audit-words';
 import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
 import { mayEditScene } from '@/lib/auth/permissions';
 
@@ -109,27 +109,7 @@ export default async function SceneDetailsPage({ params }: Props) {
             ))}
           </ol>
         </Card>
-        <Card>
-          <CardHeader title="Activity" description="Who did what to this scene" />
-          {audit.length === 0 ? (
-            <CardBody>
-              <p className="text-body text-ink-muted">No activity recorded yet.</p>
-            </CardBody>
-          ) : (
-            <ol className="divide-y divide-paper-line" data-testid="scene-audit">
-              {audit.map((a) => (
-                <li key={a.id} className="px-5 py-3">
-                  <p className="font-medium">
-                    <span className="font-bold">{a.user_name}</span> — {describeAudit(a.action, a.detail)}
-                  </p>
-                  <p className="text-caption text-ink-muted">
-                    <LocalTime iso={a.created_at} />
-                  </p>
-                </li>
-              ))}
-            </ol>
-          )}
-        </Card>
+        <AuditTimeline audit={audit} />
       </div>
     </>
   );
