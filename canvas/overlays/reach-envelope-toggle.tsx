@@ -32,7 +32,7 @@ export function ReachEnvelopeToggle() {
   const units = useEditorState((s) => s.units);
   const uncertain = useEditorState((s) => (s.analysis?.lift.ok ? (s.analysis.lift.input.weightUncertainty ?? 0) > 0 : false));
   return (
-    <div className="absolute left-3 top-3 z-10 max-w-[17rem] text-xs" data-testid="reach-envelope">
+    <div className="absolute left-3 top-3 z-10 max-w-[16rem] text-xs" data-testid="reach-envelope">
       <button
         type="button"
         aria-pressed={on}
@@ -43,27 +43,27 @@ export function ReachEnvelopeToggle() {
         {on ? 'Hide' : 'Show'} where the load can be held
       </button>
       {on && (
-        <div className="mt-1.5 space-y-1 rounded-md border border-ink/20 bg-paper-raised/95 p-2 shadow-sm" data-testid="reach-envelope-key">
-          {!grid || !shapes ? (
-            <p>{busy ? 'Working out the envelope…' : 'Place the truck and the load to see where the load can be held.'}</p>
-          ) : (
-            <>
-              <p className="font-semibold">
-                Load held within the plan’s tipping and chart limits, slewed there from the pick{uncertain ? `, at the upper weight ${formatMass(grid.loadMass, units)}` : ''}; boom at its planned length, raised or lowered.
-              </p>
-              <p className="flex items-center gap-1.5"><Swatch {...ENVELOPE_STYLE.ample} /> under 60 % of the limit <Swatch {...ENVELOPE_STYLE.fair} /> 60–90 %</p>
-              <p className="flex items-center gap-1.5"><Swatch {...ENVELOPE_STYLE.near} /> within 10 % of a limit</p>
-              <p className="flex items-center gap-1.5"><LineKey stroke={ENVELOPE_STYLE.tipping.stroke} dash={ENVELOPE_STYLE.tipping.dash} /> edge set by tipping</p>
-              <p className="flex items-center gap-1.5"><LineKey stroke={ENVELOPE_STYLE.chart.stroke} dash={ENVELOPE_STYLE.chart.dash} /> edge set by the load chart</p>
-              <p className="flex items-center gap-1.5"><LineKey stroke={ENVELOPE_STYLE.reach.stroke} dash={ENVELOPE_STYLE.reach.dash} /> edge of the boom’s reach</p>
-              {shapes.cutBy.length > 0 && (
-                <p className="flex items-center gap-1.5" data-testid="reach-envelope-cut"><Swatch fill={ENVELOPE_STYLE.cut.fill} alpha={1} hatch /> load meets {shapes.cutBy.length > 4 ? `${shapes.cutBy.slice(0, 3).join(', ')} and ${shapes.cutBy.length - 3} more` : shapes.cutBy.join(', ')}</p>
-              )}
-              <p className="text-ink-muted">{CAUTION_LINES[0]}</p>
-              {ms !== null && <p className="text-ink-muted" data-testid="reach-envelope-ms">Worked out in {formatNumber(ms)} ms{where === 'worker' ? ' beside the editor' : ''}{busy ? '; updating…' : ''}.</p>}
-            </>
-          )}
-        </div>
+        <details open className="mt-1.5 rounded-md border border-ink/20 bg-paper-raised/95 p-2 shadow-sm" data-testid="reach-envelope-key">
+          <summary className="cursor-pointer font-semibold">Key</summary>
+          <div className="mt-1 space-y-1">
+            {!grid || !shapes ? (
+              <p>{busy ? 'Working out the envelope…' : 'Place the truck and the load to see where the load can be held.'}</p>
+            ) : (
+              <>
+                <p>
+                  Within the plan’s tipping and chart limits, slewed there from the pick{uncertain ? ` at the upper weight, ${formatMass(grid.loadMass, units)}` : ''}; boom raised or lowered at its length.
+                </p>
+                <p className="flex flex-wrap items-center gap-1.5"><Swatch {...ENVELOPE_STYLE.ample} /> under 60 % <Swatch {...ENVELOPE_STYLE.fair} /> 60–90 % <Swatch {...ENVELOPE_STYLE.near} /> within 10 % of a limit</p>
+                <p className="flex items-center gap-1.5"><LineKey stroke={ENVELOPE_STYLE.tipping.stroke} dash={ENVELOPE_STYLE.tipping.dash} /> tipping <LineKey stroke={ENVELOPE_STYLE.chart.stroke} dash={ENVELOPE_STYLE.chart.dash} /> load chart <LineKey stroke={ENVELOPE_STYLE.reach.stroke} dash={ENVELOPE_STYLE.reach.dash} /> reach</p>
+                {shapes.cutBy.length > 0 && (
+                  <p className="flex items-center gap-1.5" data-testid="reach-envelope-cut"><Swatch fill={ENVELOPE_STYLE.cut.fill} alpha={1} hatch /> load meets {shapes.cutBy.length > 4 ? `${shapes.cutBy.slice(0, 3).join(', ')} and ${shapes.cutBy.length - 3} more` : shapes.cutBy.join(', ')}</p>
+                )}
+                <p className="text-ink-muted">{CAUTION_LINES[0]}</p>
+                {ms !== null && <p className="text-ink-muted" data-testid="reach-envelope-ms">Worked out in {formatNumber(ms)} ms{where === 'worker' ? ' beside the editor' : ''}{busy ? '; updating…' : ''}.</p>}
+              </>
+            )}
+          </div>
+        </details>
       )}
     </div>
   );
