@@ -5,6 +5,8 @@ import path from 'node:path';
 // Workers inherit the environment, so the port chosen here once is the one every worker uses.
 process.env.E2E_PORT ??= execFileSync('node', ['scripts/free-port.mjs']).toString().trim();
 const port = process.env.E2E_PORT;
+// The fake SMTP server's port, chosen the same way; the review desk's journey reads the mail it keeps.
+process.env.E2E_SMTP_PORT ??= execFileSync('node', ['scripts/free-port.mjs']).toString().trim();
 const baseURL = `http://127.0.0.1:${port}`;
 const dataDir = path.join(process.cwd(), 'data', 'e2e');
 
@@ -40,6 +42,8 @@ export default defineConfig({
       E2E_PORT: port,
       DATABASE_FILE: path.join(dataDir, 'e2e.db'),
       UPLOAD_DIR: path.join(dataDir, 'uploads'),
+      FAKE_SMTP_PORT: process.env.E2E_SMTP_PORT,
+      MAIL_DIR: path.join(dataDir, 'mail'),
       NEXTAUTH_URL: baseURL,
       NEXTAUTH_SECRET: 'e2e-secret-not-for-production',
     },

@@ -10,6 +10,8 @@ import { TopBar } from './panels/top-bar';
 import { SidePanel } from './panels/side-panel';
 import { SlewScrubber } from './panels/slew-scrubber';
 import { ScaleBar } from './view/scale-bar';
+import { UsableAreaLayer } from './advisor/usable-area-layer';
+import { ReachEnvelopeToggle } from './overlays/reach-envelope-toggle';
 import { HelpSheet } from './panels/help-sheet';
 import { fitToScene } from './editor/actions';
 import { attachLiveAnalysis } from './analysis/live-analysis';
@@ -17,6 +19,8 @@ import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
 import type { EditorStore } from './store/editor-store';
+import type { EditorReviewData } from '@/lib/review/page-data';
+import { EditorReview } from './review/editor-review';
 
 export interface SceneEditorProps {
   scene: { id: number; title: string; status: string; revision: number; ownerName: string; updatedAt: string };
@@ -25,6 +29,8 @@ export interface SceneEditorProps {
   readOnly: boolean;
   units: UnitSystem;
   user: { name: string; role: string };
+  /** The review desk's status, comments and actions (canvas/review). */
+  review?: EditorReviewData;
   /** Lets the page's other parts (saving, export) reach the store. */
   onStore?: (store: EditorStore) => void;
 }
@@ -78,7 +84,10 @@ export function SceneEditor(props: SceneEditorProps) {
           <div className="relative flex min-w-0 flex-1 flex-col">
             <div className="relative min-h-0 flex-1">
               <PlanView />
+              <UsableAreaLayer />
               <ScaleBar />
+              <ReachEnvelopeToggle />
+              {props.review && <EditorReview sceneId={props.scene.id} review={props.review} />}
             </div>
             <SlewScrubber />
           </div>

@@ -1,7 +1,7 @@
 'use client';
 
 import { useSyncExternalStore } from 'react';
-import { formatWhen } from '@/components/scenes/format';
+import { formatDay, formatWhen } from '@/components/scenes/format';
 
 const noSubscription = () => () => {};
 
@@ -15,6 +15,16 @@ export function LocalTime({ iso }: { iso: string }) {
   return (
     <time dateTime={iso} className="whitespace-nowrap tabular-nums">
       {local ?? utc}
+    </time>
+  );
+}
+
+/** A calendar date (YYYY-MM-DD) in the viewer's locale; the server renders the ISO date, the browser swaps it. */
+export function LocalDay({ ymd }: { ymd: string }) {
+  const local = useSyncExternalStore(noSubscription, () => formatDay(ymd), () => null);
+  return (
+    <time dateTime={ymd} className="whitespace-nowrap tabular-nums">
+      {local ?? ymd}
     </time>
   );
 }

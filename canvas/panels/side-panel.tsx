@@ -5,17 +5,18 @@ import { ResultsPanel } from './results/results-panel';
 import { CautionLine } from './caution-line';
 import { DRAWER_SNAPS, DrawerGrip } from './drawer-grip';
 import { useEditorState } from '../editor-context';
+import { AdvisorPanel } from '../advisor/advisor-panel';
 
 /** Exact values and results beside the plan; on narrow screens it slides over the plan when asked for. */
 export function SidePanel() {
-  const [tab, setTab] = useState<'inspector' | 'results'>('inspector');
+  const [tab, setTab] = useState<'inspector' | 'results' | 'advisor'>('inspector');
   const [open, setOpen] = useState(false);
   // Over the plan (below lg): a third of the editor's width until the grip moves it.
   const [width, setWidth] = useState<number | string>(DRAWER_SNAPS[0]);
   const selected = useEditorState((s) => s.selection.join(','));
   const tabs = (
     <div role="tablist" className="flex shrink-0 border-b border-paper-line">
-      {(['inspector', 'results'] as const).map((t) => (
+      {(['inspector', 'results', 'advisor'] as const).map((t) => (
         <button
           key={t}
           role="tab"
@@ -25,7 +26,7 @@ export function SidePanel() {
           onClick={() => setTab(t)}
           className={`min-h-11 flex-1 text-sm font-semibold ${tab === t ? 'border-b-4 border-signal text-ink' : 'text-ink-muted hover:bg-paper-sunk'}`}
         >
-          {t === 'inspector' ? 'Details' : 'Results'}
+          {t === 'inspector' ? 'Details' : t === 'results' ? 'Results' : 'Placement'}
         </button>
       ))}
       <button type="button" onClick={() => setOpen(false)} className="min-h-11 px-3 text-sm text-teal lg:hidden" aria-label="Hide the panel">
@@ -52,8 +53,8 @@ export function SidePanel() {
         <DrawerGrip share={width} onResize={setWidth} />
         {tabs}
         {/* Keyed on the selection so the details of a newly selected object open at the top. */}
-        <div key={tab === 'inspector' ? `i:${selected}` : 'results'} className="min-h-0 flex-1 overflow-y-auto p-3">
-          {tab === 'inspector' ? <Inspector /> : <ResultsPanel />}
+        <div key={tab === 'inspector' ? `i:${selected}` : tab} className="min-h-0 flex-1 overflow-y-auto p-3">
+          {tab === 'inspector' ? <Inspector /> : tab === 'results' ? <ResultsPanel /> : <AdvisorPanel />}
         </div>
         {tab === 'inspector' && <CautionLine className="shrink-0 border-t border-paper-line bg-signal-light px-3 py-1.5" testId="details-caution" />}
       </aside>

@@ -8,6 +8,7 @@ import { footprintsOf } from '@/lib/scene/geometry/footprints';
 import { PAL } from './palette';
 import { useDisplaySlew } from './use-display-slew';
 import { AnalysisOverlays } from '../overlays/analysis-overlays';
+import { ReachEnvelopeOverlay } from '../overlays/reach-envelope-overlay';
 import type { LoadObject, TruckObject } from '@/lib/scene/objects';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
@@ -30,6 +31,7 @@ export function LiveLayer() {
   const handles = editor.handles();
   return (
     <>
+      <ReachEnvelopeOverlay />
       <AnalysisOverlays />
       {doc.objects
         .filter((o) => selection.includes(o.id))

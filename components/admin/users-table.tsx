@@ -49,7 +49,7 @@ function makeColumns(change: (c: Change) => void, busyId: number | null) {
         <label className="flex items-center gap-2">
           <span className="sr-only">Role of {c.row.original.name}</span>
           <select
-            className={cx(controlClasses(false), 'min-h-touch w-[9.5rem] appearance-none bg-[length:16px] bg-[right_0.6rem_center] bg-no-repeat pr-8', CHEVRON)}
+            className={cx(controlClasses(false), 'min-h-touch w-[9.5rem] pr-8')}
             value={c.getValue()}
             disabled={busyId === c.row.original.id}
             onChange={(e) => change({ id: c.row.original.id, role: e.target.value as Role })}
@@ -82,9 +82,6 @@ function makeColumns(change: (c: Change) => void, busyId: number | null) {
     col.accessor('created_at', { header: 'Added', cell: (c) => <LocalTime iso={c.getValue()} />, meta: { className: 'hidden xl:table-cell' } }),
   ];
 }
-
-const CHEVRON =
-  "bg-[url(\"data:image/svg+xml,%3Csvg xmlns='http://www.w3.org/2000/svg' viewBox='0 0 16 16'%3E%3Cpath d='M3 6l5 5 5-5' fill='none' stroke='%2315202B' stroke-width='2.2' stroke-linecap='round'/%3E%3C/svg%3E\")]";
 
 /** The organisation's users; a short list, so sorting happens in the browser. */
 export function UsersTable() {

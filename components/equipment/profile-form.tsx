@@ -3,6 +3,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 import { FormProvider, useForm, useWatch, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -46,6 +47,7 @@ export function ProfileForm({ initial, units, readOnly, profile }: Props) {
   const [serverError, setServerError] = useState<string | null>(null);
   const [serverIssues, setServerIssues] = useState<{ path: string; message: string }[]>([]);
   const [saved, setSaved] = useState<string | null>(null);
+  useLeaveGuard(!readOnly && methods.formState.isDirty && !methods.formState.isSubmitting);
 
   const onSubmit = methods.handleSubmit(
     async (values) => {
@@ -55,10 +57,12 @@ export function ProfileForm({ initial, units, readOnly, profile }: Props) {
         if (profile) {
           const p = await fetchJson<{ version: number }>(`/api/equipment/${profile.id}`, { method: 'PUT', body: JSON.stringify({ ...values, baseVersion: profile.version }) });
           setSaved(`Saved as version ${p.version}.`);
+          methods.reset(values);
           // Fresh server data, and off ?created: the page's "created" notice is about version 1, not this save.
           router.replace(`/equipment/${profile.id}`);
         } else {
           const p = await fetchJson<{ id: number }>('/api/equipment', { method: 'POST', body: JSON.stringify(values) });
+          methods.reset(values);
           router.push(`/equipment/${p.id}?created=1`);
         }
       } catch (e) {

@@ -28,11 +28,15 @@ export interface PlanMeta {
 }
 
 export interface SignOffDecision {
-  /** "Approved", "Reviewed", "Returned for changes": the review workflow's own words. */
+  /** "Approved", "Returned for changes": the review workflow's own words. */
   action: string;
   by: string;
+  /** The decider's role ("supervisor", "admin"). */
+  role: string;
   at: string;
   conditions: string;
+  /** The written reason for approving beyond the plan's own stricter limits ('' when none was needed). */
+  reason: string;
 }
 
 export interface RiggingRow {

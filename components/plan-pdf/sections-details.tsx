@@ -65,18 +65,23 @@ function SignLine({ role, name, extra }: { role: string; name: string; extra?: s
 
 export function SignOffSection({ d }: { d: PlanData }) {
   const p = d.details.people;
+  // Not kept on one page: conditions and reasons may run long, and must wrap onto the next page.
   return (
-    <View wrap={false}>
+    <View>
       <Text style={s.h2} minPresenceAhead={120}>Sign-off</Text>
       <Text style={s.p}>
         Prepared by {d.meta.savedBy}, revision {d.meta.revision} saved {when(d.meta.savedAt)}.
       </Text>
       {d.signOff.length ? (
         d.signOff.map((o, i) => (
-          <Text key={i} style={s.p}>
-            {o.action} by {o.by}, {when(o.at)}
-            {o.conditions ? `. Conditions: ${o.conditions}` : '.'}
-          </Text>
+          <View key={i} style={{ marginBottom: 4 }}>
+            <Text style={s.p}>
+              {o.action} by {o.by}
+              {o.role ? ` (${o.role})` : ''}, {when(o.at)}.
+            </Text>
+            {o.conditions ? <Text style={s.p}>Conditions: {o.conditions}</Text> : null}
+            {o.reason ? <Text style={s.p}>Reason for approval beyond the plan’s own limits: {o.reason}</Text> : null}
+          </View>
         ))
       ) : (
         <>

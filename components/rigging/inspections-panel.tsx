@@ -1,5 +1,6 @@
 'use client';
 
+import { LocalDay } from '@/components/local-time';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
@@ -43,10 +44,10 @@ export function InspectionsPanel({ itemId, items, canRecord, today }: { itemId: 
         <ol className="divide-y divide-paper-line">
           {items.map((i) => (
             <li key={i.id} className="flex flex-wrap items-center gap-2 py-2 text-body">
-              <span className="tabular-nums font-semibold">{i.inspectedOn}</span>
+              <span className="font-semibold"><LocalDay ymd={i.inspectedOn} /></span>
               {i.result === 'pass' ? <Badge tone="within" glyph="check">Passed</Badge> : <Badge tone="over" glyph="cross">Failed</Badge>}
               <span>{i.inspectorName}</span>
-              {i.nextDue && <span className="text-ink-muted">next due {i.nextDue}</span>}
+              {i.nextDue && <span className="text-ink-muted">next due <LocalDay ymd={i.nextDue} /></span>}
               {i.notes && <span className="w-full text-ink-soft">{i.notes}</span>}
             </li>
           ))}

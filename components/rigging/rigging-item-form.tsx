@@ -3,6 +3,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { RIGGING_KINDS, RIGGING_STATUSES } from '@/lib/domain';
 import { Button } from '@/components/ui/button';
@@ -21,7 +22,7 @@ import { KIND_LABEL, STATUS_LABEL } from './labels';
 /** Add or edit a rigging item. Ratings come from a built-in table where one applies, unless entered by hand. */
 export function RiggingItemForm({ initial, id, units, readOnly }: { initial: RiggingItemInput; id?: number; units: UnitSystem; readOnly: boolean }) {
   const router = useRouter();
-  const { control, register, handleSubmit, setValue, setError, formState } = useForm<RiggingItemInput>({ defaultValues: initial, resolver: zodResolver(riggingItemSchema) as Resolver<RiggingItemInput> });
+  const { control, register, handleSubmit, setValue, setError, formState, reset } = useForm<RiggingItemInput>({ defaultValues: initial, resolver: zodResolver(riggingItemSchema) as Resolver<RiggingItemInput> });
   const kind = useWatch({ control, name: 'kind' });
   const size = useWatch({ control, name: 'size' }) ?? '';
   const std = standardRating(kind, size);
@@ -30,6 +31,7 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
   const r = initial.ratings;
   const [manual, setManual] = useState(!!id && !!r && r.vertical !== null && !(std && Math.abs((r.vertical ?? 0) - std.vertical) < 0.01));
   const [serverError, setServerError] = useState<string | null>(null);
+  useLeaveGuard(!readOnly && formState.isDirty && !formState.isSubmitting);
   const err = (p: string) => (formState.errors as Record<string, { message?: string } | undefined>)[p]?.message;
   const ratingErr = (formState.errors.ratings as { vertical?: { message?: string } } | undefined)?.vertical?.message;
 
@@ -38,6 +40,7 @@ export function RiggingItemForm({ initial, id, units, readOnly }: { initial: Rig
     const body = manual ? values : { ...values, ratings: { vertical: null, choker: null, basket: null } };
     try {
       const saved = await fetchJson<{ id: number }>(id ? `/api/rigging/${id}` : '/api/rigging', { method: id ? 'PUT' : 'POST', body: JSON.stringify(body) });
+      reset(values);
       router.push(`/rigging/${saved.id}?saved=1`);
       router.refresh();
     } catch (e) {

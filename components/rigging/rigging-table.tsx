@@ -1,5 +1,6 @@
 'use client';
 
+import { LocalDay } from '@/components/local-time';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import Link from 'next/link';
@@ -28,10 +29,10 @@ function StatusBadge({ status }: { status: RiggingItem['status'] }) {
 
 function DueBadge({ next, today }: { next: string | null; today: string }) {
   const s = dueState(next, today);
-  if (s === 'overdue') return <Badge tone="over" glyph="alert">Overdue {next}</Badge>;
-  if (s === 'due-soon') return <Badge tone="signal" glyph="clock">Due {next}</Badge>;
+  if (s === 'overdue') return <Badge tone="over" glyph="alert">Overdue <LocalDay ymd={next!} /></Badge>;
+  if (s === 'due-soon') return <Badge tone="signal" glyph="clock">Due <LocalDay ymd={next!} /></Badge>;
   if (s === 'none') return <span className="text-ink-muted">No date</span>;
-  return <span className="tabular-nums">{next}</span>;
+  return <LocalDay ymd={next!} />;
 }
 
 /** Rows that cannot be used as lifting rigging, each with its reason: the editor will not add them to a plan. */

@@ -3,6 +3,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useId, useState, type ComponentProps } from 'react';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 import { Controller, useFieldArray, useForm, type UseFormRegisterReturn } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FieldFrame, TextField, controlClasses } from '@/components/ui/field';
@@ -57,11 +58,12 @@ export function PlanDetailsForm({ sceneId, revision, details, units, canEdit }: 
   const [base, setBase] = useState(revision);
   const [outcome, setOutcome] = useState<Outcome>(null);
   const [saving, setSaving] = useState(false);
-  const { register, handleSubmit, control, formState } = useForm<PlanDetailsIn, unknown, PlanDetails>({ resolver: zodResolver(planDetailsSchema), defaultValues: details });
+  const { register, handleSubmit, control, formState, reset } = useForm<PlanDetailsIn, unknown, PlanDetails>({ resolver: zodResolver(planDetailsSchema), defaultValues: details });
   const hazards = useFieldArray({ control, name: 'hazards' });
   const checklist = useFieldArray({ control, name: 'checklist' });
   const e = formState.errors;
   const off = !canEdit;
+  useLeaveGuard(canEdit && formState.isDirty && !saving);
 
   const onSubmit = handleSubmit(async (v) => {
     setOutcome(null);
@@ -69,6 +71,7 @@ export function PlanDetailsForm({ sceneId, revision, details, units, canEdit }: 
     try {
       const saved = await fetchJson<{ revision: number }>(`/api/scenes/${sceneId}/details`, { method: 'PUT', body: JSON.stringify({ revision: base, details: v }) });
       setBase(saved.revision);
+      reset(v as PlanDetailsIn);
       setOutcome({ kind: 'saved', revision: saved.revision });
       router.refresh();
     } catch (err) {

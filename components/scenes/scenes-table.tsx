@@ -18,11 +18,20 @@ import { fetchJson } from '@/lib/client/fetch-json';
 import { formatWhen } from './format';
 import { Pager } from './pager';
 import { SceneActions } from './scene-actions';
+import { FigureValue, FiguresLine, bearingText, clearanceText, tippingText } from './plan-figure-text';
+import type { ListFigures } from '@/lib/scene/plan-figures';
+import type { UnitSystem } from '@/lib/units';
+import { Badge } from '@/components/ui/badge';
+import { CautionNote } from '@/components/caution-note';
 import type { Who } from '@/lib/auth/permissions';
 
-const col = createColumnHelper<SceneSummary>();
+/** A list row as GET /api/scenes answers it: the summary and the server's figures for its current revision. */
+export type ListedScene = SceneSummary & { figures: ListFigures };
+type ListPage = Omit<ScenePage, 'items'> & { items: ListedScene[] };
 
-const columnsFor = (user: Who) => [
+const col = createColumnHelper<ListedScene>();
+
+const columnsFor = (user: Who, units: UnitSystem) => [
   col.accessor('title', {
     header: 'Title',
     meta: { className: 'lg:w-[36%]' },
@@ -32,16 +41,48 @@ const columnsFor = (user: Who) => [
           {c.getValue()}
         </Link>
         {/* owner and revision columns drop out on a portrait tablet; keep the facts under the title */}
-        <p className="mt-0.5 text-caption text-ink-muted lg:hidden">
+        <p className="mt-0.5 text-caption text-ink-muted 2xl:hidden">
           {c.row.original.ownerName} · rev. {c.row.original.revision}
         </p>
         {c.row.original.location && <p className="mt-0.5 text-caption text-ink-muted">{c.row.original.location}</p>}
+        <p className="mt-0.5 text-caption text-ink-muted xl:hidden">
+          <FiguresLine figures={c.row.original.figures} units={units} />
+        </p>
+        {c.row.original.inTrainingSet && (
+          <p className="mt-1 lg:hidden">
+            <Badge tone="teal" glyph="check">Training set</Badge>
+          </p>
+        )}
       </div>
     ),
   }),
   col.accessor('status', { header: 'Status', cell: (c) => <StatusPill status={c.getValue()} /> }),
-  col.accessor('ownerName', { header: 'Owner', cell: (c) => <span className="whitespace-nowrap">{c.getValue()}</span>, meta: { className: 'hidden lg:table-cell' } }),
-  col.accessor('revision', { header: 'Rev.', cell: (c) => <span className="tabular-nums">{c.getValue()}</span>, meta: { className: 'hidden lg:table-cell' } }),
+  col.accessor('ownerName', { header: 'Owner', cell: (c) => <span className="whitespace-nowrap">{c.getValue()}</span>, meta: { className: 'hidden 2xl:table-cell' } }),
+  col.accessor('revision', { header: 'Rev.', cell: (c) => <span className="tabular-nums">{c.getValue()}</span>, meta: { className: 'hidden 2xl:table-cell' } }),
+  col.display({
+    id: 'tipping',
+    header: () => <span title="Worst % of tipping over the planned swing">Tipping</span>,
+    meta: { className: 'hidden xl:table-cell' },
+    cell: (c) => <FigureValue label="Tipping" value={tippingText(c.row.original.figures)} over={(c.row.original.figures.percentOfTipping ?? 0) > 100} />,
+  }),
+  col.display({
+    id: 'ground',
+    header: () => <span title="Highest pad ground pressure as % of the allowable">Ground</span>,
+    meta: { className: 'hidden xl:table-cell' },
+    cell: (c) => <FigureValue label="Ground pressure" value={bearingText(c.row.original.figures)} over={(c.row.original.figures.percentOfBearing ?? 0) > 100} />,
+  }),
+  col.display({
+    id: 'clearance',
+    header: () => <span title="Least clearance to a truck part or obstacle">Clearance</span>,
+    meta: { className: 'hidden xl:table-cell' },
+    cell: (c) => <FigureValue label="Clearance" value={clearanceText(c.row.original.figures, units)} over={(c.row.original.figures.leastClearance ?? 0) < 0} />,
+  }),
+  col.accessor('inTrainingSet', {
+    header: 'Training',
+    enableSorting: false,
+    meta: { className: 'hidden lg:table-cell' },
+    cell: (c) => (c.getValue() ? <Badge tone="teal" glyph="check">Training set</Badge> : <span className="sr-only">Not in the training set</span>),
+  }),
   col.accessor('updatedAt', { header: 'Last saved', cell: (c) => <span className="whitespace-nowrap text-ink-soft">{formatWhen(c.getValue())}</span> }),
   col.display({
     id: 'details',
@@ -79,14 +120,15 @@ const SORTS = ['updatedAt', 'title', 'status', 'ownerName', 'revision'];
  * The list's state lives in the URL (search, status, sort and the keyset cursor), so a link to page 3 of a
  * filtered list opens that same page for a colleague.
  */
-export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who }) {
-  const columns = useMemo(() => columnsFor(user), [user]);
+export function ScenesTable({ canCreate, user, units }: { canCreate: boolean; user: Who; units: UnitSystem }) {
+  const columns = useMemo(() => columnsFor(user, units), [user, units]);
   const router = useRouter();
   const pathname = usePathname();
   const search = useSearchParams();
   const [qInput, setQInput] = useState(search.get('q') ?? '');
   const q = useDebounced(qInput.trim(), 250);
   const status = (search.get('status') ?? '') as SceneStatus | '';
+  const training = search.get('training') === '1' || search.get('training') === '0' ? search.get('training')! : '';
   const sortId = SORTS.includes(search.get('sort') ?? '') ? search.get('sort')! : 'updatedAt';
   const desc = search.get('dir') !== 'asc';
   const sorting: SortingState = [{ id: sortId, desc }];
@@ -124,14 +166,15 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
     const sq = search.get('q');
     if (sq) p.set('q', sq);
     if (status) p.set('status', status);
+    if (training) p.set('training', training);
     if (after) p.set('after', after);
     else if (before) p.set('before', before);
     return p.toString();
-  }, [search, sortId, desc, status, after, before]);
+  }, [search, sortId, desc, status, training, after, before]);
 
   const query = useQuery({
     queryKey: ['scenes', params],
-    queryFn: () => fetchJson<ScenePage>(`/api/scenes?${params}`),
+    queryFn: () => fetchJson<ListPage>(`/api/scenes?${params}`),
     placeholderData: keepPreviousData,
   });
 
@@ -150,7 +193,7 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
     rowCount: data?.total ?? 0,
   });
 
-  const filtered = Boolean(search.get('q') || status);
+  const filtered = Boolean(search.get('q') || status || training);
   const empty = filtered ? (
     <EmptyState
       title="No scenes match these filters"
@@ -159,7 +202,7 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
           variant="secondary"
           onClick={() => {
             setQInput('');
-            navigate({ q: null, status: null });
+            navigate({ q: null, status: null, training: null });
           }}
         >
           Clear filters
@@ -176,7 +219,7 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
 
   return (
     <div className="flex flex-col gap-4">
-      <div className="grid gap-4 sm:grid-cols-[1fr_15rem]" role="search" aria-label="Filter scenes">
+      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[1fr_13rem_13rem]" role="search" aria-label="Filter scenes">
         <TextField label="Search title, location and notes" type="search" placeholder="e.g. coil, Route 9" value={qInput} onChange={(e) => setQInput(e.target.value)} />
         <SelectField label="Status" value={status} onChange={(e) => setStatus(e.target.value as SceneStatus | '')}>
           <option value="">Any status</option>
@@ -185,6 +228,11 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
               {statusLabel(s)}
             </option>
           ))}
+        </SelectField>
+        <SelectField label="Training set" value={training} onChange={(e) => navigate({ training: e.target.value })}>
+          <option value="">All scenes</option>
+          <option value="1">In the training set</option>
+          <option value="0">Not in the training set</option>
         </SelectField>
       </div>
       {query.isError && <Notice tone="error" title="Could not load scenes">{query.error.message}</Notice>}
@@ -199,6 +247,14 @@ export function ScenesTable({ canCreate, user }: { canCreate: boolean; user: Who
           onFirst={after || before ? () => navigate({}) : undefined}
           busy={query.isFetching}
         />
+      )}
+      {data && data.total > 0 && (
+        <>
+          <p className="text-caption text-ink-muted">
+            Figures are the server’s analysis of each scene’s latest saved revision: the worst % of tipping over the swing, the highest pad ground pressure as % of the allowable, and the least clearance to a truck part or obstacle.
+          </p>
+          <CautionNote compact />
+        </>
       )}
     </div>
   );

@@ -3,6 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 import { Button } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import { Notice } from '@/components/ui/notice';
@@ -29,6 +30,7 @@ export function UnitsForm({ current }: { current: UnitSystem }) {
       router.refresh();
     },
   });
+  useLeaveGuard(choice !== (saved ?? current) && !save.isPending);
 
   return (
     <form

@@ -9,6 +9,8 @@ export interface NavItem {
   href: string;
   label: string;
   icon: IconName;
+  /** A count shown beside the label (plans awaiting review, unread notifications); hidden at 0. */
+  count?: { value: number; label: string };
 }
 
 /** Main navigation. Vertical in the laptop / landscape sidebar, a scrolling row of tabs on a portrait tablet. */
@@ -35,6 +37,11 @@ export function AppNav({ items, orientation }: { items: NavItem[]; orientation: 
                   <AppIcon name={item.icon} />
                 </span>
                 {item.label}
+                {item.count && item.count.value > 0 && (
+                  <span data-testid={`nav-count-${item.icon}`} aria-label={item.count.label} className="ml-auto min-w-6 rounded-full bg-signal px-1.5 text-center text-caption font-bold text-ink">
+                    {item.count.value}
+                  </span>
+                )}
               </Link>
             </li>
           );

@@ -15,13 +15,22 @@ const ROLE_LABEL: Record<CurrentUser['role'], string> = {
 
 export const roleLabel = (role: CurrentUser['role']) => ROLE_LABEL[role];
 
-export function navItemsFor(user: CurrentUser): NavItem[] {
-  const items: NavItem[] = [
-    { href: '/scenes', label: 'Scenes', icon: 'scenes' },
+/** Counts beside the navigation, worked out by the (app) layout on the server. */
+export interface NavCounts {
+  /** Plans awaiting review (supervisors and admins), null for other roles. */
+  review: number | null;
+  unread: number;
+}
+
+export function navItemsFor(user: CurrentUser, counts: NavCounts = { review: null, unread: 0 }): NavItem[] {
+  const items: NavItem[] = [{ href: '/scenes', label: 'Scenes', icon: 'scenes' }];
+  if (counts.review !== null) items.push({ href: '/review', label: 'Review', icon: 'review', count: { value: counts.review, label: `${counts.review} awaiting review` } });
+  items.push(
+    { href: '/notifications', label: 'Notifications', icon: 'bell', count: { value: counts.unread, label: `${counts.unread} unread` } },
     { href: '/equipment', label: 'Equipment', icon: 'equipment' },
     { href: '/rigging', label: 'Rigging', icon: 'rigging' },
     { href: '/lessons', label: 'Lessons', icon: 'scenes' },
-  ];
+  );
   if (may(user, 'manageUsers')) items.push({ href: '/admin/users', label: 'Users', icon: 'users' });
   items.push({ href: '/settings', label: 'Settings', icon: 'settings' });
   return items;
@@ -43,8 +52,8 @@ function WhoAmI({ user }: { user: CurrentUser }) {
  * The signed-in frame. At 1024 px and wider (laptop, landscape tablet) a dark sidebar; narrower (portrait
  * tablet) a dark top bar with the nav as tabs underneath. Dark chrome keeps the page itself the brightest thing.
  */
-export function AppShell({ user, children }: { user: CurrentUser; children: ReactNode }) {
-  const items = navItemsFor(user);
+export function AppShell({ user, counts, children }: { user: CurrentUser; counts?: NavCounts; children: ReactNode }) {
+  const items = navItemsFor(user, counts);
   return (
     <div className="min-h-screen lg:grid lg:grid-cols-[15.5rem_1fr] lg:bg-[linear-gradient(to_right,#15202B_15.5rem,transparent_15.5rem)]">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-signal focus:px-3 focus:py-2">

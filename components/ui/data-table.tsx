@@ -27,11 +27,13 @@ const sortGlyph = { asc: '▲', desc: '▼' } as const;
  * Renders a TanStack Table instance with Arcline styling: sticky header, 52 px rows (touch), sort buttons
  * in headers that announce their direction in words as well as an arrow.
  */
+// `relative` on the scroller: screen-reader-only (absolute) labels inside the table must stay inside it, or
+// they stretch the page sideways past a narrow viewport.
 export function DataTable<T>({ table, caption, empty, loading }: DataTableProps<T>) {
   const rows = table.getRowModel().rows;
   const columns = table.getVisibleLeafColumns().length;
   return (
-    <div className="overflow-x-auto rounded-plate border border-paper-line bg-paper-raised shadow-plate" aria-busy={loading || undefined}>
+    <div className="relative overflow-x-auto rounded-plate border border-paper-line bg-paper-raised shadow-plate" aria-busy={loading || undefined}>
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-sunk">

@@ -9,7 +9,7 @@ function Icon({ children, className = 'h-5 w-5' }: { children: ReactNode; classN
   );
 }
 
-export type IconName = 'scenes' | 'equipment' | 'rigging' | 'users' | 'settings' | 'check' | 'cross' | 'pencil' | 'clock' | 'box' | 'alert';
+export type IconName = 'scenes' | 'equipment' | 'rigging' | 'users' | 'settings' | 'check' | 'cross' | 'pencil' | 'clock' | 'box' | 'alert' | 'review' | 'bell';
 
 const paths: Record<IconName, ReactNode> = {
   // swing arc over a base
@@ -72,6 +72,20 @@ const paths: Record<IconName, ReactNode> = {
     <>
       <path d="M12 4l9 16H3z" />
       <path d="M12 10v4M12 17v.5" />
+    </>
+  ),
+  // a clipboard with a tick: a plan waiting for a decision
+  review: (
+    <>
+      <rect x="5" y="4.5" width="14" height="16" rx="1.5" />
+      <path d="M9.5 3h5v3h-5z" />
+      <path d="M8.5 13.5l2.5 2.5 4.5-5" />
+    </>
+  ),
+  bell: (
+    <>
+      <path d="M6 16V11a6 6 0 0 1 12 0v5l1.5 2h-15z" />
+      <path d="M10 20.5h4" />
     </>
   ),
 };

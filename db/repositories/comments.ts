@@ -1,25 +1,12 @@
 import type { Kysely } from 'kysely';
 import type { Database, SceneCommentRow } from '../schema';
+import type { CommentView } from '@/lib/review/page-data';
 
 type Db = Kysely<Database>;
 
-export type CommentAnchor = { x: number; y: number } | { objectId: string } | null;
-
-export interface SceneComment {
-  id: number;
-  sceneId: number;
-  parentId: number | null;
-  revision: number;
-  authorId: number;
-  authorName: string;
-  authorRole: string;
-  body: string;
-  anchor: CommentAnchor;
-  resolved: boolean;
-  resolvedAt: string | null;
-  resolvedByName: string | null;
-  createdAt: string;
-}
+/** A comment as the routes answer it; the shape is the review desk's (lib/review/page-data). */
+export type SceneComment = CommentView;
+export type CommentAnchor = CommentView['anchor'];
 
 type Row = SceneCommentRow & { author_name: string; author_role: string; resolved_by_name: string | null };
 

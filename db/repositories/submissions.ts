@@ -17,13 +17,14 @@ export interface Submission {
   state: SubmissionState;
   decidedBy: number | null;
   decidedByName: string | null;
+  decidedByRole: string | null;
   decidedAt: string | null;
   note: string | null;
   conditions: string | null;
   reason: string | null;
 }
 
-type Row = SceneSubmissionRow & { submitted_by_name: string; decided_by_name: string | null };
+type Row = SceneSubmissionRow & { submitted_by_name: string; decided_by_name: string | null; decided_by_role: string | null };
 
 function toSubmission(r: Row): Submission {
   return {
@@ -39,6 +40,7 @@ function toSubmission(r: Row): Submission {
     state: r.state,
     decidedBy: r.decided_by,
     decidedByName: r.decided_by_name,
+    decidedByRole: r.decided_by_role,
     decidedAt: r.decided_at,
     note: r.note,
     conditions: r.conditions,
@@ -52,7 +54,7 @@ function submissions(db: Db, organisationId: number) {
     .innerJoin('users as sb', 'sb.id', 's.submitted_by')
     .leftJoin('users as db', 'db.id', 's.decided_by')
     .selectAll('s')
-    .select(['sb.name as submitted_by_name', 'db.name as decided_by_name'])
+    .select(['sb.name as submitted_by_name', 'db.name as decided_by_name', 'db.role as decided_by_role'])
     .where('s.organisation_id', '=', organisationId);
 }
 
@@ -60,6 +62,20 @@ function submissions(db: Db, organisationId: number) {
 export async function listSubmissions(db: Db, organisationId: number, sceneId: number): Promise<Submission[]> {
   const rows = await submissions(db, organisationId).where('s.scene_id', '=', sceneId).orderBy('s.id', 'desc').execute();
   return rows.map((r) => toSubmission(r as Row));
+}
+
+/** The scene's approved revision: the newest approved submission's (undefined when none was approved). */
+export async function approvedRevision(db: Db, organisationId: number, sceneId: number): Promise<number | undefined> {
+  const r = await db
+    .selectFrom('scene_submissions')
+    .select('revision')
+    .where('organisation_id', '=', organisationId)
+    .where('scene_id', '=', sceneId)
+    .where('state', '=', 'approved')
+    .orderBy('revision', 'desc')
+    .limit(1)
+    .executeTakeFirst();
+  return r?.revision;
 }
 
 export async function pendingSubmission(db: Db, organisationId: number, sceneId: number): Promise<Submission | undefined> {
@@ -145,18 +161,28 @@ export interface QueueRow {
   submissionId: number;
 }
 
-/** The organisation's plans awaiting review, oldest submission first. */
-export async function listReviewQueue(db: Db, organisationId: number): Promise<QueueRow[]> {
-  const rows = await db
+/** Submissions awaiting a decision whose scene is still submitted: the review queue. */
+function awaitingReview(db: Db, organisationId: number) {
+  return db
     .selectFrom('scene_submissions as s')
     .innerJoin('scenes', 'scenes.id', 's.scene_id')
-    .innerJoin('users', 'users.id', 'scenes.owner_id')
-    .select(['scenes.id', 'scenes.title', 's.revision', 'scenes.owner_id', 'users.name as owner_name', 's.submitted_at', 'scenes.document', 's.figures', 's.id as submission_id'])
     .where('s.organisation_id', '=', organisationId)
     .where('scenes.organisation_id', '=', organisationId)
     .where('s.state', '=', 'pending')
     .where('scenes.status', '=', 'submitted')
-    .where('scenes.deleted_at', 'is', null)
+    .where('scenes.deleted_at', 'is', null);
+}
+
+export async function countReviewQueue(db: Db, organisationId: number): Promise<number> {
+  const r = await awaitingReview(db, organisationId).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+  return Number(r.n);
+}
+
+/** The organisation's plans awaiting review, oldest submission first. */
+export async function listReviewQueue(db: Db, organisationId: number): Promise<QueueRow[]> {
+  const rows = await awaitingReview(db, organisationId)
+    .innerJoin('users', 'users.id', 'scenes.owner_id')
+    .select(['scenes.id', 'scenes.title', 's.revision', 'scenes.owner_id', 'users.name as owner_name', 's.submitted_at', 'scenes.document', 's.figures', 's.id as submission_id'])
     .orderBy('s.submitted_at', 'asc')
     .orderBy('s.id', 'asc')
     .execute();

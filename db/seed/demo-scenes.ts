@@ -17,7 +17,7 @@ const roundSling = (tag: string, colour: string, legs: number, angle: number) =>
 const base = { rotation: 0, locked: false, label: '' };
 
 export const coilTransfer: SceneDocumentIn = {
-  version: 2,
+  version: 3,
   objects: [
     { ...base, id: 'lane', kind: 'obstacle', obstacleKind: 'traffic-lane', x: 0, y: 15, shape: { kind: 'rect', length: 70, width: 3.7 }, height: 4.3, label: 'Route 9 westbound lane' },
     { ...base, id: 'trailer-a', kind: 'trailer', x: -2.5, y: -6.2, length: 14.6, width: 2.6, deckHeight: 1.5, label: 'Disabled flatbed (coil on it)' },
@@ -63,7 +63,7 @@ export const coilTransfer: SceneDocumentIn = {
 };
 
 export const reefer: SceneDocumentIn = {
-  version: 2,
+  version: 3,
   objects: [
     { ...base, id: 'ramp-lane', kind: 'obstacle', obstacleKind: 'traffic-lane', x: 4, y: 9, rotation: 20, shape: { kind: 'rect', length: 60, width: 3.7 }, height: 4.3, label: 'On-ramp lane (closed)' },
     { ...base, id: 'guardrail', kind: 'obstacle', obstacleKind: 'structure', x: -6, y: -3, rotation: 20, shape: { kind: 'rect', length: 30, width: 0.4 }, height: 0.8, label: 'Guardrail' },
@@ -109,7 +109,7 @@ export const reefer: SceneDocumentIn = {
 };
 
 const embankment: SceneDocumentIn = {
-  version: 2,
+  version: 3,
   objects: [
     { ...base, id: 'road', kind: 'obstacle', obstacleKind: 'traffic-lane', x: 0, y: 6, shape: { kind: 'rect', length: 60, width: 3.6 }, height: 4.3, label: 'Quarry Road eastbound' },
     { ...base, id: 'culvert', kind: 'obstacle', obstacleKind: 'structure', x: 7, y: -9, rotation: -10, shape: { kind: 'polygon', points: [{ x: -2, y: -1.5 }, { x: 2.5, y: -1.2 }, { x: 2, y: 1.6 }, { x: -2.2, y: 1.2 }] }, height: 1.2, label: 'Culvert headwall' },

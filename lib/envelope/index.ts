@@ -2,3 +2,4 @@
 export * from './at-radius';
 export * from './grid';
 export * from './hold';
+export * from './outline';

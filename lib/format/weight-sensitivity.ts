@@ -40,6 +40,7 @@ const NEVER_WORDS: Record<NonNullable<WeightLimit['never']>, string> = {
 
 /** "41,200 lb (+18 %)", or why no weight reaches it. */
 export function weightLimitFigure(l: WeightLimit, mass: Mass): string {
+  if (l.loadMass === null && l.lighter) return `under ${mass(l.lighter.loadMass)}${l.lighter.change === null ? '' : ` (${changeWords(l.lighter.change)})`}, a lighter load`;
   if (l.loadMass === null) return NEVER_WORDS[l.never ?? 'beyond-search'];
   return l.change === null ? mass(l.loadMass) : `${mass(l.loadMass)} (${changeWords(l.change)})`;
 }
@@ -47,10 +48,27 @@ export function weightLimitFigure(l: WeightLimit, mass: Mass): string {
 /** The one line the plan shows: "Limits reached at 41,200 lb (+18 %): first the working load limit of the hook shackle." */
 export function sensitivityHeadline(ws: WeightSensitivity, mass: Mass): string {
   const f = ws.first;
-  if (!f || f.loadMass === null) return 'No limit of the plan is reached as the load gets heavier, up to the weight that would tip the truck.';
-  const at = weightLimitFigure(f, mass);
-  if (f.loadMass <= ws.loadMass) return `Limits already reached at ${at}, at or below the planned weight: first ${weightLimitTitle(f)}.`;
-  return `Limits reached at ${at}: first ${weightLimitTitle(f)}.`;
+  const main = (() => {
+    if (!f || f.loadMass === null) return 'No limit of the plan is reached as the load gets heavier, up to the weight that would tip the truck.';
+    const at = weightLimitFigure(f, mass);
+    if (f.loadMass <= ws.loadMass) return `Limits already reached at ${at}, at or below the planned weight: first ${weightLimitTitle(f)}.`;
+    return `Limits reached at ${at}: first ${weightLimitTitle(f)}.`;
+  })();
+  const l = lighterLimit(ws);
+  return l ? `${main} ${lighterWords(l, mass)}` : main;
+}
+
+/** The pad limit a lighter load would reach first (the highest such mass), if any. */
+export function lighterLimit(ws: WeightSensitivity): WeightLimit | null {
+  let best: WeightLimit | null = null;
+  for (const l of ws.limits) if (l.lighter && (!best || l.lighter.loadMass > best.lighter!.loadMass)) best = l;
+  return best;
+}
+
+/** "A lighter load would also reach one: the ground under the left rear pad below 3,300 lb (−50 %)." */
+export function lighterWords(l: WeightLimit, mass: Mass): string {
+  const x = l.lighter!;
+  return `A lighter load would reach ${weightLimitTitle(l)}: under ${mass(x.loadMass)}${x.change === null ? '' : ` (${changeWords(x.change)})`}.`;
 }
 
 /** "Looked at from −10 % to +25 % of the planned weight (given)". */

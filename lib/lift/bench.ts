@@ -8,6 +8,7 @@ import { analyzeLift } from './analyze';
 import type { Clearance } from './clearance';
 import { parseLiftInput, prepareLift, slewAt } from './prepare';
 import type { LiftInputIn } from './schema';
+import { benchModes } from './bench-modes';
 
 /** Deterministic pseudo-random numbers (a 32-bit LCG, Numerical Recipes constants). */
 function lcg(seed: number) {
@@ -106,7 +107,19 @@ function time(fn: () => unknown, runs: number): number[] {
 
 const pct = (sorted: number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
 
+/** The bench input on a 120° arc with only the obstacles nearest the hook's path (a typical roadside lift). */
+function partialInput(): LiftInputIn {
+  const raw = benchInput();
+  const near = [...(raw.obstacles ?? [])].sort((a, b) => Math.abs(Math.hypot(a.polygon[0].x, a.polygon[0].y) - 11) - Math.abs(Math.hypot(b.polygon[0].x, b.polygon[0].y) - 11));
+  return { ...raw, obstacles: near.slice(0, 5), swing: { from: 200, to: 80, direction: 'cw' } };
+}
+
 function main() {
+  benchModes([
+    { name: '360° swing, 50 obstacles, 2 power lines', input: benchInput() },
+    { name: '120° swing, 5 obstacles, 2 power lines', input: partialInput() },
+  ]);
+  if (process.argv.includes('--modes')) return;
   const raw = benchInput();
   // The editor validates once per edit and then re-analyses; time the analysis of a validated input,
   // and the zod validation on its own.

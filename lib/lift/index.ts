@@ -32,3 +32,6 @@ export * from './analyze';
 export * from './at-slew';
 export * from './search';
 export * from './names';
+export * from './coarse-bounds';
+export * from './coarse';
+export * from './margins';

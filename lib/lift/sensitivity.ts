@@ -37,7 +37,11 @@ export interface WeightLimit {
   quantity: 'percent' | 'pressure' | 'mass';
   /** The limit in SI: percent, kPa, kg. */
   limit: number;
-  /** Load mass (without block and rigging), kg, at which the figure reaches the limit; 0 when reached with nothing on the hook; null when no load mass reaches it (`never` says why). */
+  /**
+   * Load mass (without block and rigging), kg, at which the figure reaches the limit: for a figure within it at
+   * the planned weight, the first such mass above it; for one already over, the mass below it where it was
+   * reached (0 when over with nothing on the hook). Null when no load mass reaches it (`never` says why).
+   */
   loadMass: number | null;
   /** loadMass as a change from the plan's load mass, percent (+18 = 18 % heavier); null without a loadMass or for a plan load under 1 g. */
   change: number | null;
@@ -47,6 +51,11 @@ export interface WeightLimit {
   method: 'proportional' | 'affine' | 'bracketed';
   tolerance: number;
   never: 'no-lever' | 'no-rating' | 'refused' | 'constant' | 'tips-first' | 'beyond-search' | null;
+  /**
+   * Pads only: a figure within its limit at the planned weight that a lighter load would take over it (a pad
+   * on the far side carries more when less hangs on the hook): the load mass below which that happens.
+   */
+  lighter?: { loadMass: number; change: number | null };
 }
 
 export interface WeightCurvePoint {
@@ -133,22 +142,51 @@ export function weightSensitivity(p: PreparedLift, step: number, sweep?: ReturnT
   const top = Math.min(RANGE.mass, tipMass ?? Math.max(20 * m0, 100_000));
   const scan = [...new Set([...Array.from({ length: SCAN_POINTS + 1 }, (_, k) => (top * k) / SCAN_POINTS), ...curveMasses.filter((m) => m < top)])].sort((a, b) => a - b);
   const allowable = p.input.soil.allowable;
+  // The planned mass is on the scan; a crossing is looked for from it: heavier when the pad is within the
+  // limit at the plan (and lighter too, as a pad on the far side carries more under a lighter load), lighter
+  // when it is already over (the mass where it was reached).
+  if (!scan.includes(m0)) scan.push(m0);
+  scan.sort((a, b) => a - b);
+  const i0 = scan.indexOf(m0);
   p.input.supports.forEach((s, i) => {
     const f = (m: number) => maximaAt(m)[i].pressure - allowable;
-    let m: number | null = null;
-    let tol = 0;
-    const k = scan.findIndex((x) => f(x) >= 0);
-    if (k === 0) m = 0;
-    else if (k > 0) {
-      const r = bracketedRoot(f, scan[k - 1], scan[k], f(scan[k - 1]), f(scan[k]), BEARING_TOL);
-      m = r.x;
-      tol = (r.hi - r.lo) / 2;
-    }
+    const up = (from: number): { m: number; tol: number } | null => {
+      for (let k = from + 1; k < scan.length; k++) {
+        if (f(scan[k]) < 0) continue;
+        const r = bracketedRoot(f, scan[k - 1], scan[k], f(scan[k - 1]), f(scan[k]), BEARING_TOL);
+        return { m: r.x, tol: (r.hi - r.lo) / 2 };
+      }
+      return null;
+    };
+    const down = (from: number): { m: number; tol: number } | null => {
+      for (let k = from - 1; k >= 0; k--) {
+        if (f(scan[k]) < 0) continue;
+        // Mirrored so that the bracket runs from below the limit to on or over it.
+        const g = (x: number) => f(-x);
+        const r = bracketedRoot(g, -scan[k + 1], -scan[k], g(-scan[k + 1]), g(-scan[k]), BEARING_TOL);
+        return { m: -r.x, tol: (r.hi - r.lo) / 2 };
+      }
+      return null;
+    };
+    /** Over at the plan: the mass below it where the figure came up to the limit (0 when over all the way down). */
+    const reachedBelow = (): { m: number; tol: number } => {
+      for (let k = i0 - 1; k >= 0; k--) {
+        if (f(scan[k]) >= 0) continue;
+        const r = bracketedRoot(f, scan[k], scan[k + 1], f(scan[k]), f(scan[k + 1]), BEARING_TOL);
+        return { m: r.x, tol: (r.hi - r.lo) / 2 };
+      }
+      return { m: 0, tol: 0 };
+    };
+    const within = f(m0) < 0;
+    const found = within ? up(i0) : reachedBelow();
+    const lighter = within ? down(i0) : null;
+    const m = found ? Math.max(0, found.m) : null;
     const name = maximaAt(m0)[i].name;
     limits.push({
-      ...base('bearing', `bearing:${s.id}`, s.id, name, 'pressure', allowable), method: 'bracketed', tolerance: tol,
+      ...base('bearing', `bearing:${s.id}`, s.id, name, 'pressure', allowable), method: 'bracketed', tolerance: found?.tol ?? 0,
       loadMass: m, change: changeOf(m, m0), slew: m === null ? null : maximaAt(m)[i].slew,
       never: m === null ? (tipMass !== null ? 'tips-first' : 'beyond-search') : null,
+      ...(lighter ? { lighter: { loadMass: Math.max(0, lighter.m), change: changeOf(Math.max(0, lighter.m), m0) } } : {}),
     });
   });
 

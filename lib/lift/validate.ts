@@ -30,10 +30,29 @@ export function parseLiftInput(raw: LiftInputIn | LiftInput): LiftInput {
   throw new LiftError(code, `${field}: ${issue.message}`, field);
 }
 
+/**
+ * A parsed input with some of its parts swapped for other parsed values (a search that moves the truck
+ * thousands of times): skips re-parsing. The caller vouches that every swapped value passed the schema.
+ */
+export function withParsedParts(input: LiftInput, parts: Partial<LiftInput>): LiftInput {
+  const next = { ...input, ...parts };
+  validated.add(next);
+  return next;
+}
+
+/** How many distinct points, up to 3 (all a polygon needs); no strings, as a search checks thousands. */
+function distinctPoints(points: readonly { x: number; y: number }[]): number {
+  const seen: { x: number; y: number }[] = [];
+  for (const p of points) {
+    if (!seen.some((q) => q.x === p.x && q.y === p.y)) seen.push(p);
+    if (seen.length >= 3) break;
+  }
+  return seen.length;
+}
+
 export function checkPolygon(points: readonly { x: number; y: number }[], field: string, what: string): Float64Array {
   const flat = toFlat(points);
-  const distinct = new Set(points.map((p) => `${p.x},${p.y}`)).size;
-  if (distinct < 3 || Math.abs(signedArea2(flat, points.length)) < 1e-9) {
+  if (distinctPoints(points) < 3 || Math.abs(signedArea2(flat, points.length)) < 1e-9) {
     throw new LiftError('degenerate-polygon', `${what} has no area: its outline needs three or more points not on one line.`, field);
   }
   return flat;

@@ -18,6 +18,8 @@ export const migrations: Record<number, (doc: Raw) => Raw> = {
     limits: doc.limits ?? {},
     background: doc.background ?? null,
   }),
+  // v3 adds the usable area the placement advisor keeps the truck inside (none marked yet).
+  2: (doc) => ({ ...doc, version: 3, usableArea: doc.usableArea ?? null }),
 };
 
 export class DocumentVersionError extends Error {}

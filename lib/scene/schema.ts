@@ -1,10 +1,10 @@
 import { z } from 'zod';
 import { sceneObjectSchema } from './objects';
-import { angle } from './primitives';
+import { angle, point } from './primitives';
 import { psfToKpa } from '@/lib/units';
 
 /** The document version this code writes. Older versions are brought up by ./migrations. */
-export const CURRENT_VERSION = 2;
+export const CURRENT_VERSION = 3;
 
 export const swingSchema = z.object({
   /** Pick and set slew angles, truck frame (0 = over the cab, CCW seen from above). */
@@ -56,6 +56,11 @@ export const sceneDocumentSchema = z.object({
   unitsHint: z.enum(['imperial', 'metric']).default('imperial'),
   /** Grid spacing, m. */
   grid: z.number().positive().max(100).default(1.524),
+  /**
+   * Where the truck may stand (site frame, m), as the crew marked it: the placement advisor keeps the
+   * truck's outline and pads inside it. null: not marked (anywhere clear of obstacles).
+   */
+  usableArea: z.array(point).min(3).max(64).nullable().default(null),
 }).superRefine((doc, ctx) => {
   const ids = new Set<string>();
   doc.objects.forEach((o, i) => {

@@ -30,10 +30,26 @@ describe('scene document', () => {
   it('migrates the foundation’s version-1 placeholder up to the current version', () => {
     const v1 = { version: 1, objects: [] };
     const up = migrateDocument(v1) as Record<string, unknown>;
-    expect(up.version).toBe(2);
+    expect(up.version).toBe(CURRENT_VERSION);
     const parsed = parseSceneDocument(v1);
     // A version-1 document keeps the ground figure it was made with (144 kPa); new blank scenes start at 3,000 psf.
     expect(parsed.ok && parsed.document).toEqual({ ...emptySceneDocument(), soil: { preset: 'custom', allowable: 144 } });
+  });
+
+  it('migrates a version-2 document to version 3 with no usable area marked', () => {
+    const up = migrateDocument({ version: 2, objects: [], swing: { from: 10, to: 80, direction: 'cw' } }) as Record<string, unknown>;
+    expect(up).toMatchObject({ version: 3, usableArea: null, swing: { from: 10, to: 80, direction: 'cw' } });
+    const parsed = parseSceneDocument({ version: 2, objects: [] });
+    expect(parsed.ok && parsed.document.usableArea).toBeNull();
+  });
+
+  it('keeps a marked usable area and refuses one with fewer than three corners', () => {
+    const area = [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 6 }];
+    const ok = parseSceneDocument({ version: 3, objects: [], usableArea: area });
+    expect(ok.ok && ok.document.usableArea).toEqual(area);
+    const bad = parseSceneDocument({ version: 3, objects: [], usableArea: area.slice(0, 2) });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.issues[0].path).toBe('usableArea');
   });
 
   it('a version-1 document with objects keeps them through the migration', () => {

@@ -53,6 +53,27 @@ describe('weight sensitivity: the load mass at which each limit is reached', () 
     expect(fl.slew).toBeCloseTo(45, 0);
   });
 
+  it('pad pressure both ways: a heavier load overloads the front pads, a lighter one the rear pads', () => {
+    // Source: the four-pad formula of reference.md (Shapiro §5). Carrier 20 000 kg at x = −1.5 m, hook load H
+    // at 6 m over the front (slew 0 only): front pads 1 250 + H, rear pads 8 750 − H/2 (kg). With the allowable
+    // at 8 000 kg on 0.25 m² pads, the front pads reach it at H = 6 750 kg and the rear pads, within it at the
+    // planned 3 000 kg, are over it for any load under 1 500 kg [derived].
+    const allowable = (8000 * G) / 1000 / 0.25;
+    const input = squareOfPads({
+      masses: [{ id: 'carrier', mass: 20000, x: -1.5, y: 0, z: 1 }],
+      load: { mass: 3000, footprint: { kind: 'rect', length: 1, width: 1 }, height: 1, hang: 1 },
+      swing: { from: 0, to: 0, direction: 'ccw' },
+      soil: { allowable },
+    });
+    const r = analyzeLift(input);
+    expect(Math.abs((limitOf(r, 'bearing', 'bearing:FL').loadMass as number) - 6750)).toBeLessThan(0.05);
+    const rl = limitOf(r, 'bearing', 'bearing:RL');
+    expect(rl.loadMass).toBeNull();
+    expect(Math.abs((rl.lighter?.loadMass as number) - 1500)).toBeLessThan(0.05);
+    expect(checkAt(input, 1490, 'bearing:RL').status).toBe('beyond');
+    expect(checkAt(input, 1510, 'bearing:RL').status).not.toBe('beyond');
+  });
+
   it('load chart and rigging: the check passes just below the mass and fails just above it', () => {
     // The coil-transfer example has a chart, a basket sling, a shackle and a winch; each demand is affine in the load.
     const input = JSON.parse(fs.readFileSync(path.join(__dirname, 'fixtures/in/coil-transfer.json'), 'utf8')) as LiftInputIn;

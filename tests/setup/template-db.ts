@@ -3,6 +3,7 @@ import path from 'node:path';
 import { getDb, openDatabase, type DB } from '@/db';
 import { migrateToLatest } from '@/db/migrator';
 import { seedDemo } from '@/db/seed/run-seed';
+import { backfillSceneFigures } from '@/lib/server/scene-figures';
 
 /**
  * A migrated, seeded database file built once per test file, copied afresh whenever a test needs a clean
@@ -15,6 +16,8 @@ export async function buildTemplate(prepare?: (db: DB) => Promise<void>): Promis
   await migrateToLatest(db);
   await seedDemo(db);
   if (prepare) await prepare(db);
+  // The list stores each scene's figures on first read; computing them now keeps a listing a pure read in tests.
+  await backfillSceneFigures(db);
   await db.destroy(); // closing checkpoints the WAL, so the one file holds everything
   return file;
 }

@@ -13,6 +13,8 @@ import NewProfilePage from '@/app/(app)/equipment/new/page';
 import NewProfileForbidden from '@/app/(app)/equipment/new/forbidden';
 import NewRiggingPage from '@/app/(app)/rigging/new/page';
 import NewRiggingForbidden from '@/app/(app)/rigging/new/forbidden';
+import ReviewQueuePage from '@/app/(app)/review/page';
+import ReviewQueueForbidden from '@/app/(app)/review/forbidden';
 import { signInAs } from '@/tests/setup/auth-mock';
 import { demoUser, freshSeededDb } from '@/tests/setup/db';
 
@@ -55,14 +57,17 @@ describe('pages a role may not see answer through forbidden()', () => {
     { name: '/scenes/new', page: NewScenePage, boundary: NewSceneForbidden, refused: 'supervisor@harrow.example', allowed: 'operator@harrow.example', heading: 'This page is for operators' },
     { name: '/equipment/new', page: NewProfilePage, boundary: NewProfileForbidden, refused: 'operator@harrow.example', allowed: 'admin@harrow.example', heading: 'This page is for admins, who manage truck profiles' },
     { name: '/rigging/new', page: NewRiggingPage, boundary: NewRiggingForbidden, refused: 'trainer@harrow.example', allowed: 'operator@harrow.example', heading: 'This page is for operators and admins, who manage rigging' },
+    { name: '/review', page: ReviewQueuePage, boundary: ReviewQueueForbidden, refused: 'operator@harrow.example', allowed: 'supervisor@harrow.example', heading: 'This page is for supervisors and administrators' },
   ] as const;
 
   for (const c of cases) {
     it(`${c.name}: 403 interrupt for the wrong role, the page for the right one`, async () => {
       signInAs(await demoUser(c.refused));
-      expect(await interruptOf(() => (c.page as () => Promise<unknown>)())).toBe(FORBIDDEN_DIGEST);
+      // Pages that read the query get an empty one; the others ignore it.
+      const props = { searchParams: Promise.resolve({}) };
+      expect(await interruptOf(() => (c.page as (p: unknown) => Promise<unknown>)(props))).toBe(FORBIDDEN_DIGEST);
       signInAs(await demoUser(c.allowed));
-      expect(await interruptOf(() => (c.page as () => Promise<unknown>)())).toBeNull();
+      expect(await interruptOf(() => (c.page as (p: unknown) => Promise<unknown>)(props))).toBeNull();
     });
 
     it(`${c.name}: the forbidden page says what is missing and who is signed in`, async () => {

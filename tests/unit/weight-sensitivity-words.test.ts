@@ -20,6 +20,19 @@ describe('weight sensitivity in words', () => {
     expect(sensitivityHeadline(heavy, (kg) => formatMass(kg, 'metric'))).toMatch(/^Limits already reached at 5,910 kg \(−34 %\), at or below the planned weight/);
   });
 
+  it('says when a lighter load would overload a pad', () => {
+    // The case of tests/lift/sensitivity.test.ts: carrier at x = −1.5 m, rear pads over their allowable under 1 500 kg of load.
+    const ws2 = analyzeLift(squareOfPads({
+      masses: [{ id: 'carrier', mass: 20000, x: -1.5, y: 0, z: 1 }],
+      load: { mass: 3000, footprint: { kind: 'rect', length: 1, width: 1 }, height: 1, hang: 1 },
+      swing: { from: 0, to: 0, direction: 'ccw' },
+      soil: { allowable: (8000 * 9.80665) / 1000 / 0.25 },
+    })).weightSensitivity!;
+    expect(sensitivityHeadline(ws2, (kg) => formatMass(kg, 'metric'))).toMatch(
+      /^Limits reached at 6,750 kg \(\+125 %\): first the ground’s allowable pressure under the (left|right) front pad\. A lighter load would reach the ground’s allowable pressure under the (left|right) rear pad: under 1,500 kg \(−50 %\)\.$/,
+    );
+  });
+
   it('words the band, the change and a limit never reached', () => {
     expect(bandWords(ws, (kg) => formatMass(kg, 'metric'))).toBe('From 4,500 kg (−10 %) to 6,250 kg (+25 %), as the weight is given.');
     expect(changeWords(0.2)).toBe('±0 %');

@@ -43,7 +43,7 @@ export default async function ScenesPage() {
           ) : undefined
         }
       />
-      <ScenesTable canCreate={canCreate} user={{ id: user.id, role: user.role }} />
+      <ScenesTable canCreate={canCreate} user={{ id: user.id, role: user.role }} units={user.units} />
     </>
   );
 }

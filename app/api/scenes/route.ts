@@ -5,6 +5,7 @@ import { BadCursorError, listScenes } from '@/db/repositories/scene-list';
 import { HttpError } from '@/lib/api/errors';
 import { route } from '@/lib/api/route';
 import { scenePin } from '@/lib/server/truck-pin';
+import { figuresFor } from '@/lib/server/scene-figures';
 import { createSceneSchema, listScenesQuery } from '@/lib/validations/scenes';
 import { emptySceneDocument } from '@/lib/scene';
 import { rolesFor } from '@/lib/auth/permissions';
@@ -14,7 +15,10 @@ export const runtime = 'nodejs';
 export const GET = route({ query: listScenesQuery }, async ({ user, query }) => {
   const { q, title, training, ...rest } = query;
   try {
-    return await listScenes(getDb(), user, { ...rest, q: q ?? title, inTrainingSet: training === undefined ? undefined : training === '1' });
+    const page = await listScenes(getDb(), user, { ...rest, q: q ?? title, inTrainingSet: training === undefined ? undefined : training === '1' });
+    // The server's figures for each scene's current revision, stored per revision on first read.
+    const figures = await figuresFor(getDb(), user.organisationId, page.items);
+    return { ...page, items: page.items.map((s) => ({ ...s, figures: figures.get(s.id)! })) };
   } catch (e) {
     if (e instanceof BadCursorError) {
       const field = query.before !== undefined ? 'before' : 'after';

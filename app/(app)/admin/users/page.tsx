@@ -16,7 +16,7 @@ export default async function UsersAdminPage() {
   return (
     <>
       <PageHeader eyebrow={user.organisationName} title="Users" description="Everyone who can sign in to your organisation, and their role." />
-      <div className="grid items-start gap-6 2xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 items-start gap-6 2xl:grid-cols-[minmax(0,1fr)_22rem]">
         <UsersTable />
         <Card>
           <CardHeader title="Add a user" as="h2" />

@@ -8,6 +8,8 @@ import { SceneEditorLoader } from '@/canvas/scene-editor-loader';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import { loadSceneProfiles } from '@/lib/server/load-profiles';
 import { mayEditScene } from '@/lib/auth/permissions';
+import { isEditable } from '@/lib/review/lifecycle';
+import { editorReviewData } from '@/lib/server/editor-review';
 
 export const metadata: Metadata = { title: 'Scene editor' };
 
@@ -38,8 +40,8 @@ export default async function SceneEditorPage({ params }: { params: Promise<{ id
     );
   }
   const profiles: TruckProfileInput[] = await loadSceneProfiles(db, user.organisationId, parsed.document, scene.equipmentProfileId);
-  // Only the owning operator edits; everyone else who can see the scene gets it read-only.
-  const readOnly = !mayEditScene(user, scene);
+  // Only the owning operator edits, and only a draft or returned plan (a submitted or approved one is frozen).
+  const readOnly = !mayEditScene(user, scene) || !isEditable(scene.status);
   return (
     <SceneEditorLoader
       scene={{ id: scene.id, title: scene.title, status: scene.status, revision: scene.revision, ownerName: scene.ownerName, updatedAt: scene.updatedAt }}
@@ -48,6 +50,7 @@ export default async function SceneEditorPage({ params }: { params: Promise<{ id
       readOnly={readOnly}
       units={user.units}
       user={{ name: user.name, role: user.role }}
+      review={await editorReviewData(db, user, scene)}
     />
   );
 }

@@ -1,11 +1,12 @@
 import type { DB } from '@/db';
 import { findProfileVersion } from '@/db/repositories/equipment';
 import { planDetailsAt } from '@/db/repositories/plan-details';
+import { approvedRevision, listSubmissions } from '@/db/repositories/submissions';
 import { HttpError } from '@/lib/api/errors';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { analyseSavedScene } from '@/lib/server/scene-analysis';
 import { parseSceneDocument } from '@/lib/scene/parse';
-import { buildPlanData, type PlanData, type PlanInputs } from '@/components/plan-pdf/plan-data';
+import { buildPlanData, type PlanData, type PlanInputs, type SignOffDecision } from '@/components/plan-pdf/plan-data';
 import { planRevision } from './plan-revision';
 
 /**
@@ -52,6 +53,12 @@ export async function loadPlanData(db: DB, user: CurrentUser, sceneId: number, r
   }
 
   const stored = await planDetailsAt(db, scene.id, revision);
+  const [approved, submissions] = await Promise.all([approvedRevision(db, scene.organisationId, scene.id), listSubmissions(db, scene.organisationId, scene.id)]);
+  // The review decisions on this revision, oldest first: who approved (or returned) it, when, and on what terms.
+  const signOff: SignOffDecision[] = submissions
+    .filter((x) => x.revision === revision && (x.state === 'approved' || x.state === 'returned') && x.decidedByName && x.decidedAt)
+    .reverse()
+    .map((x) => ({ action: x.state === 'approved' ? 'Approved' : 'Returned for changes', by: x.decidedByName!, role: x.decidedByRole ?? '', at: x.decidedAt!, conditions: x.conditions ?? '', reason: x.reason ?? '' }));
   return buildPlanData({
     meta: {
       sceneId: scene.id,
@@ -60,7 +67,7 @@ export async function loadPlanData(db: DB, user: CurrentUser, sceneId: number, r
       revision,
       latestRevision: scene.revision,
       status: scene.status,
-      approved: scene.status === 'approved' && revision === scene.revision,
+      approved: approved === revision,
       savedBy: row.name,
       savedAt: row.created_at,
       generatedAt: new Date().toISOString(),
@@ -71,6 +78,6 @@ export async function loadPlanData(db: DB, user: CurrentUser, sceneId: number, r
     analysis,
     details: stored.details,
     inspections,
-    signOff: [],
+    signOff,
   });
 }

@@ -13,9 +13,11 @@ import { Badge, StatusPill } from '@/components/ui/badge';
 import { ButtonLink } from '@/components/ui/button';
 import { LocalTime } from '@/components/local-time';
 import { RenameSceneForm } from '@/components/scenes/rename-scene-form';
+import { AuditTimeline } from '@/components/scenes/audit-timeline';
 import { SceneActions } from '@/components/scenes/scene-actions';
 import { sceneActionsFor } from '@/lib/scene/actions';
-import { describeAudit } from '@/components/scenes/audit-words';
+import { PlanSummary } from '@/components/scenes/plan-summary';
+import { loadPlanData } from '@/app/api/scenes/[id]/load-plan';
 import { PlanDownloadLink } from '@/components/scenes/plan-download-link';
 import { mayEditScene } from '@/lib/auth/permissions';
 
@@ -39,6 +41,8 @@ export default async function SceneDetailsPage({ params }: Props) {
     scene.equipmentProfileId ? findEquipmentProfile(db, user.organisationId, scene.equipmentProfileId) : undefined,
   ]);
   const canRename = mayEditScene(user, scene);
+  // The plan as the server computes its latest revision: the PDF's own data, drawing included.
+  const plan = await loadPlanData(db, user, scene.id, scene.revision).catch(() => null);
   const actionsNote = (rename: boolean, owner: string) =>
     rename ? 'Rename, copy, archive or delete this scene.' : sceneActionsFor(user, scene).length ? `Only the owner, ${owner}, can rename this scene.` : `Only the owner, ${owner}, or an admin can change this scene.`;
 
@@ -68,6 +72,12 @@ export default async function SceneDetailsPage({ params }: Props) {
         }
       />
       <div className="grid gap-6 xl:grid-cols-[1fr_1fr]">
+        <Card className="xl:col-span-2">
+          <CardHeader title="The plan" description={`Revision ${scene.revision}, as the server computes it`} />
+          <CardBody>
+            <PlanSummary revision={scene.revision} title={scene.title} units={user.units} result={plan?.result ?? null} problem={plan ? plan.problem : 'The saved sketch could not be read.'} drawing={plan?.drawing ?? null} />
+          </CardBody>
+        </Card>
         <Card>
           <CardHeader title="Summary" />
           <CardBody>
@@ -109,27 +119,7 @@ export default async function SceneDetailsPage({ params }: Props) {
             ))}
           </ol>
         </Card>
-        <Card>
-          <CardHeader title="Activity" description="Who did what to this scene" />
-          {audit.length === 0 ? (
-            <CardBody>
-              <p className="text-body text-ink-muted">No activity recorded yet.</p>
-            </CardBody>
-          ) : (
-            <ol className="divide-y divide-paper-line" data-testid="scene-audit">
-              {audit.map((a) => (
-                <li key={a.id} className="px-5 py-3">
-                  <p className="font-medium">
-                    <span className="font-bold">{a.user_name}</span> — {describeAudit(a.action, a.detail)}
-                  </p>
-                  <p className="text-caption text-ink-muted">
-                    <LocalTime iso={a.created_at} />
-                  </p>
-                </li>
-              ))}
-            </ol>
-          )}
-        </Card>
+        <AuditTimeline audit={audit} />
       </div>
     </>
   );

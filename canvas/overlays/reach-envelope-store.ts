@@ -1,0 +1,37 @@
+'use client';
+import { useSyncExternalStore } from 'react';
+import type { EnvelopeGrid, EnvelopeShapes } from '@/lib/envelope';
+
+/**
+ * Whether the reach envelope is shown, and the last one computed. Module state rather than the editor
+ * store: the toggle (a DOM button) and the overlay (inside the Konva tree) share it, and nothing of it is
+ * saved with the scene.
+ */
+export interface EnvelopeState {
+  on: boolean;
+  grid: EnvelopeGrid | null;
+  shapes: EnvelopeShapes | null;
+  /** Time the last grid took, ms, and where it ran. */
+  ms: number | null;
+  where: 'worker' | 'main' | null;
+  busy: boolean;
+}
+
+let state: EnvelopeState = { on: false, grid: null, shapes: null, ms: null, where: null, busy: false };
+const listeners = new Set<() => void>();
+
+export const envelopeStore = {
+  get: () => state,
+  set(patch: Partial<EnvelopeState>) {
+    state = { ...state, ...patch };
+    listeners.forEach((l) => l());
+  },
+  subscribe(l: () => void) {
+    listeners.add(l);
+    return () => listeners.delete(l);
+  },
+};
+
+export function useEnvelopeState<T>(pick: (s: EnvelopeState) => T): T {
+  return useSyncExternalStore(envelopeStore.subscribe, () => pick(envelopeStore.get()), () => pick(envelopeStore.get()));
+}

@@ -1,0 +1,239 @@
+import { G } from '@/lib/units';
+import { boomGapAt, boomMeets } from './boom-clearance';
+import { gapAt } from './clearance';
+import { pointSegmentDist2 } from './geometry';
+import { lipschitzLowerBound, reactionSlopes, ROUNDING, tippingOnArc } from './coarse-bounds';
+import { percentOfRated } from './load-chart';
+import { upperWeight } from './load-weight';
+import { powerLineDistanceAt, requiredClearance } from './power-lines';
+import { slewAt, withLoadMass, type PreparedLift, type Target } from './prepare';
+import { createReactionState, reactionsAt } from './reactions';
+import { assertStandsUnloaded } from './tipping';
+import { atLeast, atMost, CLEARANCE_MARGIN_CAP, clearanceScale, type Margin } from './margins';
+
+/**
+ * The coarse mode: the same limits as analyzeLift, each as a bound that is never on the favourable side
+ * of the exact figure, at a small fraction of the cost (for searches that try thousands of placements).
+ * - Percent of tipping: the exact maximum over the arc in closed form (coarse-bounds.ts), not a sweep.
+ * - Load chart: the same lookup (it does not depend on the slew).
+ * - Pad pressures: reactions sampled every `step`°, with the Lipschitz bound of the reaction between samples.
+ * - Clearances and power lines: a closed-form lower bound first; only where it could decide the least
+ *   margin, samples every `step`° with the Lipschitz bound of the gap between them.
+ * Figures are bounds: higher for at-most limits, lower for at-least limits. tests/lift/coarse.test.ts
+ * checks this against analyzeLift over random scenes.
+ */
+export interface CoarseOptions {
+  /** Sampling step of the reaction and clearance bounds, degrees. */
+  step?: number;
+}
+
+export interface CoarseFigures {
+  /** Upper bound of the worst percent of tipping over the arc; at the upper weight when one is given. */
+  percentOfTipping: number;
+  upperPercentOfTipping: number | null;
+  loadChartPercent: number | null;
+  upperLoadChartPercent: number | null;
+  /** Upper bounds of each pad's largest ground pressure, kPa (nominal, and at the upper weight). */
+  pads: { support: string; pressure: number; upperPressure: number | null }[];
+  /** Lower bounds of each part's or obstacle's smallest plan gap to the load, m, and the vertical gap. */
+  clearances: { target: string; horizontal: number; vertical: number }[];
+  /** Lower bounds of the boom's smallest gap to each part or obstacle, m. */
+  boomClearances: { target: string; distance: number }[];
+  /** Lower bounds of the smallest distance to each power line, m, and its required clearance. */
+  powerLines: { id: string; distance: number; required: number | null }[];
+}
+
+export const COARSE_STEP = 3;
+
+const DEG = Math.PI / 180;
+
+/**
+ * Upper bound of each support's largest reaction (kg) over the arc: samples every `step`°, then each
+ * interval whose Lipschitz bound rises more than REFINE above the best sample is halved (up to DEPTH
+ * times), so the bound is tight where the reaction peaks and the search pays for few extra solves.
+ */
+const REFINE = 0.01;
+const DEPTH = 5;
+
+function reactionBounds(p: PreparedLift, step: number): Float64Array {
+  const n = p.supportX.length;
+  const W = p.fixedMass + p.rotMass + p.hookLoad;
+  const rx = p.rotMx0 + p.hookLoad * p.hookX0, ry = p.rotMy0 + p.hookLoad * p.hookY0;
+  // The CG turns on a circle of this radius about its fixed part, m per radian of slew.
+  const rho = Math.hypot(rx, ry) / W;
+  // Keyed by the supports list, so a search that moves one truck around computes it once per leg set.
+  const slope = reactionSlopes(p.supportX, p.supportY, p.input.supports);
+  const state = createReactionState(n);
+  const samples = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
+  const ts = new Float64Array(samples + 1);
+  const ms: Float64Array[] = [];
+  for (let k = 0; k <= samples; k++) {
+    ts[k] = Math.min(k * step, p.span);
+    ms.push(Float64Array.from(reactionsAt(p, slewAt(p, ts[k]), state).mass));
+  }
+  const out = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    // Reaction change per degree of slew at most.
+    const K = W * slope[i] * rho * DEG;
+    let best = -Infinity;
+    for (const m of ms) best = Math.max(best, m[i]);
+    const upper = (t0: number, m0: number, t1: number, m1: number, depth: number): number => {
+      const bound = (m0 + m1 + K * (t1 - t0)) / 2;
+      if (depth === 0 || bound <= best + REFINE * Math.abs(best)) return Math.max(bound, m0, m1);
+      const tm = (t0 + t1) / 2;
+      const mm = reactionsAt(p, slewAt(p, tm), state).mass[i];
+      best = Math.max(best, mm);
+      return Math.max(upper(t0, m0, tm, mm, depth - 1), upper(tm, mm, t1, m1, depth - 1));
+    };
+    let b = best;
+    for (let k = 1; k <= samples; k++) b = Math.max(b, upper(ts[k - 1], ms[k - 1][i], ts[k], ms[k][i], DEPTH));
+    out[i] = Math.max(0, b) * (1 + ROUNDING) + ROUNDING * W;
+  }
+  return out;
+}
+
+function pressureOf(p: PreparedLift, i: number, m: number): number {
+  const sup = p.input.supports[i];
+  return sup.cribbingArea ? ((m + (sup.cribbingMass ?? 0)) * G) / 1000 / sup.cribbingArea : (m * G) / 1000 / sup.area;
+}
+
+/** Smallest distance from the hook's arc to a point, m (closed form). */
+function hookArcDistance(p: PreparedLift, x: number, y: number): number {
+  const d = Math.hypot(x, y);
+  const hookAngle = Math.atan2(p.hookY0, p.hookX0) / DEG;
+  const slew = Math.atan2(y, x) / DEG - hookAngle;
+  const rel = (((p.sign * (slew - p.from)) % 360) + 360) % 360;
+  if (rel <= p.span) return Math.abs(p.radius - d);
+  let best = Infinity;
+  for (const t of [0, p.span]) {
+    const a = (slewAt(p, t) + hookAngle) * DEG;
+    best = Math.min(best, Math.hypot(p.radius * Math.cos(a) - x, p.radius * Math.sin(a) - y));
+  }
+  return best;
+}
+
+/** Below this a bound is refined by sampling; at or above it the margin is capped anyway (margins.ts). */
+const decisive = (limit: number) => limit + CLEARANCE_MARGIN_CAP * clearanceScale(limit);
+
+function loadGapBound(p: PreparedLift, t: Target, step: number, limit: number): number {
+  const rough = Math.max(0, hookArcDistance(p, t.cx, t.cy) - t.r - p.footprint.reach);
+  if (rough >= decisive(limit) || p.loadBottom - t.top >= decisive(limit)) return rough;
+  const lipschitz = (p.radius + p.footprint.reach) * DEG;
+  // Any lower bound of the gap at a sample keeps the interval bound valid: the bounding circles where
+  // they are far enough apart, the outlines where they come near.
+  const far = decisive(limit) + lipschitz * step;
+  const hookAngle = Math.atan2(p.hookY0, p.hookX0);
+  const gap = (u: number) => {
+    const deg = slewAt(p, u);
+    const a = deg * DEG + hookAngle;
+    const circles = Math.hypot(p.radius * Math.cos(a) - t.cx, p.radius * Math.sin(a) - t.cy) - t.r - p.footprint.reach;
+    return circles >= far ? circles : gapAt(p, t, deg);
+  };
+  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
+}
+
+function boomGapBound(p: PreparedLift, t: Target, step: number, limit: number): number {
+  const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0));
+  const plan = Math.hypot(t.cx, t.cy) - t.r - reach;
+  const above = Math.min(p.pivotZ, p.tipZ) - t.top;
+  const rough = Math.max(0, Math.max(plan, above, risingBoomGap(p, t)) - p.boomRadius);
+  if (rough >= decisive(limit)) return rough;
+  const lipschitz = reach * DEG;
+  const far = decisive(limit) + lipschitz * step;
+  const gap = (u: number) => {
+    const deg = slewAt(p, u);
+    const c = Math.cos(deg * DEG), s = Math.sin(deg * DEG);
+    const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
+    const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
+    const circle = Math.max(Math.sqrt(pointSegmentDist2(t.cx, t.cy, px, py, qx, qy)) - t.r, above) - p.boomRadius;
+    return circle >= far ? circle : boomGapAt(p, t, deg);
+  };
+  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
+}
+
+/**
+ * A raised boom climbs as it runs out: a boom point s metres out (in plan) from the pivot stands at least
+ * pivotZ + s·tan(elevation) high and at most |pivot| + s from the axis, while the part lies at least
+ * dmin = |centre| − r from the axis. Its gap is at least the larger of the plan and the height shortfall,
+ * and the smallest of that over s is where the two meet (or at an end).
+ */
+function risingBoomGap(p: PreparedLift, t: Target): number {
+  const run = Math.hypot(p.hookX0 - p.pivotX0, p.hookY0 - p.pivotY0);
+  if (!(p.tipZ > p.pivotZ) || !(run > 0)) return -Infinity;
+  const slope = (p.tipZ - p.pivotZ) / run;
+  const start = Math.max(0, Math.hypot(t.cx, t.cy) - t.r) - Math.hypot(p.pivotX0, p.pivotY0);
+  const lb = (s: number) => Math.max(start - s, p.pivotZ + s * slope - t.top);
+  const meet = Math.min(run, Math.max(0, (start - p.pivotZ + t.top) / (1 + slope)));
+  return Math.min(lb(0), lb(run), lb(meet));
+}
+
+/** Closed-form lower bound on the distance to a wire: every part swung lies within `reach` of the axis in plan. */
+function wireRough(p: PreparedLift, l: PreparedLift['powerLines'][number], reach: number): number {
+  return Math.max(0, Math.sqrt(pointSegmentDist2(0, 0, l.a.x, l.a.y, l.b.x, l.b.y)) - reach);
+}
+
+export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): CoarseFigures {
+  const step = options.step ?? COARSE_STEP;
+  assertStandsUnloaded(p);
+  const { input } = p;
+  const limit = input.limits.clearance;
+  const up = input.weightUncertainty ? withLoadMass(p, upperWeight(input.load.mass, input.weightUncertainty)) : null;
+  const chart = (q: PreparedLift) => (input.loadChart ? percentOfRated(input.loadChart, q.radius, input.boom.length, q.hookLoad).percent : null);
+  const nominal = reactionBounds(p, step);
+  const upper = up ? reactionBounds(up, step) : null;
+  const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach;
+  return {
+    percentOfTipping: tippingOnArc(p, p.hookLoad).percent,
+    upperPercentOfTipping: up ? tippingOnArc(up, up.hookLoad).percent : null,
+    loadChartPercent: chart(p),
+    upperLoadChartPercent: up ? chart(up) : null,
+    pads: input.supports.map((s, i) => ({
+      support: s.id,
+      pressure: pressureOf(p, i, nominal[i]),
+      upperPressure: upper ? pressureOf(p, i, upper[i]) : null,
+    })),
+    clearances: p.targets.map((t) => ({ target: t.id, horizontal: loadGapBound(p, t, step, limit), vertical: p.loadBottom - t.top })),
+    boomClearances: p.targets.filter(boomMeets).map((t) => ({ target: t.id, distance: boomGapBound(p, t, step, limit) })),
+    powerLines: p.powerLines.map((l) => {
+      const required = requiredClearance(l).required;
+      const rough = wireRough(p, l, reach);
+      if (required !== null && rough >= decisive(required)) return { id: l.id, distance: rough, required };
+      const d = lipschitzLowerBound((u) => powerLineDistanceAt(p, l, slewAt(p, u)), p.span, step, reach * DEG);
+      return { id: l.id, distance: Math.max(0, d), required };
+    }),
+  };
+}
+
+/** The plan's limits the coarse figures are compared with. */
+export interface MarginLimits {
+  percentOfTipping: number;
+  percentOfRated: number;
+  clearance: number;
+  allowable: number;
+  hasChart: boolean;
+}
+
+/** Margins of a coarse analysis, with the same ids as resultMargins; each is at most the exact one. */
+export function coarseMargins(f: CoarseFigures, limits: MarginLimits): Margin[] {
+  const out: Margin[] = [{ id: 'stability', margin: atMost(f.percentOfTipping, limits.percentOfTipping) }];
+  if (f.upperPercentOfTipping !== null) out.push({ id: 'stability:upper-weight', margin: atMost(f.upperPercentOfTipping, limits.percentOfTipping) });
+  for (const pad of f.pads) {
+    out.push({ id: `bearing:${pad.support}`, margin: atMost(pad.pressure, limits.allowable) });
+    if (pad.upperPressure !== null) out.push({ id: `bearing:${pad.support}:upper-weight`, margin: atMost(pad.upperPressure, limits.allowable) });
+  }
+  if (limits.hasChart) {
+    out.push({ id: 'load-chart', margin: atMost(f.loadChartPercent, limits.percentOfRated) });
+    if (f.upperPercentOfTipping !== null) out.push({ id: 'load-chart:upper-weight', margin: atMost(f.upperLoadChartPercent, limits.percentOfRated) });
+  }
+  for (const c of f.clearances) out.push({ id: `clearance:${c.target}`, margin: atLeast(Math.max(c.horizontal, c.vertical), limits.clearance) });
+  for (const c of f.boomClearances) out.push({ id: `clearance:${c.target}:boom`, margin: atLeast(c.distance, limits.clearance) });
+  for (const l of f.powerLines) out.push({ id: `power-line:${l.id}`, margin: atLeast(l.distance, l.required) });
+  return out;
+}
+
+
+/** The limits of a prepared lift, as coarseMargins wants them. */
+export function limitsOf(p: PreparedLift): MarginLimits {
+  const { limits, soil, loadChart } = p.input;
+  return { percentOfTipping: limits.percentOfTipping, percentOfRated: limits.percentOfRated, clearance: limits.clearance, allowable: soil.allowable, hasChart: !!loadChart };
+}
