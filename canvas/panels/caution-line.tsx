@@ -11,9 +11,9 @@ export function CautionLine({ className = '', testId = 'caution-line' }: { class
   const id = useId();
   return (
     <div className={`text-xs text-ink ${className}`} data-testid={testId}>
-      <p className="flex flex-wrap items-baseline gap-x-1">
-        <span aria-hidden className="font-bold">⚠</span>
-        <span>{CAUTION_SHORT}</span>
+      <p>
+        <span aria-hidden className="font-bold">⚠ </span>
+        {CAUTION_SHORT}{' '}
         <button type="button" aria-expanded={open} aria-controls={id} onClick={() => setOpen(!open)} className="min-h-6 font-semibold text-teal underline underline-offset-2">
           {open ? 'Less' : 'Full caution'}
         </button>

@@ -39,7 +39,7 @@ export function SidePanel() {
       <button
         type="button"
         onClick={() => setOpen(true)}
-        className={`absolute bottom-20 right-3 z-20 min-h-11 rounded-md border border-teal bg-paper-raised px-3 text-sm font-semibold text-teal shadow lg:hidden ${open ? 'hidden' : ''}`}
+        className={`absolute right-3 top-24 z-20 min-h-11 rounded-md border border-teal bg-paper-raised px-3 text-sm font-semibold text-teal shadow lg:hidden ${open ? 'hidden' : ''}`}
         data-testid="open-panel"
       >
         Details & results
