@@ -14,7 +14,7 @@ import type { LiftInputIn } from './schema';
  */
 export function perCall(fn: () => unknown, minMs = 1500): { wall: number; cpu: number } {
   let n = 1;
-  for (let t = performance.now(); performance.now() - t < 20; n *= 2) fn();
+  for (let t = performance.now(); performance.now() - t < 20; n *= 2) for (let i = 0; i < n; i++) fn();
   const walls: number[] = [];
   const cpus: number[] = [];
   const t0 = performance.now();
