@@ -3,7 +3,7 @@ import { getDb } from '@/db';
 import { REVIEW_TITLES } from '@/db/seed/demo-review-scenes';
 import { figureChanges, sceneChanges } from '@/lib/review/changes';
 import type { PlanFigures } from '@/lib/review/figures';
-import { sceneDocumentSchema, type SceneDocument } from '@/lib/scene/schema';
+import { CURRENT_VERSION, sceneDocumentSchema, type SceneDocument } from '@/lib/scene/schema';
 import { reviewPageData } from '@/lib/server/review-page';
 import { decidePlan, submitPlan } from '@/lib/server/review';
 import { updateScene } from '@/db/repositories/scenes';
@@ -11,7 +11,7 @@ import { demoUser, freshSeededDb } from '@/tests/setup/db';
 import { sceneIdByTitle } from '@/tests/setup/fixtures';
 
 /** "What changed since the last review": the diff of two sketches, the figures side by side, and the page data. */
-const doc = (objects: unknown[], extra: Record<string, unknown> = {}): SceneDocument => sceneDocumentSchema.parse({ version: 2, objects, ...extra });
+const doc = (objects: unknown[], extra: Record<string, unknown> = {}): SceneDocument => sceneDocumentSchema.parse({ version: CURRENT_VERSION, objects, ...extra });
 const note = (id: string, x: number, y: number, text = 'n') => ({ kind: 'note', id, x, y, text });
 const tree = (id: string, x: number, y: number, height = 6) => ({ kind: 'obstacle', id, x, y, obstacleKind: 'tree', shape: { kind: 'circle', diameter: 3 }, height });
 
