@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { HARROW_SCENES, signIn } from './helpers';
+import { HARROW_SCENES, sceneIdByTitle, signIn } from './helpers';
 
 test.describe.configure({ timeout: 180_000 });
 
@@ -65,6 +65,9 @@ test('a trainer adds a scene to the training set from the list, and the filter f
   await page.goto(`/scenes?training=${wasIn ? '0' : '1'}`);
   await expect(page.getByRole('table', { name: 'Scenes' }).getByText(HARROW_SCENES.reefer)).toBeVisible();
   await expect(page.getByLabel('Training set')).toHaveValue(wasIn ? '0' : '1');
+  // Put the training set back as the seed has it: the replay journey builds a lesson from this scene.
+  const id = await sceneIdByTitle(page, HARROW_SCENES.reefer);
+  expect((await page.request.put(`/api/scenes/${id}/training`, { data: { inTrainingSet: wasIn } })).status()).toBe(200);
 });
 
 test('selects show a chevron', async ({ page }) => {

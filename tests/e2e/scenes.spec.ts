@@ -117,7 +117,7 @@ test('someone else’s scene: the owner’s name, no rename form', async ({ page
   await page.getByLabel(/^Search/).fill('reefer');
   await page.getByRole('link', { name: `Details of ${HARROW_SCENES.reefer}` }).click();
   await expect(page.getByTestId('scene-title')).toHaveText(HARROW_SCENES.reefer);
-  await expect(page.getByText('Only the owner, Dana Okafor, can rename this scene.')).toBeVisible();
+  await expect(page.getByText('Only the owner, Dana Okafor, or an admin can change this scene.')).toBeVisible();
   await expect(page.getByLabel('Scene title')).toHaveCount(0);
   await expect(sceneLink(page, '← All scenes')).toBeVisible();
 });
