@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyzeLift, isLiftError, prepareLift, type LiftInputIn } from '@/lib/lift';
 import { envelopeGrid, holdAt, inputAtPoint } from '@/lib/envelope';
+import { cornerPads } from '@/tests/lift/scenarios';
 
 /** A random, asymmetric rotator on four pads (invented values), sometimes with a load chart and a stated uncertainty. */
 const scene = fc
@@ -17,12 +18,7 @@ const scene = fc
     uncertainty: fc.constantFrom(0, 10),
   })
   .map(({ pads: d, cw, length, elevation, pivotY, load, pick, chart, uncertainty }): LiftInputIn => ({
-    supports: [
-      { id: 'FL', x: d[0], y: d[1], area: 0.3 },
-      { id: 'RL', x: -d[2], y: d[3], area: 0.3 },
-      { id: 'RR', x: -d[4], y: -d[5], area: 0.3 },
-      { id: 'FR', x: d[6], y: -d[7], area: 0.3 },
-    ],
+    supports: cornerPads(d),
     masses: [
       { id: 'carrier', mass: 20000, x: 0.3, y: 0.1, z: 1 },
       { id: 'counterweight', mass: cw, x: -1.2, y: 0, z: 2, rotates: true },

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { analyzeCoarse, analyzePrepared, coarseMargins, limitsOf, prepareLift, resultMargins, tippingAt, slewAt, type LiftInputIn } from '@/lib/lift';
+import { analyzeCoarse, analyzePrepared, coarseMargins, limitsOf, prepareLift, resultMargins, tippingAt, slewAt, type LiftInputIn, type PreparedLift } from '@/lib/lift';
 import { rotator } from './scenarios';
 
 /**
@@ -69,18 +69,24 @@ const scene = fc
     };
   });
 
+/** The prepared lift, or null for a scene both modes refuse (it tips with nothing on the hook). */
+function preparedOrNull(input: LiftInputIn): PreparedLift | null {
+  try {
+    const p = prepareLift(input);
+    analyzePrepared(p, { sensitivity: false });
+    return p;
+  } catch {
+    return null;
+  }
+}
+
 describe('coarse mode (fast-check)', () => {
   it('never gives a higher margin than the exact analysis, for every limit', () => {
     let compared = 0;
     fc.assert(
       fc.property(scene, (input) => {
-        let p;
-        try {
-          p = prepareLift(input);
-          analyzePrepared(p, { sensitivity: false });
-        } catch {
-          return; // tips with nothing on the hook: both modes refuse it
-        }
+        const p = preparedOrNull(input);
+        if (!p) return;
         const exact = new Map(resultMargins(analyzePrepared(p, { sensitivity: false })).map((m) => [m.id, m.margin]));
         const coarse = coarseMargins(analyzeCoarse(p), limitsOf(p));
         expect(coarse.length).toBe(exact.size);
@@ -101,13 +107,8 @@ describe('coarse mode (fast-check)', () => {
     // The closed form against a 0.01° scan of the same engine function [derived].
     fc.assert(
       fc.property(scene, (input) => {
-        let p;
-        try {
-          p = prepareLift(input);
-          analyzePrepared(p, { sensitivity: false });
-        } catch {
-          return;
-        }
+        const p = preparedOrNull(input);
+        if (!p) return;
         const c = analyzeCoarse(p).percentOfTipping;
         let scanned = 0;
         for (let t = 0; t <= p.span; t += 0.01) scanned = Math.max(scanned, tippingAt(p, slewAt(p, t)).percent);

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyzeLift, prepareLift, slewAt, tippingAt, withLoadMass, type LiftInputIn } from '@/lib/lift';
 import { REFINE_TOL } from '@/lib/lift/sweep';
+import { cornerPads } from './scenarios';
 
 /** A random, asymmetric rotator on four pads (invented values), full or partial arc. */
 const scene = fc
@@ -15,12 +16,7 @@ const scene = fc
     span: fc.double({ min: 5, max: 360, noNaN: true }),
   })
   .map(({ pads: d, carrierX, cw, reach, load, from, span }): LiftInputIn => ({
-    supports: [
-      { id: 'FL', x: d[0], y: d[1], area: 0.3 },
-      { id: 'RL', x: -d[2], y: d[3], area: 0.3 },
-      { id: 'RR', x: -d[4], y: -d[5], area: 0.3 },
-      { id: 'FR', x: d[6], y: -d[7], area: 0.3 },
-    ],
+    supports: cornerPads(d),
     masses: [
       { id: 'carrier', mass: 20000, x: carrierX, y: 0.1, z: 1 },
       { id: 'counterweight', mass: cw, x: -1.2, y: 0, z: 2, rotates: true },

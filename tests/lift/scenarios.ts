@@ -48,3 +48,16 @@ export function rotator(overrides: Partial<LiftInputIn> = {}): LiftInputIn {
     ...overrides,
   };
 }
+
+/**
+ * Four corner pads (0.3 m²) from eight distances, for property generators: front-left (d0, d1),
+ * rear-left (−d2, d3), rear-right (−d4, −d5), front-right (d6, −d7).
+ */
+export function cornerPads(d: readonly number[]): LiftInputIn['supports'] {
+  return [
+    { id: 'FL', x: d[0]!, y: d[1]!, area: 0.3 },
+    { id: 'RL', x: -d[2]!, y: d[3]!, area: 0.3 },
+    { id: 'RR', x: -d[4]!, y: -d[5]!, area: 0.3 },
+    { id: 'FR', x: d[6]!, y: -d[7]!, area: 0.3 },
+  ];
+}
