@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { createColumnHelper, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import Link from 'next/link';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import type { ScenePage, SceneSummary } from '@/db/repositories/scene-list';
 import { SCENE_STATUSES, type SceneStatus } from '@/lib/domain';
 import { StatusPill, statusLabel } from '@/components/ui/badge';
@@ -135,9 +135,18 @@ export function ScenesTable({ canCreate, user, units }: { canCreate: boolean; us
   const after = search.get('after');
   const before = search.get('before');
 
+  /**
+   * The URL last asked for. A router.replace commits later, so two changes close together (the debounced
+   * search clearing just after a status is picked) must build on each other, not both on the older URL.
+   */
+  const wanted = useRef(search.toString());
+  useEffect(() => {
+    wanted.current = search.toString();
+  }, [search]);
+
   /** A new URL from the current one; changing a filter or the order goes back to the first page. */
   const navigate = (changes: Record<string, string | null>, keepCursor = false) => {
-    const p = new URLSearchParams(search.toString());
+    const p = new URLSearchParams(wanted.current);
     if (!keepCursor) {
       p.delete('after');
       p.delete('before');
@@ -147,11 +156,12 @@ export function ScenesTable({ canCreate, user, units }: { canCreate: boolean; us
       else p.set(k, v);
     }
     const qs = p.toString();
+    wanted.current = qs;
     router.replace(qs ? `${pathname}?${qs}` : pathname, { scroll: false });
   };
 
   useEffect(() => {
-    if ((search.get('q') ?? '') !== q) navigate({ q });
+    if ((new URLSearchParams(wanted.current).get('q') ?? '') !== q) navigate({ q });
     // eslint-disable-next-line react-hooks/exhaustive-deps -- only the debounced text drives this
   }, [q]);
 
