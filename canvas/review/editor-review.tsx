@@ -9,7 +9,7 @@ import { PinLayer } from './pin-layer';
 import { CommentPanel, type Draft } from './comment-panel';
 import { useComments } from './use-comments';
 
-const btn = 'min-h-touch rounded-plate border-2 border-ink px-3 text-body font-semibold disabled:opacity-50';
+const btn = 'min-h-touch rounded-plate border-2 border-ink px-2.5 text-caption font-semibold disabled:opacity-50';
 
 /** True while the sketch has edits the server has not yet accepted (autosave moves the store's revision). */
 function useUnsaved() {
@@ -51,11 +51,12 @@ export function EditorReview({ sceneId, review }: { sceneId: number; review: Edi
     setError(errorText(r.json));
   };
 
+  // The pill names the state; the words beside it say only who and what follows, to keep the strip one line.
   const message =
-    s === 'submitted' ? 'Awaiting review: frozen until the decision.' :
-    s === 'approved' ? `Approved${last?.state === 'approved' && last.byName ? ` by ${last.byName}` : ''}: read-only.` :
-    s === 'returned' ? `Returned for changes${last?.byName ? ` by ${last.byName}` : ''}.` :
-    open ? 'Draft with open comments.' : null;
+    s === 'submitted' ? 'frozen until the decision' :
+    s === 'approved' ? `${last?.state === 'approved' && last.byName ? `by ${last.byName} · ` : ''}read-only` :
+    s === 'returned' ? (last?.byName ? `by ${last.byName}` : null) :
+    open ? 'open comments to answer' : null;
 
   return (
     <>
@@ -77,11 +78,11 @@ export function EditorReview({ sceneId, review }: { sceneId: number; review: Edi
       />
       {/* Right of the reach-envelope switch (top left) and left of the north arrow (top right). */}
       <div className="pointer-events-none absolute left-2 right-14 top-14 z-20 flex justify-end md:left-[18rem] md:top-2">
-        <div className="pointer-events-auto flex max-w-full flex-wrap items-center gap-2 rounded-plate border-2 border-ink bg-paper-raised/95 px-2 py-1 shadow" data-testid="review-strip">
+        <div className="pointer-events-auto flex max-w-full flex-wrap items-center gap-x-2 gap-y-1 rounded-plate border-2 border-ink bg-paper-raised/95 px-2 py-0.5 text-caption shadow" data-testid="review-strip">
           <StatusPill status={s} />
-          {message && <span className="text-body">{message}</span>}
-          {s === 'returned' && last?.note && <span className="max-w-[28rem] truncate text-body text-ink-soft" title={last.note}>“{last.note}”</span>}
-          {s === 'approved' && last?.state === 'approved' && last.conditions && <span className="max-w-[28rem] truncate text-body text-ink-soft" title={last.conditions}>Conditions: {last.conditions}</span>}
+          {message && <span className="text-ink-soft">{message}</span>}
+          {s === 'returned' && last?.note && <span className="max-w-[16rem] truncate text-ink-soft" title={last.note}>“{last.note}”</span>}
+          {s === 'approved' && last?.state === 'approved' && last.conditions && <span className="max-w-[16rem] truncate text-ink-soft" title={last.conditions}>Conditions: {last.conditions}</span>}
           {review.mayManage && (s === 'draft' || s === 'returned') && (
             <button type="button" className={`${btn} bg-signal`} disabled={busy || unsaved} onClick={() => act('submit')} data-testid="submit-plan" title={unsaved ? 'Saving the last change first…' : undefined}>
               {s === 'returned' ? 'Resubmit for review' : 'Submit for review'}
@@ -101,7 +102,7 @@ export function EditorReview({ sceneId, review }: { sceneId: number; review: Edi
             Comments ({open})
           </button>
           {review.reviewer && (
-            <Link href={`/scenes/${sceneId}/review`} className="inline-flex min-h-touch items-center px-1 text-body font-semibold text-teal-dark underline underline-offset-4">
+            <Link href={`/scenes/${sceneId}/review`} className="inline-flex min-h-touch items-center px-1 font-semibold text-teal-dark underline underline-offset-4">
               Review page
             </Link>
           )}

@@ -1,5 +1,5 @@
 'use client';
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import Link from 'next/link';
 import { useStore } from 'zustand';
 import { createEditorStore } from '../store/editor-store';
@@ -53,15 +53,32 @@ export function ReviewDesk(p: ReviewDeskProps) {
   const open = comments.threads.filter((t) => !t.resolved).length;
   const mayDecide = p.decisionRefusal === null && p.submission !== null;
 
+  // A phone turned, or a window resized: the plan fits again, unless the reviewer has zoomed or panned it.
+  const autoFit = useRef(true);
+  const fitting = useRef(false);
+  const fit = useCallback(() => {
+    fitting.current = true;
+    fitToScene(ctx.editor);
+    fitting.current = false;
+    autoFit.current = true;
+  }, [ctx]);
+  useEffect(
+    () =>
+      ctx.store.subscribe((s, prev) => {
+        if (s.viewport !== prev.viewport && autoFit.current) fit();
+        else if (s.camera !== prev.camera && !fitting.current) autoFit.current = false;
+      }),
+    [ctx, fit],
+  );
   useEffect(() => {
     const detach = attachLiveAnalysis(ctx.store, { deferFull: (run) => setTimeout(run, 0) });
-    const t = setTimeout(() => fitToScene(ctx.editor), 30);
+    const t = setTimeout(fit, 30);
     ctx.store.getState().set({ scrubSlew: arcOf(ctx.store.getState().document.swing).from });
     return () => {
       clearTimeout(t);
       detach();
     };
-  }, [ctx]);
+  }, [ctx, fit]);
   // The ghost (the last reviewed revision) follows the view and the slew shown.
   useEffect(() => {
     if (!ghost) return;
@@ -138,7 +155,7 @@ export function ReviewDesk(p: ReviewDeskProps) {
                   Worst case
                 </button>
               )}
-              <button type="button" onClick={() => fitToScene(ctx.editor)} className="min-h-touch rounded-plate border-2 border-ink bg-paper-raised px-2 font-semibold">
+              <button type="button" onClick={fit} className="min-h-touch rounded-plate border-2 border-ink bg-paper-raised px-2 font-semibold">
                 Fit
               </button>
               {ghost && (

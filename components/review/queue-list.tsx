@@ -2,6 +2,7 @@ import Link from 'next/link';
 import type { UnitSystem } from '@/lib/units';
 import { formatLength } from '@/lib/format/quantity';
 import { formatPercent } from '@/lib/review/format';
+import { padLabel } from '@/lib/lift/names';
 import { FLAG_WORDS, waitedFor, type QueueItem } from '@/lib/review/queue';
 import { Badge } from '@/components/ui/badge';
 import { LocalTime } from '@/components/local-time';
@@ -26,7 +27,7 @@ function Figures({ item, units }: { item: QueueItem; units: UnitSystem }) {
   return (
     <dl className="grid grid-cols-3 gap-3">
       <Figure label="Worst % of tipping" value={formatPercent(f.percentOfTipping)} over={f.percentOfTipping > f.tippingLimit} note={`plan limit ${f.tippingLimit} %`} />
-      <Figure label="Ground, % of allowable" value={f.ground ? formatPercent(f.ground.percent) : '—'} over={!!f.ground && f.ground.percent > 100} note={f.ground ? `pad ${f.ground.support}` : undefined} />
+      <Figure label="Ground, % of allowable" value={f.ground ? formatPercent(f.ground.percent) : '—'} over={!!f.ground && f.ground.percent > 100} note={f.ground ? padLabel(f.ground.support) : undefined} />
       <Figure label="Least clearance" value={c ? formatLength(c.distance, units) : '—'} over={!!c && c.distance < c.limit} note={c ? c.name : undefined} />
     </dl>
   );

@@ -39,3 +39,16 @@ export function padName(id: string, x: number, y: number): string {
   if (Math.abs(y) < 0.3) return `${along} jack ${id}`;
   return `${y > 0 ? 'left' : 'right'} ${along} ${id}`;
 }
+
+/** A pad named from its code alone, for a figure that kept only the code: "front jack (FJ)", else "pad P7". */
+export function padLabel(id: string): string {
+  const known = KNOWN[id];
+  return known ? `${known} (${id})` : `pad ${id}`;
+}
+
+/** A tipping line named from its code ("RL-RR") alone: "the line left rear – right rear pads (RL-RR)". */
+export function tippingLineLabel(code: string): string {
+  const ends = code.split('-');
+  if (ends.length === 2 && KNOWN[ends[0]] && KNOWN[ends[1]]) return `the line ${KNOWN[ends[0]]} – ${KNOWN[ends[1]]} (${code})`;
+  return `line ${code}`;
+}

@@ -1,4 +1,5 @@
 import type { LiftResult } from '@/lib/lift/result';
+import { padLabel, tippingLineLabel } from '@/lib/lift/names';
 
 /**
  * The headline figures of a computed plan, kept with each submission so that a supervisor judges what the
@@ -48,9 +49,9 @@ export function hardLimitBreaches(result: LiftResult, allowable: number, names: 
   const cases = [{ suffix: '', worst: result.worstCase, maxima: result.reactions.maxima }];
   if (result.upperWeight) cases.push({ suffix: ':upper-weight', worst: result.upperWeight.worstCase, maxima: result.upperWeight.reactionMaxima });
   for (const c of cases) {
-    if (c.worst.percentOfTipping > 100) out.push({ id: `stability${c.suffix}`, kind: 'tipping', subject: `tipping line ${c.worst.line}`, value: c.worst.percentOfTipping, limit: 100, unit: '%' });
+    if (c.worst.percentOfTipping > 100) out.push({ id: `stability${c.suffix}`, kind: 'tipping', subject: `tipping about ${tippingLineLabel(c.worst.line)}`, value: c.worst.percentOfTipping, limit: 100, unit: '%' });
     for (const m of c.maxima) {
-      if (m.pressure > allowable) out.push({ id: `bearing:${m.support}${c.suffix}`, kind: 'ground', subject: `pad ${m.support}`, value: m.pressure, limit: allowable, unit: 'kPa' });
+      if (m.pressure > allowable) out.push({ id: `bearing:${m.support}${c.suffix}`, kind: 'ground', subject: padLabel(m.support), value: m.pressure, limit: allowable, unit: 'kPa' });
     }
   }
   const chart = result.loadChart;

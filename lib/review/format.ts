@@ -1,6 +1,7 @@
 import { formatAngle, formatLength, formatPercent as percent, formatPressure } from '@/lib/format/quantity';
 import type { UnitSystem } from '@/lib/units';
 import type { LimitBreach, PlanFigures } from './figures';
+import { padLabel, tippingLineLabel } from '@/lib/lift/names';
 
 /**
  * Words for the review desk's headline figures and hard-limit breaches (queue, review page, e-mail), in the
@@ -29,8 +30,8 @@ export function formatBreach(b: LimitBreach, units: UnitSystem): string {
 
 /** The headline figures as short lines (queue cells, e-mail bodies). */
 export function figureLines(f: PlanFigures, units: UnitSystem): string[] {
-  const lines = [`Worst case ${formatPercent(f.percentOfTipping)} of tipping about line ${f.tippingLine} at slew ${formatAngle(f.tippingSlew)} (plan limit ${f.tippingLimit} %)`];
-  if (f.ground) lines.push(`Highest ground pressure ${formatPercent(f.ground.percent)} of allowable (pad ${f.ground.support}: ${formatPressure(f.ground.pressure, units)} of ${formatPressure(f.ground.allowable, units)})`);
+  const lines = [`Worst case ${formatPercent(f.percentOfTipping)} of tipping about ${tippingLineLabel(f.tippingLine)} at slew ${formatAngle(f.tippingSlew)} (plan limit ${f.tippingLimit} %)`];
+  if (f.ground) lines.push(`Highest ground pressure ${formatPercent(f.ground.percent)} of allowable (${padLabel(f.ground.support)}: ${formatPressure(f.ground.pressure, units)} of ${formatPressure(f.ground.allowable, units)})`);
   if (f.leastClearance) lines.push(`Least clearance ${formatLength(f.leastClearance.distance, units)} to ${f.leastClearance.name} (plan limit ${formatLength(f.leastClearance.limit, units)})`);
   if (f.powerLine) lines.push(`Nearest power line ${formatLength(f.powerLine.distance, units)} from ${f.powerLine.name}${f.powerLine.required !== null ? ` (Table A: ${formatLength(f.powerLine.required, units)})` : ''}`);
   if (f.loadChartPercent !== null) lines.push(`Load chart ${formatPercent(f.loadChartPercent)} of rated capacity`);

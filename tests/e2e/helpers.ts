@@ -9,6 +9,7 @@ export const VIEWPORTS = {
   laptop: { width: 1366, height: 900 },
   'tablet-portrait': { width: 820, height: 1180 },
   'tablet-landscape': { width: 1180, height: 820 },
+  phone: { width: 390, height: 844 },
 } as const;
 
 export async function signIn(page: Page, email: string, password = PASSWORD) {

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { simpleParser } from 'mailparser';
 import { CAUTION_TEXT } from '@/lib/caution';
-import { HARROW_SCENES, signIn } from './helpers';
+import { HARROW_SCENES, screens, signIn } from './helpers';
 
 /**
  * The review desk end to end, with two people in two browser contexts: the operator submits; the supervisor
@@ -61,6 +61,7 @@ test('operator and supervisor take a plan through review to approval and a new r
   const card = supervisor.getByTestId('queue-item').filter({ hasText: TITLE });
   await expect(card).toBeVisible();
   await expect(supervisor.getByTestId('queue-item').last()).toContainText(TITLE);
+  await screens(supervisor, 'review-queue', ['laptop', 'tablet-portrait', 'phone']);
   await card.getByRole('link', { name: TITLE }).click();
   await expect(supervisor).toHaveURL(new RegExp(`/scenes/${id}/review$`));
   await expect(supervisor.getByTestId('caution-note')).toBeVisible();
@@ -71,9 +72,11 @@ test('operator and supervisor take a plan through review to approval and a new r
   await supervisor.getByTestId('comment-text').fill('Put a spotter here for the swing past the scale house.');
   await supervisor.getByTestId('post-comment').click();
   await expect(supervisor.getByTestId('comment-pin')).toHaveCount(1);
+  await screens(supervisor, 'review-comments', ['laptop', 'tablet-portrait', 'phone']);
   const threads = (await (await supervisor.request.get(`/api/scenes/${id}/comments`)).json()) as { items: { anchor: { x: number; y: number } | null }[] };
   expect(threads.items[0].anchor).toEqual({ x: expect.any(Number), y: expect.any(Number) });
   await supervisor.getByTestId('review-tab-decision').click();
+  await screens(supervisor, 'review-decision', ['laptop', 'tablet-portrait', 'phone']);
   await supervisor.getByTestId('return-note').fill('See the pinned comment.');
   await supervisor.getByTestId('return').click();
   await expect(supervisor.getByTestId('decision-record')).toContainText('Returned with changes');
@@ -82,6 +85,7 @@ test('operator and supervisor take a plan through review to approval and a new r
   await operator.reload();
   await expect(operator.getByTestId('review-strip')).toContainText('Returned for changes');
   await expect(operator.getByTestId('comment-pin')).toHaveCount(1);
+  await screens(operator, 'editor-pins', ['laptop', 'tablet-portrait']);
   // The pin may sit under the status strip at this zoom: a tap on it, wherever it is.
   await operator.getByTestId('comment-pin').dispatchEvent('click');
   await expect(operator.getByTestId('editor-comments')).toContainText('Put a spotter here');
@@ -104,9 +108,16 @@ test('operator and supervisor take a plan through review to approval and a new r
   await supervisor.reload();
   await expect(supervisor.getByTestId('changes-panel')).toContainText('outriggers and cribbing');
   await expect(supervisor.getByTestId('figure-changes')).toContainText('Worst % of tipping');
+  await screens(supervisor, 'review-changes', ['laptop', 'phone']);
   await supervisor.getByTestId('review-tab-decision').click();
   await supervisor.getByTestId('conditions').fill(CONDITION);
   await supervisor.getByTestId('approve').click();
+  await expect(supervisor.getByTestId('decision-record')).toContainText(CONDITION);
+  // The scene's details page leads to the review page too.
+  await supervisor.goto(`/scenes/${id}/details`);
+  await supervisor.getByRole('link', { name: 'Review page' }).click();
+  await expect(supervisor).toHaveURL(new RegExp(`/scenes/${id}/review$`));
+  await supervisor.getByTestId('review-tab-decision').click();
   await expect(supervisor.getByTestId('decision-record')).toContainText(CONDITION);
 
   // 5. The operator can no longer edit; a new revision is a draft again.

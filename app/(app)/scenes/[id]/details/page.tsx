@@ -61,6 +61,11 @@ export default async function SceneDetailsPage({ params }: Props) {
             <ButtonLink href={`/scenes/${scene.id}`} variant="signal" size="lg">
               Open in editor
             </ButtonLink>
+            {scene.status !== 'draft' && (
+              <ButtonLink href={`/scenes/${scene.id}/review`} variant="secondary" size="lg">
+                {scene.status === 'submitted' && user.role !== 'operator' && user.role !== 'trainer' ? 'Review and decide' : 'Review page'}
+              </ButtonLink>
+            )}
             <ButtonLink href={`/scenes/${scene.id}/replay`} variant="secondary" size="lg">
               Replay
             </ButtonLink>
