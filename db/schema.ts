@@ -231,6 +231,19 @@ export interface MailOutboxTable {
   created_at: Timestamp;
 }
 
+/** A one-time password-reset link (migrations/2026-12-03T08-00_password-resets.ts). */
+export interface PasswordResetTable {
+  /** SHA-256 of the token, hex: the token itself is only in the e-mail. */
+  token_hash: string;
+  organisation_id: number;
+  user_id: number;
+  /** The admin who sent the link. */
+  requested_by: number;
+  created_at: string;
+  expires_at: string;
+  used_at: string | null;
+}
+
 export interface ScenePlanDetailsTable {
   id: Generated<number>;
   organisation_id: number;
@@ -282,6 +295,7 @@ export interface Database {
   lessons: LessonTable;
   lesson_steps: LessonStepTable;
   scene_figures: SceneFiguresTable;
+  password_resets: PasswordResetTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;

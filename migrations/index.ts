@@ -9,6 +9,7 @@ import * as lessons from './2026-12-02T13-00_lessons';
 import * as sceneList from './2026-12-02T14-00_scene-list';
 import * as revisionStorage from './2026-12-02T14-30_revision-storage';
 import * as sceneActions from './2026-12-02T16-00_scene-actions';
+import * as passwordResets from './2026-12-03T08-00_password-resets';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -25,4 +26,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02T14-00_scene-list': sceneList,
   '2026-12-02T14-30_revision-storage': revisionStorage,
   '2026-12-02T16-00_scene-actions': sceneActions,
+  '2026-12-03T08-00_password-resets': passwordResets,
 };

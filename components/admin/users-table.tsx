@@ -13,6 +13,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { Notice } from '@/components/ui/notice';
 import { LocalTime } from '@/components/local-time';
 import { fetchJson } from '@/lib/client/fetch-json';
+import { RESET_LINK_HOURS } from '@/lib/auth/reset-link';
 
 const ROLE_LABEL: Record<Role, string> = { operator: 'Operator', supervisor: 'Supervisor', trainer: 'Trainer', admin: 'Admin' };
 
@@ -32,7 +33,7 @@ export interface UserListItem {
 const col = createColumnHelper<UserListItem>();
 
 /** The columns, with the row actions bound to the mutation that changes a user. */
-function makeColumns(change: (c: Change) => void, busyId: number | null) {
+function makeColumns(change: (c: Change) => void, sendReset: (u: UserListItem) => void, busyId: number | null) {
   return [
     col.accessor('name', {
       header: 'Name',
@@ -49,7 +50,7 @@ function makeColumns(change: (c: Change) => void, busyId: number | null) {
         <label className="flex items-center gap-2">
           <span className="sr-only">Role of {c.row.original.name}</span>
           <select
-            className={cx(controlClasses(false), 'min-h-touch w-[9.5rem] pr-8')}
+            className={cx(controlClasses(false), 'min-h-touch w-[9.5rem] min-w-[8.5rem] shrink-0 pr-8')}
             value={c.getValue()}
             disabled={busyId === c.row.original.id}
             onChange={(e) => change({ id: c.row.original.id, role: e.target.value as Role })}
@@ -76,6 +77,11 @@ function makeColumns(change: (c: Change) => void, busyId: number | null) {
           >
             {c.getValue() ? 'Deactivate' : 'Reactivate'}
           </Button>
+          {c.getValue() ? (
+            <Button variant="secondary" disabled={busyId === c.row.original.id} onClick={() => sendReset(c.row.original)} aria-label={`Send ${c.row.original.name} a password reset link`}>
+              Reset password…
+            </Button>
+          ) : null}
         </div>
       ),
     }),
@@ -99,7 +105,16 @@ export function UsersTable() {
     }
     mutation.mutate(c);
   };
-  const columns = makeColumns(change, mutation.isPending ? (mutation.variables?.id ?? null) : null);
+  // The admin never sees or sets the password: the user gets a one-time link by e-mail.
+  const reset = useMutation({
+    mutationFn: (u: UserListItem) => fetchJson<{ sentTo: string; expiresAt: string }>(`/api/users/${u.id}/password-reset`, { method: 'POST' }),
+  });
+  const sendReset = (u: UserListItem) => {
+    if (!window.confirm(`E-mail ${u.name} (${u.email}) a link to set a new password? The link works once, for ${RESET_LINK_HOURS} hours; their current password keeps working until they use it.`)) return;
+    reset.mutate(u);
+  };
+  const busyId = mutation.isPending ? (mutation.variables?.id ?? null) : reset.isPending ? (reset.variables?.id ?? null) : null;
+  const columns = makeColumns(change, sendReset, busyId);
   // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns fresh functions by design; we do not run the React Compiler
   const table = useReactTable({
     data: users.data?.items ?? [],
@@ -113,6 +128,12 @@ export function UsersTable() {
     <div className="flex flex-col gap-3">
       {users.isError && <Notice tone="error" title="Could not load users">{users.error.message}</Notice>}
       {mutation.isError && <Notice tone="error" title="That change was not made">{mutation.error.message}</Notice>}
+      {reset.isError && <Notice tone="error" title="No reset link was sent">{reset.error.message}</Notice>}
+      {reset.isSuccess && (
+        <Notice tone="success" title="Reset link sent">
+          {reset.variables.name} has been e-mailed a link at <span className="[overflow-wrap:anywhere]">{reset.data.sentTo}</span>. It works once, for {RESET_LINK_HOURS} hours.
+        </Notice>
+      )}
       <DataTable table={table} caption="Users in your organisation" loading={users.isPending} empty={<EmptyState title="No users yet" />} />
     </div>
   );

@@ -104,6 +104,28 @@ export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = 
   options: RouteOptions<P, B, Q>,
   handler: (ctx: RouteContext<z.output<P>, z.output<B>, z.output<Q>>) => Promise<Response | unknown>,
 ) {
+  return wrap(options, true, handler as (ctx: RouteContext<unknown, unknown, unknown>) => Promise<Response | unknown>);
+}
+
+export type PublicRouteContext<P, B, Q> = Omit<RouteContext<P, B, Q>, 'user'>;
+
+/**
+ * The same wrapper for the few calls made before anyone is signed in (completing a password reset from an
+ * e-mailed link): same-origin check, zod parsing, error answers and logging as `route`, but no session or
+ * role. The handler must prove who the caller is by other means (a one-time token).
+ */
+export function publicRoute<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown>(
+  options: Omit<RouteOptions<P, B, Q>, 'roles'>,
+  handler: (ctx: PublicRouteContext<z.output<P>, z.output<B>, z.output<Q>>) => Promise<Response | unknown>,
+) {
+  return wrap(options, false, handler as (ctx: RouteContext<unknown, unknown, unknown>) => Promise<Response | unknown>);
+}
+
+function wrap(
+  options: RouteOptions<z.ZodType, z.ZodType, z.ZodType>,
+  needsSession: boolean,
+  handler: (ctx: RouteContext<unknown, unknown, unknown>) => Promise<Response | unknown>,
+) {
   return async (req: Request, context?: NextContext): Promise<Response> => {
     const started = performance.now();
     const requestId = requestIdFor(req);
@@ -114,14 +136,14 @@ export function route<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = 
         const reason = crossOriginReason(req);
         if (reason) throw new HttpError(403, `Cross-site request refused: ${reason}`);
       }
-      const user = assertRole(await getCurrentUser(), options.roles);
-      userId = user.id;
+      const user = needsSession ? assertRole(await getCurrentUser(), options.roles) : undefined;
+      userId = user?.id ?? null;
       const rawParams = context?.params ? await context.params : {};
       const params = options.params ? parseWith(options.params, rawParams, 'params') : rawParams;
       const url = new URL(req.url);
       const query = options.query ? parseWith(options.query, Object.fromEntries(url.searchParams), 'query') : {};
       const body = options.body ? parseWith(options.body, await readJson(req), 'body') : undefined;
-      const out = await handler({ req, user, params, body, query } as RouteContext<z.output<P>, z.output<B>, z.output<Q>>);
+      const out = await handler({ req, user, params, body, query } as RouteContext<unknown, unknown, unknown>);
       res = out instanceof Response ? out : Response.json(out ?? { ok: true });
     } catch (err) {
       res = answer(err, requestId);

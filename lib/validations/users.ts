@@ -30,3 +30,16 @@ export const updateUserSchema = z
   .strict()
   .refine((v) => v.role !== undefined || v.active !== undefined, { path: ['role'], message: 'Give a role or active' });
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;
+
+/** The token of an e-mailed reset link (lib/auth/reset-token.ts makes them): 43 base64url characters. */
+export const resetTokenSchema = z
+  .string({ error: 'The reset link is missing its token' })
+  .regex(/^[A-Za-z0-9_-]{43}$/, 'This is not a reset link Arcline sent; use the link from the e-mail as it is');
+
+/** Completing a reset from the e-mailed link: the token stands in for the current password. */
+export const completeResetSchema = z
+  .object({
+    token: resetTokenSchema,
+    newPassword: passwordSchema,
+  })
+  .strict();

@@ -18,6 +18,8 @@ import * as riggingExport from '@/app/api/rigging/export/route';
 import * as riggingImport from '@/app/api/rigging/import/route';
 import * as users from '@/app/api/users/route';
 import * as userOne from '@/app/api/users/[id]/route';
+import * as userReset from '@/app/api/users/[id]/password-reset/route';
+import * as passwordReset from '@/app/api/password-reset/route';
 import * as analyze from '@/app/api/analyze/route';
 import * as sceneAnalysis from '@/app/api/scenes/[id]/analysis/route';
 import * as submit from '@/app/api/scenes/[id]/submit/route';
@@ -529,6 +531,20 @@ const routes: MatrixRoute[] = [
       'Cobalt: operator': [401, 403, 403, 403, 404, 403],
       'unknown id': [401, 403, 403, 403, 404, 403],
     },
+  },
+  {
+    method: 'POST', path: '/api/users/[id]/password-reset', handler: userReset.POST, writes: ['password_resets', 'mail_outbox', 'audit_log'],
+    expect: {
+      'Harrow: trainer': [401, 403, 403, 403, 202, 403],
+      'Cobalt: operator': [401, 403, 403, 403, 404, 403],
+      'unknown id': [401, 403, 403, 403, 404, 403],
+    },
+  },
+  // No session needed: the token is the proof. One never sent answers alike for everyone, and writes nothing.
+  {
+    method: 'POST', path: '/api/password-reset', handler: passwordReset.POST,
+    body: () => ({ token: 'A'.repeat(43), newPassword: 'a-long-enough-password' }),
+    expect: { '-': [400, 400, 400, 400, 400, 400] },
   },
   { method: 'GET', path: '/api/me', handler: me.GET, expect: { '-': [401, 200, 200, 200, 200, 200] } },
   {
