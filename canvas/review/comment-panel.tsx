@@ -6,6 +6,7 @@ import { Notice } from '@/components/ui/notice';
 import { CommentThread } from './comment-thread';
 import type { Anchor, Comments } from './use-comments';
 import type { PinPick } from './pin-layer';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 export type Draft = { pick: PinPick | null; attach: 'point' | 'object' } | null;
 
@@ -24,6 +25,7 @@ export function CommentPanel({ comments, names, units, canWrite, draft, setDraft
 }) {
   const [text, setText] = useState('');
   const [showResolved, setShowResolved] = useState(false);
+  useLeaveGuard(text.trim() !== '');
   const open = comments.threads.filter((t) => !t.resolved);
   const where = (a: Anchor | null) =>
     !a ? 'General comment' : 'objectId' in a ? `On ${names[a.objectId] ?? a.objectId}` : `Pinned at ${formatLength(a.x, units)} E, ${formatLength(a.y, units)} N`;

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { LocalTime } from '@/components/local-time';
 import { cx } from '@/components/ui/cx';
 import type { CommentView, Comments, ThreadView } from './use-comments';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 const ROLE: Record<string, string> = { operator: 'operator', supervisor: 'supervisor', admin: 'admin', trainer: 'trainer' };
 
@@ -31,6 +32,7 @@ export function CommentThread({ thread, number, where, comments, canWrite, selec
   onSelect: () => void;
 }) {
   const [reply, setReply] = useState('');
+  useLeaveGuard(reply.trim() !== '');
   return (
     <li
       data-testid="comment-thread"

@@ -6,6 +6,7 @@ import { formatBreach } from '@/lib/review/format';
 import type { UnitSystem } from '@/lib/units';
 import { Notice } from '@/components/ui/notice';
 import { errorText, sendJson } from '@/components/review/post-json';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 const area = 'rounded-plate border-2 border-paper-edge bg-paper-raised p-2 text-body font-normal';
 
@@ -20,6 +21,7 @@ export function DecisionForm({ sceneId, revision, figures, openComments, units }
   const [reason, setReason] = useState('');
   const [note, setNote] = useState('');
   const [busy, setBusy] = useState(false);
+  useLeaveGuard(!busy && (conditions.trim() !== '' || reason.trim() !== '' || note.trim() !== ''));
   const [error, setError] = useState<string | null>(null);
   const [refused, setRefused] = useState<LimitBreach[] | null>(null);
   const beyondPlan = (figures?.beyondPlan.length ?? 0) > 0;
@@ -32,7 +34,13 @@ export function DecisionForm({ sceneId, revision, figures, openComments, units }
     const body = decision === 'approve' ? { decision, revision, conditions: conditions || undefined, reason: reason || undefined } : { decision, revision, note: note || undefined };
     const r = await sendJson('POST', `/api/scenes/${sceneId}/decision`, body);
     setBusy(false);
-    if (r.ok) return router.refresh();
+    if (r.ok) {
+      // Decided: nothing left unsaved, so leaving no longer asks.
+      setConditions('');
+      setReason('');
+      setNote('');
+      return router.refresh();
+    }
     if (r.status === 422 && Array.isArray(r.json.checks) && (r.json.checks as unknown[]).length && !/reason/.test(String(r.json.error))) setRefused(r.json.checks as LimitBreach[]);
     else setError(errorText(r.json));
   };

@@ -12,6 +12,7 @@ import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { createUserSchema } from '@/lib/validations/users';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 type Input = z.input<typeof createUserSchema>;
 type Output = z.output<typeof createUserSchema>;
@@ -41,6 +42,7 @@ export function CreateUserForm() {
     },
   });
 
+  useLeaveGuard(formState.isDirty && !create.isPending);
   const { errors } = formState;
   return (
     <form onSubmit={handleSubmit((v) => (setCreated(null), create.mutate(v)))} noValidate className="flex flex-col gap-4">

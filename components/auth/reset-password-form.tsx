@@ -10,6 +10,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { passwordSchema } from '@/lib/auth/password-policy';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 const schema = z
   .object({ newPassword: passwordSchema, repeat: z.string() })
@@ -19,12 +20,16 @@ type Values = z.infer<typeof schema>;
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
+  const [done, setDone] = useState(false);
   const { register, handleSubmit, formState, setError } = useForm<Values>({ resolver: zodResolver(schema), defaultValues: { newPassword: '', repeat: '' } });
+
+  useLeaveGuard(formState.isDirty && !formState.isSubmitting && !done);
 
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
     try {
       await fetchJson('/api/password-reset', { method: 'POST', body: JSON.stringify({ token, newPassword: values.newPassword }) });
+      setDone(true);
       router.replace('/sign-in?passwordSet=1');
     } catch (e) {
       const issue = e instanceof ApiError ? e.body.issues?.find((i) => i.path === 'newPassword') : undefined;

@@ -1,6 +1,7 @@
 'use client';
 import { useState } from 'react';
 import { useRouter } from 'next/navigation';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 export interface TrainingScene {
   id: number;
@@ -30,6 +31,10 @@ export function LessonForm({ scenes, initial }: { scenes: TrainingScene[]; initi
   const [steps, setSteps] = useState<StepDraft[]>(initial?.steps ?? [blank()]);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  // Dirty while the title or steps differ from what the page opened with; not after a save has begun.
+  const [opened] = useState(() => JSON.stringify({ title, steps }));
+  const [leaving, setLeaving] = useState(false);
+  useLeaveGuard(!leaving && JSON.stringify({ title, steps }) !== opened);
   const edit = (i: number, patch: Partial<StepDraft>) => setSteps(steps.map((s, k) => (k === i ? { ...s, ...patch } : s)));
   const move = (i: number, d: -1 | 1) => {
     const next = [...steps];
@@ -53,6 +58,7 @@ export function LessonForm({ scenes, initial }: { scenes: TrainingScene[]; initi
         const json = await res.json().catch(() => ({}));
         setBusy(false);
         if (!res.ok) return setError(json.error ?? `Could not save (${res.status})`);
+        setLeaving(true);
         router.push(`/lessons/${json.id}`);
         router.refresh();
       }}

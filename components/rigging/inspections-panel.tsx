@@ -9,6 +9,7 @@ import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { Badge } from '@/components/ui/badge';
 import { fetchJson } from '@/lib/client/fetch-json';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 interface Inspection {
   id: number;
@@ -24,6 +25,7 @@ export function InspectionsPanel({ itemId, items, canRecord, today }: { itemId: 
   const router = useRouter();
   const [form, setForm] = useState({ inspectedOn: today, result: 'pass', nextDue: '', notes: '' });
   const [error, setError] = useState<string | null>(null);
+  useLeaveGuard(canRecord && (form.inspectedOn !== today || form.result !== 'pass' || form.nextDue !== '' || form.notes.trim() !== ''));
   const submit = async () => {
     setError(null);
     try {

@@ -13,6 +13,7 @@ import { Notice } from '@/components/ui/notice';
 import { SelectField } from '@/components/ui/select';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { createSceneSchema } from '@/lib/validations/scenes';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 // The form holds the truck choice as the select's string; it becomes the server schema's number|null on submit,
 // and the result goes through the very schema the route handler uses.
@@ -44,6 +45,8 @@ export function NewSceneForm() {
       }
     },
   });
+
+  useLeaveGuard(formState.isDirty && !create.isPending && !create.isSuccess);
 
   const onSubmit = handleSubmit((v) => {
     const body = createSceneSchema.parse({ title: v.title, equipmentProfileId: v.truck ? Number(v.truck) : null });

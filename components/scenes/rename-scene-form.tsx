@@ -13,6 +13,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, fetchJson } from '@/lib/client/fetch-json';
 import { sceneTitle, updateSceneSchema } from '@/lib/validations/scenes';
+import { useLeaveGuard } from '@/components/use-leave-guard';
 
 const formSchema = z.object({ title: sceneTitle });
 
@@ -39,6 +40,8 @@ export function RenameSceneForm({ sceneId, title, revision }: Props) {
     setBase(revision);
   }
   useEffect(() => reset({ title }), [revision, title, reset]);
+
+  useLeaveGuard(formState.isDirty && !formState.isSubmitting);
 
   const save = useMutation({
     mutationFn: (body: z.infer<typeof updateSceneSchema>) => fetchJson<Scene>(`/api/scenes/${sceneId}`, { method: 'PUT', body: JSON.stringify(body) }),
