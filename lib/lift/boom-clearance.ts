@@ -55,12 +55,16 @@ function planSegmentPolygon(ax: number, ay: number, bx: number, by: number, poly
       planT = len2 > 0 ? Math.min(1, Math.max(0, ((cx - ax) * dx + (cy - ay) * dy) / len2)) : 0;
     }
   }
-  for (const [t, x, y] of [[0, ax, ay], [1, bx, by]] as const) {
-    const d = pointPolygonDistance(x, y, poly, n);
-    if (d * d < best) {
-      best = d * d;
-      planT = t;
-    }
+  // The two ends of a–b (no arrays: this runs thousands of times per analysis).
+  const d0 = pointPolygonDistance(ax, ay, poly, n);
+  if (d0 * d0 < best) {
+    best = d0 * d0;
+    planT = 0;
+  }
+  const d1 = pointPolygonDistance(bx, by, poly, n);
+  if (d1 * d1 < best) {
+    best = d1 * d1;
+    planT = 1;
   }
   return Math.sqrt(best);
 }
@@ -85,19 +89,41 @@ export function boomAxisToPrism(px: number, py: number, pz: number, qx: number, 
     if (best === 0) return 0;
   }
   // Above the top: the two ends of the upper piece straight over the face, and the face's edges.
-  const up = lo1 < lo0 ? [0, 1] : dz > 0 ? [Math.max(0, lo1), 1] : [0, Math.min(1, lo0)];
-  if (up[1] <= up[0] && lo1 >= lo0) return best;
-  const [u0, u1] = up;
+  let u0: number, u1: number;
+  if (lo1 < lo0) {
+    u0 = 0;
+    u1 = 1;
+  } else if (dz > 0) {
+    u0 = Math.max(0, lo1);
+    u1 = 1;
+  } else {
+    u0 = 0;
+    u1 = Math.min(1, lo0);
+  }
+  if (u1 <= u0 && lo1 >= lo0) return best;
   const sx = px + (qx - px) * u0, sy = py + (qy - py) * u0, sz = pz + dz * u0;
   const ex = px + (qx - px) * u1, ey = py + (qy - py) * u1, ez = pz + dz * u1;
-  for (const [u, x, y, z] of [[u0, sx, sy, sz], [u1, ex, ey, ez]] as const) {
-    if (z - t.top < best && pointInPolygon(x, y, t.poly, t.n)) {
-      best = z - t.top;
-      nearestU = u;
-    }
+  const top = t.top, poly = t.poly, n = t.n;
+  if (sz - top < best && pointInPolygon(sx, sy, poly, n)) {
+    best = sz - top;
+    nearestU = u0;
   }
-  for (let i = 0, j = t.n - 1; i < t.n; j = i++) {
-    const d = segmentSegmentDistance(sx, sy, sz, ex, ey, ez, t.poly[2 * j], t.poly[2 * j + 1], t.top, t.poly[2 * i], t.poly[2 * i + 1], t.top);
+  if (ez - top < best && pointInPolygon(ex, ey, poly, n)) {
+    best = ez - top;
+    nearestU = u1;
+  }
+  // An edge whose plan box lies farther from the upper piece's plan box than the best so far cannot be
+  // nearer (the 3D distance is at least the plan distance); the margin covers rounding, so the minimum
+  // found is the same as without the test.
+  const x0 = sx < ex ? sx : ex, x1 = sx < ex ? ex : sx, y0 = sy < ey ? sy : ey, y1 = sy < ey ? ey : sy;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const cx = poly[2 * j], cy = poly[2 * j + 1], fx = poly[2 * i], fy = poly[2 * i + 1];
+    if (best < Infinity) {
+      const gx = Math.max(0, (cx < fx ? cx : fx) - x1, x0 - (cx < fx ? fx : cx));
+      const gy = Math.max(0, (cy < fy ? cy : fy) - y1, y0 - (cy < fy ? fy : cy));
+      if (gx * gx + gy * gy > best * best * (1 + 1e-9) + 1e-18) continue;
+    }
+    const d = segmentSegmentDistance(sx, sy, sz, ex, ey, ez, cx, cy, top, fx, fy, top);
     if (d < best) {
       best = d;
       nearestU = u0 + (u1 - u0) * closest.s;
@@ -108,15 +134,19 @@ export function boomAxisToPrism(px: number, py: number, pz: number, qx: number, 
 
 /** Gap between the boom's surface and a part at slew `deg`, m (negative: they overlap). */
 export function boomGapAt(p: PreparedLift, t: Target, deg: number): number {
-  const a = (deg * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+  const a = (deg * Math.PI) / 180;
+  return boomGapCS(p, t, Math.cos(a), Math.sin(a));
+}
+
+/** boomGapAt with the slew given as its cosine and sine. */
+function boomGapCS(p: PreparedLift, t: Target, c: number, s: number): number {
   const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
   const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
   return boomAxisToPrism(px, py, p.pivotZ, qx, qy, p.tipZ, t) - p.boomRadius;
 }
 
 /** A cheap lower bound on the gap: bounding circle in plan, and the boom's lowest point in height. */
-function roughBoomGapAt(p: PreparedLift, t: Target, deg: number): number {
-  const a = (deg * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+function roughBoomGapCS(p: PreparedLift, t: Target, c: number, s: number): number {
   const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
   const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
   const plan = Math.sqrt(pointSegmentDist2(t.cx, t.cy, px, py, qx, qy)) - t.r;
@@ -133,10 +163,11 @@ export function boomClearanceOver(p: PreparedLift, t: Target): BoomClearance {
   const lipschitz = (Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) * Math.PI) / 180;
   let best = Infinity;
   const gap = (u: number) => {
-    const deg = slewAt(p, u);
-    const rough = roughBoomGapAt(p, t, deg);
+    // One cosine and sine per angle, shared by the bound and the exact gap.
+    const a = (slewAt(p, u) * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+    const rough = roughBoomGapCS(p, t, c, s);
     if (rough > best * (1 + WALK.tolRel) + 4 * WALK.tolAbs) return rough;
-    const g = Math.max(0, boomGapAt(p, t, deg));
+    const g = Math.max(0, boomGapCS(p, t, c, s));
     if (g < best) best = g;
     return g;
   };

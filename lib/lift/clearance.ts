@@ -30,8 +30,11 @@ let buf = new Float64Array(64);
 /** Plan gap between the load outline at slew `deg` and one target. */
 export function gapAt(p: PreparedLift, target: Target, deg: number): number {
   const a = (deg * Math.PI) / 180;
-  const c = Math.cos(a);
-  const s = Math.sin(a);
+  return gapCS(p, target, Math.cos(a), Math.sin(a));
+}
+
+/** gapAt with the slew given as its cosine and sine. */
+function gapCS(p: PreparedLift, target: Target, c: number, s: number): number {
   const hx = c * p.hookX0 - s * p.hookY0;
   const hy = s * p.hookX0 + c * p.hookY0;
   const fp = p.footprint;
@@ -45,10 +48,9 @@ export function gapAt(p: PreparedLift, target: Target, deg: number): number {
  * A lower bound on the gap from bounding circles: cheap, and as Lipschitz as the gap itself, so the
  * walk can stride on it while it is well above the best gap found.
  */
-function roughGapAt(p: PreparedLift, target: Target, deg: number): number {
-  const a = (deg * Math.PI) / 180;
-  const hx = Math.cos(a) * p.hookX0 - Math.sin(a) * p.hookY0;
-  const hy = Math.sin(a) * p.hookX0 + Math.cos(a) * p.hookY0;
+function roughGapCS(p: PreparedLift, target: Target, c: number, s: number): number {
+  const hx = c * p.hookX0 - s * p.hookY0;
+  const hy = s * p.hookX0 + c * p.hookY0;
   return Math.hypot(hx - target.cx, hy - target.cy) - target.r - p.footprint.reach;
 }
 
@@ -63,11 +65,12 @@ export function clearanceOver(p: PreparedLift, target: Target): Clearance {
   const lipschitz = ((p.radius + p.footprint.reach) * Math.PI) / 180;
   let best = Infinity;
   const gap = (t: number) => {
-    const deg = slewAt(p, t);
-    const rough = roughGapAt(p, target, deg);
+    // One cosine and sine per angle, shared by the bound and the exact gap.
+    const a = (slewAt(p, t) * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
+    const rough = roughGapCS(p, target, c, s);
     // Far above the best so far: the bound is enough to decide the stride.
     if (rough > best * (1 + WALK.tolRel) + 4 * WALK.tolAbs) return rough;
-    const g = gapAt(p, target, deg);
+    const g = gapCS(p, target, c, s);
     if (g < best) best = g;
     return g;
   };

@@ -55,6 +55,32 @@ const DEG = Math.PI / 180;
 const REFINE = 0.01;
 const DEPTH = 5;
 
+/**
+ * What upperReaction works on (module state rather than a closure per support: this runs per placement).
+ * The halvings of sample interval k are the nodes of a binary tree (root 1, children 2j and 2j + 1), the
+ * same slews for every support, so each midpoint is solved once and its reactions kept for the others.
+ */
+const NODES = 2 ** DEPTH;
+const refine = {
+  p: null as unknown as PreparedLift, state: createReactionState(0), i: 0, n: 0, K: 0, best: -Infinity,
+  memo: new Float64Array(0), stamp: new Int32Array(0), generation: 0,
+};
+
+/** Upper bound of support refine.i's reaction between two samples, halving where it could exceed the best. */
+function upperReaction(t0: number, m0: number, t1: number, m1: number, depth: number, node: number): number {
+  const bound = (m0 + m1 + refine.K * (t1 - t0)) / 2;
+  if (depth === 0 || bound <= refine.best + REFINE * Math.abs(refine.best)) return Math.max(bound, m0, m1);
+  const tm = (t0 + t1) / 2;
+  if (refine.stamp[node] !== refine.generation) {
+    refine.memo.set(reactionsAt(refine.p, slewAt(refine.p, tm), refine.state).mass, node * refine.n);
+    refine.stamp[node] = refine.generation;
+  }
+  const mm = refine.memo[node * refine.n + refine.i];
+  refine.best = Math.max(refine.best, mm);
+  const child = node - (node % NODES) + 2 * (node % NODES);
+  return Math.max(upperReaction(t0, m0, tm, mm, depth - 1, child), upperReaction(tm, mm, t1, m1, depth - 1, child + 1));
+}
+
 function reactionBounds(p: PreparedLift, step: number): Float64Array {
   const n = p.supportX.length;
   const W = p.fixedMass + p.rotMass + p.hookLoad;
@@ -66,27 +92,29 @@ function reactionBounds(p: PreparedLift, step: number): Float64Array {
   const state = createReactionState(n);
   const samples = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
   const ts = new Float64Array(samples + 1);
-  const ms: Float64Array[] = [];
+  // Reactions at the samples, flat: ms[k·n + i] is support i at sample k.
+  const ms = new Float64Array((samples + 1) * n);
   for (let k = 0; k <= samples; k++) {
     ts[k] = Math.min(k * step, p.span);
-    ms.push(Float64Array.from(reactionsAt(p, slewAt(p, ts[k]), state).mass));
+    ms.set(reactionsAt(p, slewAt(p, ts[k]), state).mass, k * n);
   }
   const out = new Float64Array(n);
+  refine.p = p;
+  refine.state = state;
+  refine.n = n;
+  if (refine.stamp.length < samples * NODES) refine.stamp = new Int32Array(samples * NODES);
+  if (refine.memo.length < samples * NODES * n) refine.memo = new Float64Array(samples * NODES * n);
+  refine.generation++;
   for (let i = 0; i < n; i++) {
     // Reaction change per degree of slew at most.
     const K = W * slope[i] * rho * DEG;
     let best = -Infinity;
-    for (const m of ms) best = Math.max(best, m[i]);
-    const upper = (t0: number, m0: number, t1: number, m1: number, depth: number): number => {
-      const bound = (m0 + m1 + K * (t1 - t0)) / 2;
-      if (depth === 0 || bound <= best + REFINE * Math.abs(best)) return Math.max(bound, m0, m1);
-      const tm = (t0 + t1) / 2;
-      const mm = reactionsAt(p, slewAt(p, tm), state).mass[i];
-      best = Math.max(best, mm);
-      return Math.max(upper(t0, m0, tm, mm, depth - 1), upper(tm, mm, t1, m1, depth - 1));
-    };
+    for (let k = 0; k <= samples; k++) best = Math.max(best, ms[k * n + i]);
+    refine.i = i;
+    refine.K = K;
+    refine.best = best;
     let b = best;
-    for (let k = 1; k <= samples; k++) b = Math.max(b, upper(ts[k - 1], ms[k - 1][i], ts[k], ms[k][i], DEPTH));
+    for (let k = 1; k <= samples; k++) b = Math.max(b, upperReaction(ts[k - 1], ms[(k - 1) * n + i], ts[k], ms[k * n + i], DEPTH, (k - 1) * NODES + 1));
     out[i] = Math.max(0, b) * (1 + ROUNDING) + ROUNDING * W;
   }
   return out;
@@ -115,24 +143,73 @@ function hookArcDistance(p: PreparedLift, x: number, y: number): number {
 /** Below this a bound is refined by sampling; at or above it the margin is capped anyway (margins.ts). */
 const decisive = (limit: number) => limit + CLEARANCE_MARGIN_CAP * clearanceScale(limit);
 
-function loadGapBound(p: PreparedLift, t: Target, step: number, limit: number): number {
+/**
+ * The sample grid of the clearance bounds, shared by every part and obstacle: arc parameters, slews, the
+ * hook's centre and the boom's ends at each sample (worked out once per analysis, not once per target).
+ */
+interface Samples {
+  count: number;
+  t: Float64Array;
+  deg: Float64Array;
+  hx: Float64Array;
+  hy: Float64Array;
+  px: Float64Array;
+  py: Float64Array;
+  qx: Float64Array;
+  qy: Float64Array;
+}
+
+function samplesOf(p: PreparedLift, step: number): Samples {
+  const n = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
+  const f = () => new Float64Array(n + 1);
+  const out: Samples = { count: n + 1, t: f(), deg: f(), hx: f(), hy: f(), px: f(), py: f(), qx: f(), qy: f() };
+  const hookAngle = Math.atan2(p.hookY0, p.hookX0);
+  for (let k = 0; k <= n; k++) {
+    const t = Math.min(k * step, p.span);
+    const deg = slewAt(p, t);
+    out.t[k] = t;
+    out.deg[k] = deg;
+    const a = deg * DEG + hookAngle;
+    out.hx[k] = p.radius * Math.cos(a);
+    out.hy[k] = p.radius * Math.sin(a);
+    const c = Math.cos(deg * DEG), s = Math.sin(deg * DEG);
+    out.px[k] = c * p.pivotX0 - s * p.pivotY0;
+    out.py[k] = s * p.pivotX0 + c * p.pivotY0;
+    out.qx[k] = c * p.hookX0 - s * p.hookY0;
+    out.qy[k] = s * p.hookX0 + c * p.hookY0;
+  }
+  return out;
+}
+
+/**
+ * lipschitzLowerBound (coarse-bounds.ts) over the shared samples, with the value at sample k given in
+ * `v` (the same arithmetic, so the same bound).
+ */
+function lowerBoundOf(v: Float64Array, s: Samples, lipschitz: number): number {
+  let lb = v[0];
+  for (let k = 1; k < s.count; k++) lb = Math.min(lb, v[k], (v[k - 1] + v[k] - lipschitz * (s.t[k] - s.t[k - 1])) / 2);
+  return lb;
+}
+
+let values = new Float64Array(128);
+
+function loadGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: number, limit: number): number {
   const rough = Math.max(0, hookArcDistance(p, t.cx, t.cy) - t.r - p.footprint.reach);
   if (rough >= decisive(limit) || p.loadBottom - t.top >= decisive(limit)) return rough;
   const lipschitz = (p.radius + p.footprint.reach) * DEG;
   // Any lower bound of the gap at a sample keeps the interval bound valid: the bounding circles where
   // they are far enough apart, the outlines where they come near.
   const far = decisive(limit) + lipschitz * step;
-  const hookAngle = Math.atan2(p.hookY0, p.hookX0);
-  const gap = (u: number) => {
-    const deg = slewAt(p, u);
-    const a = deg * DEG + hookAngle;
-    const circles = Math.hypot(p.radius * Math.cos(a) - t.cx, p.radius * Math.sin(a) - t.cy) - t.r - p.footprint.reach;
-    return circles >= far ? circles : gapAt(p, t, deg);
-  };
-  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
+  const s = samples();
+  if (values.length < s.count) values = new Float64Array(s.count);
+  for (let k = 0; k < s.count; k++) {
+    const circles = Math.hypot(s.hx[k] - t.cx, s.hy[k] - t.cy) - t.r - p.footprint.reach;
+    values[k] = circles >= far ? circles : gapAt(p, t, s.deg[k]);
+  }
+  return Math.max(0, lowerBoundOf(values, s, lipschitz));
 }
 
-function boomGapBound(p: PreparedLift, t: Target, step: number, limit: number): number {
+function boomGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: number, limit: number): number {
   const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0));
   const plan = Math.hypot(t.cx, t.cy) - t.r - reach;
   const above = Math.min(p.pivotZ, p.tipZ) - t.top;
@@ -140,15 +217,13 @@ function boomGapBound(p: PreparedLift, t: Target, step: number, limit: number): 
   if (rough >= decisive(limit)) return rough;
   const lipschitz = reach * DEG;
   const far = decisive(limit) + lipschitz * step;
-  const gap = (u: number) => {
-    const deg = slewAt(p, u);
-    const c = Math.cos(deg * DEG), s = Math.sin(deg * DEG);
-    const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
-    const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
-    const circle = Math.max(Math.sqrt(pointSegmentDist2(t.cx, t.cy, px, py, qx, qy)) - t.r, above) - p.boomRadius;
-    return circle >= far ? circle : boomGapAt(p, t, deg);
-  };
-  return Math.max(0, lipschitzLowerBound(gap, p.span, step, lipschitz));
+  const s = samples();
+  if (values.length < s.count) values = new Float64Array(s.count);
+  for (let k = 0; k < s.count; k++) {
+    const circle = Math.max(Math.sqrt(pointSegmentDist2(t.cx, t.cy, s.px[k], s.py[k], s.qx[k], s.qy[k])) - t.r, above) - p.boomRadius;
+    values[k] = circle >= far ? circle : boomGapAt(p, t, s.deg[k]);
+  }
+  return Math.max(0, lowerBoundOf(values, s, lipschitz));
 }
 
 /**
@@ -162,9 +237,11 @@ function risingBoomGap(p: PreparedLift, t: Target): number {
   if (!(p.tipZ > p.pivotZ) || !(run > 0)) return -Infinity;
   const slope = (p.tipZ - p.pivotZ) / run;
   const start = Math.max(0, Math.hypot(t.cx, t.cy) - t.r) - Math.hypot(p.pivotX0, p.pivotY0);
-  const lb = (s: number) => Math.max(start - s, p.pivotZ + s * slope - t.top);
   const meet = Math.min(run, Math.max(0, (start - p.pivotZ + t.top) / (1 + slope)));
-  return Math.min(lb(0), lb(run), lb(meet));
+  const lb0 = Math.max(start - 0, p.pivotZ + 0 * slope - t.top);
+  const lbRun = Math.max(start - run, p.pivotZ + run * slope - t.top);
+  const lbMeet = Math.max(start - meet, p.pivotZ + meet * slope - t.top);
+  return Math.min(lb0, lbRun, lbMeet);
 }
 
 /** Closed-form lower bound on the distance to a wire: every part swung lies within `reach` of the axis in plan. */
@@ -182,6 +259,9 @@ export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): Coa
   const nominal = reactionBounds(p, step);
   const upper = up ? reactionBounds(up, step) : null;
   const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach;
+  // The shared sample grid, made when the first part or obstacle needs sampling.
+  let grid: Samples | null = null;
+  const samples = () => (grid ??= samplesOf(p, step));
   return {
     percentOfTipping: tippingOnArc(p, p.hookLoad).percent,
     upperPercentOfTipping: up ? tippingOnArc(up, up.hookLoad).percent : null,
@@ -192,8 +272,8 @@ export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): Coa
       pressure: pressureOf(p, i, nominal[i]),
       upperPressure: upper ? pressureOf(p, i, upper[i]) : null,
     })),
-    clearances: p.targets.map((t) => ({ target: t.id, horizontal: loadGapBound(p, t, step, limit), vertical: p.loadBottom - t.top })),
-    boomClearances: p.targets.filter(boomMeets).map((t) => ({ target: t.id, distance: boomGapBound(p, t, step, limit) })),
+    clearances: p.targets.map((t) => ({ target: t.id, horizontal: loadGapBound(p, t, samples, step, limit), vertical: p.loadBottom - t.top })),
+    boomClearances: p.targets.filter(boomMeets).map((t) => ({ target: t.id, distance: boomGapBound(p, t, samples, step, limit) })),
     powerLines: p.powerLines.map((l) => {
       const required = requiredClearance(l).required;
       const rough = wireRough(p, l, reach);

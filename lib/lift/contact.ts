@@ -29,12 +29,47 @@ interface Model {
   edges: Edge[];
   /** Largest coordinate magnitude, m: the scale of the tolerances. */
   scale: number;
+  /**
+   * The sums of fitPlane per contact set, filled as they are first needed (layouts of up to FIT_CACHE
+   * supports): FIT fields per mask. They depend only on the layout, and a search solves one layout
+   * thousands of times.
+   */
+  fits: Float64Array | null;
 }
 
+const FIT_CACHE = 10;
+/** Fields per contact set in Model.fits: known (0 not yet, 1 fits, 2 on one line), count, x̄, ȳ, suu, suv, svv, det. */
+const FIT = 8;
+
 const models = new WeakMap<Float64Array, Model>();
-const same = (a: Float64Array, b: Float64Array) => a.length === b.length && a.every((v, i) => v === b[i]);
+function same(a: Float64Array, b: Float64Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** Recently used models, matched by their coordinates (a search prepares the same layout many times over). */
+const recent: Model[] = [];
+const RECENT = 16;
 
 function modelOf(xs: Float64Array, ys: Float64Array): Model {
+  for (let k = 0; k < recent.length; k++) {
+    const m = recent[k];
+    if (same(m.xs, xs) && same(m.ys, ys)) {
+      if (k > 0) {
+        recent.splice(k, 1);
+        recent.unshift(m);
+      }
+      return m;
+    }
+  }
+  const m = modelFor(xs, ys);
+  recent.unshift(m);
+  if (recent.length > RECENT) recent.pop();
+  return m;
+}
+
+function modelFor(xs: Float64Array, ys: Float64Array): Model {
   const hit = models.get(xs);
   if (hit && same(hit.xs, xs) && same(hit.ys, ys)) return hit;
   const pts = Array.from(xs, (x, i) => ({ id: String(i), x, y: ys[i] }));
@@ -48,14 +83,15 @@ function modelOf(xs: Float64Array, ys: Float64Array): Model {
   });
   let scale = 1;
   for (let i = 0; i < xs.length; i++) scale = Math.max(scale, Math.abs(xs[i]), Math.abs(ys[i]));
-  const m = { xs: Float64Array.from(xs), ys: Float64Array.from(ys), edges, scale };
+  const fits = xs.length <= FIT_CACHE ? new Float64Array(2 ** xs.length * FIT) : null;
+  const m = { xs: Float64Array.from(xs), ys: Float64Array.from(ys), edges, scale, fits };
   models.set(xs, m);
   return m;
 }
 
-/** The plane a + b·(x − x̄) + c·(y − ȳ) fitted on the supports in `mask`; false when they lie on one line. */
-const plane = { a: 0, b: 0, c: 0, mx: 0, my: 0 };
-function fitPlane(xs: Float64Array, ys: Float64Array, mask: number, W: number, Mx: number, My: number): boolean {
+/** fitPlane's sums for the supports in `mask`, into fitSums: false when fewer than three or on one line. */
+const fitSums = { n: 0, mx: 0, my: 0, suu: 0, suv: 0, svv: 0, det: 0 };
+function sumsOf(xs: Float64Array, ys: Float64Array, mask: number): boolean {
   let n = 0, sx = 0, sy = 0;
   for (let i = 0; i < xs.length; i++) {
     if (!(mask & (1 << i))) continue;
@@ -69,9 +105,34 @@ function fitPlane(xs: Float64Array, ys: Float64Array, mask: number, W: number, M
     const u = xs[i] - mx, v = ys[i] - my;
     suu += u * u; suv += u * v; svv += v * v;
   }
-  // Centred normal equations: a = W/n, and a 2×2 system for the slopes.
   const det = suu * svv - suv * suv;
   if (!(det > 1e-12 * (suu + svv) * (suu + svv))) return false;
+  fitSums.n = n; fitSums.mx = mx; fitSums.my = my; fitSums.suu = suu; fitSums.suv = suv; fitSums.svv = svv; fitSums.det = det;
+  return true;
+}
+
+/** The plane a + b·(x − x̄) + c·(y − ȳ) fitted on the supports in `mask`; false when they lie on one line. */
+const plane = { a: 0, b: 0, c: 0, mx: 0, my: 0 };
+function fitPlane(m: Model, mask: number, W: number, Mx: number, My: number): boolean {
+  const f = m.fits;
+  let n: number, mx: number, my: number, suu: number, suv: number, svv: number, det: number;
+  if (f) {
+    const o = mask * FIT;
+    if (f[o] === 0) {
+      const ok = sumsOf(m.xs, m.ys, mask);
+      f[o] = ok ? 1 : 2;
+      if (ok) {
+        f[o + 1] = fitSums.n; f[o + 2] = fitSums.mx; f[o + 3] = fitSums.my;
+        f[o + 4] = fitSums.suu; f[o + 5] = fitSums.suv; f[o + 6] = fitSums.svv; f[o + 7] = fitSums.det;
+      }
+    }
+    if (f[o] === 2) return false;
+    n = f[o + 1]; mx = f[o + 2]; my = f[o + 3]; suu = f[o + 4]; suv = f[o + 5]; svv = f[o + 6]; det = f[o + 7];
+  } else {
+    if (!sumsOf(m.xs, m.ys, mask)) return false;
+    ({ n, mx, my, suu, suv, svv, det } = fitSums);
+  }
+  // Centred normal equations: a = W/n, and a 2×2 system for the slopes.
   const px = Mx - W * mx, py = My - W * my;
   plane.a = W / n;
   plane.b = (svv * px - suv * py) / det;
@@ -107,6 +168,13 @@ function write(xs: Float64Array, ys: Float64Array, mask: number, out: ContactSol
   }
 }
 
+/** Contact sets tried by the current solve; at most 4n + 8 ≤ 72 of them (n ≤ 16). */
+const seen = new Int32Array(72);
+function wasTried(mask: number, count: number): boolean {
+  for (let i = 0; i < count; i++) if (seen[i] === mask) return true;
+  return false;
+}
+
 /** Solves for weight W (kg) with first moments Mx, My (kg·m) about the axis; writes into `out`. */
 export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: number, My: number, out: ContactSolution): ContactSolution {
   const n = xs.length;
@@ -114,7 +182,8 @@ export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: 
   out.mass.fill(0);
   out.active.fill(0);
   if (!(W > 0)) return out;
-  const { edges, scale } = modelOf(xs, ys);
+  const model = modelOf(xs, ys);
+  const { edges, scale } = model;
   const cx = Mx / W, cy = My / W;
   let worst = edges[0];
   let outside = -Infinity;
@@ -134,10 +203,11 @@ export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: 
   // Contact sets as bit masks: the schema allows at most 16 supports.
   const all = 2 ** n - 1;
   let mask = all;
-  const seen = new Set<number>();
-  for (let k = 0; k < 4 * n + 8 && !seen.has(mask); k++) {
-    seen.add(mask);
-    if (!fitPlane(xs, ys, mask, W, Mx, My)) break;
+  // Contact sets tried so far (a plain list: a Set per call cost more than the solve on four supports).
+  let tried = 0;
+  for (let k = 0; k < 4 * n + 8 && !wasTried(mask, tried); k++) {
+    seen[tried++] = mask;
+    if (!fitPlane(model, mask, W, Mx, My)) break;
     let next = 0;
     for (let i = 0; i < n; i++) if (pressOf(xs[i], ys[i]) > 0) next |= 1 << i;
     if (next === mask || satisfies(xs, ys, mask, tol)) {
@@ -150,7 +220,7 @@ export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: 
   let best = -1;
   let bestViolation = Infinity;
   for (let m = 1; m <= all; m++) {
-    if (!fitPlane(xs, ys, m, W, Mx, My)) continue;
+    if (!fitPlane(model, m, W, Mx, My)) continue;
     let violation = 0;
     for (let i = 0; i < n; i++) {
       const w = pressOf(xs[i], ys[i]);
@@ -161,7 +231,7 @@ export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: 
       best = m;
     }
   }
-  if (best >= 0 && fitPlane(xs, ys, best, W, Mx, My)) write(xs, ys, best, out);
+  if (best >= 0 && fitPlane(model, best, W, Mx, My)) write(xs, ys, best, out);
   else limitState(xs, ys, worst, W, cx, cy, out);
   return out;
 }
