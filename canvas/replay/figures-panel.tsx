@@ -3,6 +3,7 @@ import { useEditorState } from '../editor-context';
 import { formatLength, formatPressure } from '@/lib/format/quantity';
 import { cx } from '@/components/ui/cx';
 import { clearanceFigure } from '@/lib/replay/headline-figures';
+import { knownPadName, tippingLineLabel } from '@/lib/lift/names';
 
 const pct = (v: number) => `${v.toFixed(1)} %`;
 
@@ -51,12 +52,12 @@ export function FiguresPanel({ big = false, hidden = false }: { big?: boolean; h
               {governing ? pct(governing.percentOfTipping) : 'tips unloaded'}
             </p>
             <p className={big ? 'text-[28px]' : 'text-sm'}>
-              {governing ? `about tipping line ${governing.line}` : `tips about ${snap.tipsUnloadedAbout} with nothing on the hook`} · limit {doc.limits.percentOfTipping} %{over ? ' · over limit' : ''}
+              {governing ? `about ${tippingLineLabel(governing.line)}` : `tips about ${tippingLineLabel(snap.tipsUnloadedAbout ?? '')} with nothing on the hook`} · limit {doc.limits.percentOfTipping} %{over ? ' · over limit' : ''}
             </p>
           </div>
           {a.result && (
             <p className={big ? 'text-[28px]' : 'text-sm'} data-testid="replay-worst">
-              Worst over the swing: <b>{pct(a.result.worstCase.percentOfTipping)}</b> at {a.result.worstCase.slew.toFixed(1)}° about {a.result.worstCase.line}
+              Worst over the swing: <b>{pct(a.result.worstCase.percentOfTipping)}</b> at {a.result.worstCase.slew.toFixed(1)}° about {tippingLineLabel(a.result.worstCase.line)}
             </p>
           )}
           <div>
@@ -72,8 +73,10 @@ export function FiguresPanel({ big = false, hidden = false }: { big?: boolean; h
                 const share = Math.min(1, r.groundPressure / allow);
                 const overPad = r.groundPressure > allow;
                 return (
-                  <li key={r.support} className={cx('grid items-center gap-2', big ? 'grid-cols-[4rem_1fr_11rem] text-[28px]' : 'grid-cols-[2.5rem_1fr_6.5rem] text-sm')}>
-                    <span className="font-semibold">{r.support}</span>
+                  <li key={r.support} className={cx('grid items-center gap-2', big ? 'grid-cols-[13rem_1fr_11rem] text-[28px]' : 'grid-cols-[7rem_1fr_6.5rem] text-sm')}>
+                    <span className="truncate font-semibold" title={r.support}>
+                      {knownPadName(r.support) ?? r.support} {knownPadName(r.support) && <span className="font-normal opacity-70">{r.support}</span>}
+                    </span>
                     <span className={cx('relative block overflow-hidden rounded-sm border', big ? 'h-7 border-paper/60' : 'h-3.5 border-ink/40')}>
                       <span
                         className={cx('absolute inset-y-0 left-0', overPad ? 'bg-over' : big ? 'bg-signal' : 'bg-teal')}

@@ -7,7 +7,7 @@ import { createEditorStore } from '../store/editor-store';
 import { createEditor } from '../editor/create-editor';
 import { EditorContext } from '../editor-context';
 import { attachLiveAnalysis } from '../analysis/live-analysis';
-import { fitToScene } from '../editor/actions';
+import { useAutoFit } from '../view/use-auto-fit';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
 import type { UnitSystem } from '@/lib/units';
@@ -58,6 +58,7 @@ export function ReplayRoom(props: ReplayRoomProps) {
   const [ghost] = useState(() => (props.compare ? make(props.compare.document, props.compare.revision) : null));
   const rate = profileSlewRate(props.profiles.find((p) => p.id === ctx.store.getState().truck?.profileId && p.version === ctx.store.getState().truck?.profileVersion)?.spec) ?? DEFAULT_SLEW_DEG_PER_S;
   const playback = usePlayback(ctx.store, rate);
+  useAutoFit(ctx);
   const [hidden, setHidden] = useState(false);
   const [sandbox, setSandbox] = useState(false);
   const [whatIf, setWhatIf] = useState<WhatIf>({});
@@ -70,11 +71,7 @@ export function ReplayRoom(props: ReplayRoomProps) {
   useEffect(() => {
     const detach = attachLiveAnalysis(ctx.store, { deferFull: (run) => setTimeout(run, 0) });
     window.__arclineReplay = { store: ctx.store, playback };
-    const t = setTimeout(() => fitToScene(ctx.editor), 30);
-    return () => {
-      clearTimeout(t);
-      detach();
-    };
+    return detach;
   }, [ctx]); // eslint-disable-line react-hooks/exhaustive-deps
   useEffect(() => {
     window.__arclineReplay = { store: ctx.store, playback };

@@ -1,12 +1,12 @@
 'use client';
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import Link from 'next/link';
 import { useStore } from 'zustand';
 import { createEditorStore } from '../store/editor-store';
 import { createEditor } from '../editor/create-editor';
 import { EditorContext } from '../editor-context';
 import { attachLiveAnalysis } from '../analysis/live-analysis';
-import { fitToScene } from '../editor/actions';
+import { useAutoFit } from '../view/use-auto-fit';
 import { ReplayPlan } from '../replay/replay-plan';
 import type { SceneDocument } from '@/lib/scene/schema';
 import type { TruckProfileInput } from '@/lib/scene/truck/from-spec';
@@ -53,32 +53,12 @@ export function ReviewDesk(p: ReviewDeskProps) {
   const open = comments.threads.filter((t) => !t.resolved).length;
   const mayDecide = p.decisionRefusal === null && p.submission !== null;
 
-  // A phone turned, or a window resized: the plan fits again, unless the reviewer has zoomed or panned it.
-  const autoFit = useRef(true);
-  const fitting = useRef(false);
-  const fit = useCallback(() => {
-    fitting.current = true;
-    fitToScene(ctx.editor);
-    fitting.current = false;
-    autoFit.current = true;
-  }, [ctx]);
-  useEffect(
-    () =>
-      ctx.store.subscribe((s, prev) => {
-        if (s.viewport !== prev.viewport && autoFit.current) fit();
-        else if (s.camera !== prev.camera && !fitting.current) autoFit.current = false;
-      }),
-    [ctx, fit],
-  );
+  const fit = useAutoFit(ctx);
   useEffect(() => {
     const detach = attachLiveAnalysis(ctx.store, { deferFull: (run) => setTimeout(run, 0) });
-    const t = setTimeout(fit, 30);
     ctx.store.getState().set({ scrubSlew: arcOf(ctx.store.getState().document.swing).from });
-    return () => {
-      clearTimeout(t);
-      detach();
-    };
-  }, [ctx, fit]);
+    return detach;
+  }, [ctx]);
   // The ghost (the last reviewed revision) follows the view and the slew shown.
   useEffect(() => {
     if (!ghost) return;

@@ -40,6 +40,9 @@ export function padName(id: string, x: number, y: number): string {
   return `${y > 0 ? 'left' : 'right'} ${along} ${id}`;
 }
 
+/** The crews' name for a known leg code ("left front" for FL), or null for a code of a profile's own. */
+export const knownPadName = (id: string): string | null => KNOWN[id] ?? null;
+
 /** A pad named from its code alone, for a figure that kept only the code: "front jack (FJ)", else "pad P7". */
 export function padLabel(id: string): string {
   const known = KNOWN[id];

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { HARROW_SCENES, signIn } from './helpers';
+import { HARROW_SCENES, screens, signIn } from './helpers';
 
 /** The trainer's replay room: play, the worst case against the engine, compare, a lesson, and a what-if. */
 
@@ -37,7 +37,7 @@ test('a trainer plays a replay, jumps to the worst case, compares revisions, pre
   // ...and the server's own figures for the saved revision agree.
   const saved = await (await page.request.get(`/api/scenes/${id}/revisions/3`)).json();
   expect(saved.analysis.worstCase.percentOfTipping).toBeCloseTo(analyzed.worstCase.percentOfTipping, 9);
-  await page.screenshot({ path: 'test-results/screens/replay-laptop.png' });
+  await screens(page, 'replay', ['laptop', 'tablet-portrait', 'tablet-landscape']);
 
   // Compare revision 1 (outriggers short) with revision 3: ghost plus a before/after table.
   await page.getByTestId('revision-timeline').getByRole('link', { name: 'Compare with 3' }).last().click();
