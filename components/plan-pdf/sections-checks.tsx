@@ -2,6 +2,7 @@ import { Text, View } from '@react-pdf/renderer';
 import { dualLength, dualMass } from '@/lib/format/dual';
 import type { PlanData } from './plan-data';
 import { StabilityChart } from './stability-chart';
+import { tippingLineLabel } from '@/lib/lift/names';
 import { Table } from './table';
 import { powerRuleWords } from '@/lib/format/checks';
 import { ftToM } from '@/lib/units';
@@ -17,21 +18,24 @@ export function StabilitySection({ d }: { d: PlanData }) {
   const w = r.worstCase;
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={120}>Stability</Text>
-      <Text style={s.p}>
-        Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan’s limit is {limit} %
-        {w.percentOfTipping <= limit ? `, a margin of ${(limit - w.percentOfTipping).toFixed(1)} points.` : `; ${(w.percentOfTipping - limit).toFixed(1)} points over it.`}
-        {w.tippingLoad !== null ? ` A hook load of ${dualMass(w.tippingLoad, u)} would reach the tipping point there.` : ''}
-      </Text>
+      {/* The heading keeps its first paragraph with it, never alone at the foot of a page. */}
+      <View wrap={false}>
+        <Text style={s.h2} minPresenceAhead={120}>Stability</Text>
+        <Text style={s.p}>
+          Worst case: {pct(w.percentOfTipping)} of tipping at slew {deg(w.slew)}, governing tipping line: {governingLineWords(r.checks, w.line)}. The plan’s limit is {limit} %
+          {w.percentOfTipping <= limit ? `, a margin of ${(limit - w.percentOfTipping).toFixed(1)} points.` : `; ${(w.percentOfTipping - limit).toFixed(1)} points over it.`}
+          {w.tippingLoad !== null ? ` A hook load of ${dualMass(w.tippingLoad, u)} would reach the tipping point there.` : ''}
+        </Text>
+      </View>
       {r.upperWeight && (
         <Text style={s.p}>
-          At the upper weight ({dualMass(r.upperWeight.loadMass, u)}): {pct(r.upperWeight.worstCase.percentOfTipping)} at slew {deg(r.upperWeight.worstCase.slew)}, line {r.upperWeight.worstCase.line}.
+          At the upper weight ({dualMass(r.upperWeight.loadMass, u)}): {pct(r.upperWeight.worstCase.percentOfTipping)} at slew {deg(r.upperWeight.worstCase.slew)}, about {tippingLineLabel(r.upperWeight.worstCase.line)}.
         </Text>
       )}
       <View wrap={false}>
         <StabilityChart r={r} limit={limit} />
       </View>
-      {r.lineChanges.length > 0 && <Text style={s.p}>The governing line changes {r.lineChanges.map((c) => `from ${c.from} to ${c.to} at ${deg(c.slew)}`).join('; ')}.</Text>}
+      {r.lineChanges.length > 0 && <Text style={s.p}>The governing line changes {r.lineChanges.map((c) => `from ${tippingLineLabel(c.from)} to ${tippingLineLabel(c.to)} at ${deg(c.slew)}`).join('; ')}.</Text>}
     </View>
   );
 }

@@ -6,6 +6,8 @@ import type { PlanData } from './plan-data';
 import { KeyValues, Table } from './table';
 import { checkWords, deg } from './format';
 import { s } from './styles';
+import { knownPadName } from '@/lib/lift/names';
+import { kindLabel } from '@/components/rigging/labels';
 
 /** Equipment configuration, load, rigging and ground: the set-up the figures rest on. */
 export function EquipmentSection({ d }: { d: PlanData }) {
@@ -28,8 +30,8 @@ export function EquipmentSection({ d }: { d: PlanData }) {
       />
       <Text style={s.h3} minPresenceAhead={40}>Outriggers</Text>
       <Table
-        columns={[{ title: 'Leg', flex: 1 }, { title: 'Extension', flex: 3 }, { title: 'Cribbing or mat', flex: 4 }]}
-        rows={Object.entries(t.legs).map(([id, leg]) => [id, dualLength(leg.extension, u), leg.cribbing ? `${leg.cribbing.label || 'Cribbing'}: ${dualArea(leg.cribbing.area, u)}, ${dualMass(leg.cribbing.mass, u)}` : 'None'])}
+        columns={[{ title: 'Leg', flex: 2 }, { title: 'Extension', flex: 3 }, { title: 'Cribbing or mat', flex: 4 }]}
+        rows={Object.entries(t.legs).map(([id, leg]) => [knownPadName(id) ? `${id} (${knownPadName(id)})` : id, dualLength(leg.extension, u), leg.cribbing ? `${leg.cribbing.label || 'Cribbing'}: ${dualArea(leg.cribbing.area, u)}, ${dualMass(leg.cribbing.mass, u)}` : 'None'])}
       />
     </View>
   );
@@ -76,7 +78,7 @@ export function RiggingSection({ d }: { d: PlanData }) {
           ]}
           rows={d.rigging.map((r) => [
             r.pick.tag,
-            `${r.pick.kind}, ${r.pick.legs} × ${r.pick.hitch}`,
+            `${kindLabel(r.pick.kind)}, ${r.pick.legs} × ${r.pick.hitch}`,
             `${r.pick.angleFromHorizontal}° from horizontal`,
             r.capacityKg !== null ? dualMass(r.capacityKg, u) : dualMass(r.pick.ratingKg, u),
             r.demandKg !== null && r.capacityKg ? `${Math.round((100 * r.demandKg) / r.capacityKg)} %` : '-',
