@@ -56,11 +56,12 @@ export function LoadChartGrid({ value, onChange, units, disabled, errors }: { va
 
   return (
     <div className="space-y-3">
-      <div className="overflow-x-auto rounded-plate border border-paper-line">
-        <table className="border-collapse text-left" aria-label="Load chart">
-          <thead className="bg-paper-sunk">
+      {/* The grid scrolls inside its card, both ways, with the boom lengths and radii kept in view. */}
+      <div role="region" className="max-h-[30rem] overflow-auto overscroll-contain rounded-plate border border-paper-line" data-testid="load-chart-scroller" tabIndex={0} aria-label="Load chart grid (scrolls)">
+        <table className="border-separate border-spacing-0 text-left" aria-label="Load chart">
+          <thead className="sticky top-0 z-20 bg-paper-sunk">
             <tr>
-              <th scope="col" className="px-2 py-1 text-caption text-ink-soft">
+              <th scope="col" className="sticky left-0 z-30 bg-paper-sunk px-2 py-1 text-caption text-ink-soft">
                 Radius ↓ / boom →
               </th>
               {value.boomLengths.map((b, j) => (
@@ -77,8 +78,8 @@ export function LoadChartGrid({ value, onChange, units, disabled, errors }: { va
           </thead>
           <tbody>
             {value.radii.map((r, i) => (
-              <tr key={i} className="border-t border-paper-line">
-                <th scope="row" className="min-w-[8.5rem] px-1 py-1">
+              <tr key={i}>
+                <th scope="row" className="sticky left-0 z-10 min-w-[8.5rem] border-t border-r border-paper-line bg-paper-raised px-1 py-1">
                   <UnitInput bare label={`Radius, row ${i + 1}`} quantity="length" units={units} value={r} disabled={disabled} error={errAt(`spec.loadChart.radii.${i}`)} onChange={(v) => onChange({ ...value, radii: value.radii.map((x, k) => (k === i ? (v ?? NaN) : x)) })} />
                   {!disabled && value.radii.length > 1 && (
                     <button type="button" className="mt-0.5 min-h-touch text-caption text-over underline" onClick={() => removeRow(i)}>
@@ -87,7 +88,7 @@ export function LoadChartGrid({ value, onChange, units, disabled, errors }: { va
                   )}
                 </th>
                 {value.boomLengths.map((_, j) => (
-                  <td key={j} className="px-1 py-1 align-top">
+                  <td key={j} className="border-t border-paper-line px-1 py-1 align-top">
                     <UnitInput bare label={`Rated load at row ${i + 1}, column ${j + 1}`} quantity="mass" units={units} value={value.rated[i]?.[j] ?? null} disabled={disabled} error={errAt(`spec.loadChart.rated.${i}.${j}`)} onChange={(v) => setCell(i, j, v)} />
                   </td>
                 ))}

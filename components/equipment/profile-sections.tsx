@@ -4,7 +4,9 @@ import { useContext } from 'react';
 import { useController, useFieldArray, useFormContext, type FieldValues } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/select';
-import { FormUnits, NumField, Row, Section, SubHeading, TextInput, useFieldError } from './form-fields';
+import { FormUnits, NumField, Row, Section, SubHeading, TextInput, collectIssues, useFieldError } from './form-fields';
+
+export { collectIssues } from './form-fields';
 import { LoadChartGrid } from './load-chart-grid';
 import { formatLength } from '@/lib/format/quantity';
 import { BOOM_WIDTH } from '@/lib/lift/schema';
@@ -253,15 +255,3 @@ export function LoadChartSection({ serverIssues }: { serverIssues: { path: strin
   );
 }
 
-/** Flattens react-hook-form's nested errors under `prefix` into path/message pairs. */
-export function collectIssues(errors: unknown, prefix: string): { path: string; message: string }[] {
-  const out: { path: string; message: string }[] = [];
-  const walk = (node: unknown, path: string) => {
-    if (!node || typeof node !== 'object') return;
-    const n = node as { message?: unknown; type?: unknown };
-    if (typeof n.message === 'string' && n.type !== undefined) out.push({ path, message: n.message });
-    for (const [k, v] of Object.entries(node)) if (k !== 'ref' && k !== 'message' && k !== 'type' && k !== 'types') walk(v, `${path}.${k}`);
-  };
-  walk(prefix.split('.').reduce<unknown>((o, k) => (o && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), errors), prefix);
-  return out;
-}

@@ -20,6 +20,12 @@ test('an admin builds a truck profile from scratch, pastes its load chart and se
 
   await page.getByLabel('Unit number').fill('HR-9');
   await page.getByLabel('Name', { exact: true }).fill('Shop rotator (example values)');
+  // The long form opens on Identity alone; a section opens from its heading.
+  const carrier = page.getByRole('button', { name: 'Carrier', exact: true });
+  await expect(carrier).toHaveAttribute('aria-expanded', 'false');
+  await expect(page.getByRole('textbox', { name: 'Overall length' })).toHaveCount(0);
+  await carrier.click();
+  await expect(carrier).toHaveAttribute('aria-expanded', 'true');
   const drawingLength = page.getByTestId('drawing-length');
   await expect(drawingLength).toHaveText('Overall length 32′ 10″');
   // Imperial is the default: type feet and inches, and the drawing redraws as you type.
@@ -29,9 +35,11 @@ test('an admin builds a truck profile from scratch, pastes its load chart and se
   await expect(drawingLength).toHaveText('Overall length 40′ 0″');
   await page.getByRole('textbox', { name: 'Front edge' }).last().fill('40');
 
-  // Saving with the empty starter chart is refused with the row named.
+  // Saving with the empty starter chart is refused with the row named, and the closed Load chart section opens.
+  await expect(page.getByRole('button', { name: 'Load chart', exact: true })).toHaveAttribute('aria-expanded', 'false');
   await page.getByRole('button', { name: 'Create profile' }).click();
   await expect(page.getByTestId('chart-errors')).toContainText('has no rated loads');
+  await expect(page.getByRole('button', { name: 'Load chart', exact: true })).toHaveAttribute('aria-expanded', 'true');
 
   // Boom 19.7 ft (the starter's 6 m stage); radii 10 and 15 ft; rated loads in lb.
   await pasteInto(page, '#chart-paste', '\t19.7\n10\t20000\n15\t15000\n');
@@ -41,6 +49,7 @@ test('an admin builds a truck profile from scratch, pastes its load chart and se
   await page.getByRole('button', { name: 'Create profile' }).click();
   await expect(page).toHaveURL(/\/equipment\/\d+\?created=1$/);
   await expect(page.getByText('Profile saved as version 1.')).toBeVisible();
+  await page.getByRole('button', { name: 'Open all sections' }).click();
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('HR-9 · Shop rotator (example values)');
   await expect(page.getByTestId('drawing-length')).toHaveText('Overall length 40′ 0″');
 
@@ -62,6 +71,46 @@ test('an admin builds a truck profile from scratch, pastes its load chart and se
   await screens(page, 'equipment-version-view');
 });
 
+test('the load chart grid scrolls inside its section, with its headings in view; the form is far shorter closed', async ({ page }) => {
+  await signIn(page, 'admin@harrow.example');
+  await page.goto('/equipment');
+  await page.getByRole('link', { name: /HR-7/ }).click();
+  const closedHeight = await page.evaluate(() => document.documentElement.scrollHeight);
+  await page.getByRole('link', { name: 'Load chart', exact: true }).click();
+  await expect(page.getByRole('button', { name: 'Load chart', exact: true })).toHaveAttribute('aria-expanded', 'true');
+  // A taller, wider chart than any column can show: twelve more radius rows and four more boom columns.
+  for (let i = 0; i < 12; i++) await page.getByRole('button', { name: '+ Radius row' }).click();
+  for (let i = 0; i < 4; i++) await page.getByRole('button', { name: '+ Boom column' }).click();
+  const scroller = page.getByTestId('load-chart-scroller');
+  const box = await scroller.evaluate((el) => ({ scrollW: el.scrollWidth, clientW: el.clientWidth, scrollH: el.scrollHeight, clientH: el.clientHeight, sectionW: el.closest('section')!.clientWidth }));
+  expect(box.scrollH).toBeGreaterThan(box.clientH);
+  expect(box.scrollW).toBeGreaterThan(box.clientW);
+  expect(box.clientW).toBeLessThanOrEqual(box.sectionW);
+  // The page itself does not widen.
+  expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+  // Scrolled to the far corner, the boom-length row and the radius column stay in view.
+  await scroller.evaluate((el) => el.scrollTo(el.scrollWidth, el.scrollHeight));
+  const inView = async (label: string) => {
+    const r = await page.getByLabel(label).boundingBox();
+    const s = await scroller.boundingBox();
+    return !!r && !!s && r.y >= s.y - 1 && r.y + r.height <= s.y + s.height + 1 && r.x >= s.x - 1 && r.x + r.width <= s.x + s.width + 1;
+  };
+  // Column 1 has scrolled out sideways and row 1 upwards; the sticky headings have not.
+  expect(await inView('Boom length, column 1')).toBe(false);
+  expect(await inView('Rated load at row 1, column 5')).toBe(false);
+  const rows = await page.getByLabel(/^Radius, row \d+$/).count();
+  const cols = await page.getByLabel(/^Boom length, column \d+$/).count();
+  expect(rows).toBeGreaterThanOrEqual(13);
+  expect(await inView(`Radius, row ${rows}`)).toBe(true);
+  expect(await inView(`Boom length, column ${cols}`)).toBe(true);
+  expect(await inView(`Rated load at row ${rows}, column ${cols}`)).toBe(true);
+  await screens(page, 'equipment-load-chart-scrolled', ['laptop', 'tablet-portrait', 'phone']);
+  // Everything closed is a fraction of the open form's height.
+  await page.getByRole('button', { name: 'Open all sections' }).click();
+  const openHeight = await page.evaluate(() => document.documentElement.scrollHeight);
+  expect(closedHeight * 2).toBeLessThan(openHeight);
+});
+
 test('an operator reads a profile but cannot edit it', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
   await page.goto('/equipment');
@@ -70,6 +119,8 @@ test('an operator reads a profile but cannot edit it', async ({ page }) => {
   await expect(page.getByText('Read only')).toBeVisible();
   await expect(page.getByRole('button', { name: 'Save new version' })).toHaveCount(0);
   await expect(page.getByRole('button', { name: 'Duplicate' })).toHaveCount(0);
+  // Reading, the sections still open and close; the fields inside stay read-only.
+  await page.getByRole('button', { name: 'Carrier', exact: true }).click();
   await expect(page.getByRole('textbox', { name: 'Overall length' })).toBeDisabled();
   await expect(page.getByTestId('drawing-length')).toHaveText('Overall length 40′ 0″');
   await screens(page, 'equipment-profile-operator');
