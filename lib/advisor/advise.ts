@@ -47,12 +47,13 @@ export function advise(site: AdvisorSite, options: AdvisorOptions = {}): Advisor
   }
   const area = Math.max(0, box.maxX - box.minX) * Math.max(0, box.maxY - box.minY);
   const spacing = Math.min(3, Math.max(0.5, Math.sqrt(area / GRID_POINTS)));
-  const grid = area > 0 ? search.grid(box, spacing, (f) => progress({ phase: 'grid', fraction: 0.5 * f })) : [];
+  const keep = { n: 6, metres: 2 * spacing, degrees: 2 * 15 };
+  const grid = area > 0 ? search.grid(box, spacing, keep, (f) => progress({ phase: 'grid', fraction: 0.5 * f })) : [];
 
   // 2. Compass search from the best distinct grid points and from the scene's own placement.
   const start = ev.startPlacement();
   const startStands = bodyClear(ground, site.model, start.x, start.y, start.heading, ev.legs) && ev.legs.every((l, i) => padClear(ground, l, start.extensions[i], start.x, start.y, start.heading));
-  const seeds: Scored[] = distinct(grid, 6, 2 * spacing, 2 * 15);
+  const seeds: Scored[] = distinct(grid, keep.n, keep.metres, keep.degrees);
   if (startStands) seeds.push({ pl: start, score: search.score(start) });
   const refined: Scored[] = [];
   seeds.forEach((s, i) => {
@@ -102,7 +103,7 @@ export function advise(site: AdvisorSite, options: AdvisorOptions = {}): Advisor
     pick, set,
     start: startExact ? { leastMargin: startExact.least, figures: figuresOf(startExact.result, site.document) } : null,
     proposals,
-    evaluations: { coarse: ev.coarseCount, exact: ev.exactCount },
+    evaluations: { coarse: ev.coarseCount, exact: ev.exactCount, skipped: ev.skippedCount },
     elapsedMs: performance.now() - t0,
   };
 }

@@ -1,7 +1,7 @@
 import { analyzeLift } from '@/lib/lift/analyze';
-import { analyzeCoarse, coarseMargins, limitsOf } from '@/lib/lift/coarse';
+import { analyzeCoarse, coarseCeiling, coarseMargins, limitsOf } from '@/lib/lift/coarse';
 import { leastMargin, resultMargins } from '@/lib/lift/margins';
-import { prepareLift } from '@/lib/lift/prepare';
+import { prepareLift, type PreparedLift } from '@/lib/lift/prepare';
 import type { LiftResult } from '@/lib/lift/result';
 import type { LiftInput } from '@/lib/lift/schema';
 import { parseLiftInput, withParsedParts } from '@/lib/lift/validate';
@@ -32,6 +32,8 @@ export class Evaluator {
   private readonly supportsByLegs = new Map<string, LiftInput['supports']>();
   coarseCount = 0;
   exactCount = 0;
+  /** Placements left out after their ceiling (coarseCeiling) showed they could not beat the best so far. */
+  skippedCount = 0;
 
   constructor(
     readonly document: SceneDocument,
@@ -85,9 +87,26 @@ export class Evaluator {
     return s;
   }
 
-  /** Least margin from the coarse mode (never above the exact one); −Infinity when it cannot stand. */
-  coarse(pl: Placement): number {
-    this.coarseCount++;
+  /**
+   * Least margin from the coarse mode (never above the exact one); −Infinity when it cannot stand. With a
+   * `floor`, a placement whose ceiling (coarseCeiling) is at or below it is not analysed further: the
+   * ceiling is returned, which is at or below the floor, so "better than the floor" is decided the same way.
+   */
+  coarse(pl: Placement, floor = -Infinity): number {
+    const p = this.prepared(pl);
+    if (!p) return -Infinity;
+    if (floor > -Infinity) {
+      const ceiling = this.ceiling(p);
+      if (ceiling <= floor) {
+        this.skippedCount++;
+        return ceiling;
+      }
+    }
+    return this.coarsePrepared(p);
+  }
+
+  /** The engine input of a placement, prepared; null when the engine refuses it (the supports enclose no area). */
+  prepared(pl: Placement): PreparedLift | null {
     const doc = this.documentFor(pl);
     const truck = doc.objects.find((o): o is TruckObject => o.kind === 'truck')!;
     try {
@@ -98,10 +117,27 @@ export class Evaluator {
         swing: { ...doc.swing },
         site: { ...this.base.site!, x: pl.x, y: pl.y, heading: pl.heading },
       });
-      const p = prepareLift(input);
+      return prepareLift(input);
+    } catch {
+      return null;
+    }
+  }
+
+  /** coarseCeiling of a prepared placement; −Infinity when the truck would tip with nothing on the hook. */
+  ceiling(p: PreparedLift): number {
+    try {
+      return coarseCeiling(p);
+    } catch {
+      return -Infinity;
+    }
+  }
+
+  /** The coarse least margin of a prepared placement; −Infinity when the truck would tip with nothing on the hook. */
+  coarsePrepared(p: PreparedLift): number {
+    this.coarseCount++;
+    try {
       return leastMargin(coarseMargins(analyzeCoarse(p), limitsOf(p))).margin;
     } catch {
-      // The truck would tip with nothing on the hook, or the supports enclose no area.
       return -Infinity;
     }
   }

@@ -67,22 +67,33 @@ export class Search {
     return out;
   }
 
-  /** Coarse score of a placement, −Infinity where it cannot stand or reach. */
-  score(pl: Placement): number {
+  /**
+   * Coarse score of a placement, −Infinity where it cannot stand or reach. With a `floor` (the best score
+   * the caller has), a placement that cannot beat it may get its ceiling instead (Evaluator.coarse): only
+   * "better than the floor" is decided by it, the same way as with the full score.
+   */
+  score(pl: Placement, floor = -Infinity): number {
     this.check();
     if (!this.reaches(pl.x, pl.y)) return -Infinity;
-    return this.ev.coarse(pl);
+    return this.ev.coarse(pl, floor);
   }
 
-  at(x: number, y: number, heading: number): Scored {
+  at(x: number, y: number, heading: number, floor = -Infinity): Scored {
     const extensions = this.reaches(x, y) ? this.longestLegs(x, y, heading) : null;
     if (!extensions) return { pl: { x, y, heading, extensions: [] }, score: -Infinity };
     const pl = { x, y, heading, extensions };
-    return { pl, score: this.score(pl) };
+    return { pl, score: this.score(pl, floor) };
   }
 
-  grid(bounds: { minX: number; minY: number; maxX: number; maxY: number }, spacing: number, progress: (f: number) => void): Scored[] {
-    const out: Scored[] = [];
+  /**
+   * The grid's placements, best first, as far as `keep` needs them: every placement that could be among
+   * the `keep.n` distinct best (distinct() with its metres and degrees). Each standing placement gets its
+   * ceiling (Evaluator.ceiling) first; they are scored fully in falling order of ceiling, and the rest are
+   * left out once the next ceiling is below the n-th distinct best score, which none of them can then
+   * reach. The distinct best are the same as scoring every placement (ties keep the grid's order).
+   */
+  grid(bounds: { minX: number; minY: number; maxX: number; maxY: number }, spacing: number, keep: { n: number; metres: number; degrees: number }, progress: (f: number) => void): Scored[] {
+    const candidates: { pl: Placement; order: number; ceiling: number; p: NonNullable<ReturnType<Evaluator['prepared']>> }[] = [];
     const nx = Math.max(1, Math.round((bounds.maxX - bounds.minX) / spacing));
     const ny = Math.max(1, Math.round((bounds.maxY - bounds.minY) / spacing));
     for (let i = 0; i <= nx; i++) {
@@ -91,13 +102,39 @@ export class Search {
         const y = bounds.minY + ((bounds.maxY - bounds.minY) * j) / ny;
         if (!this.reaches(x, y)) continue;
         for (let h = 0; h < 360; h += HEADING_STEP) {
-          const s = this.at(x, y, h);
-          if (s.score > -Infinity) out.push(s);
+          this.check();
+          const extensions = this.longestLegs(x, y, h);
+          if (!extensions) continue;
+          const pl = { x, y, heading: h, extensions };
+          const p = this.ev.prepared(pl);
+          if (!p) continue;
+          const ceiling = this.ev.ceiling(p);
+          if (ceiling > -Infinity) candidates.push({ pl, order: candidates.length, ceiling, p });
         }
       }
-      progress((i + 1) / (nx + 1));
+      progress((0.5 * (i + 1)) / (nx + 1));
     }
-    return out.sort((a, b) => b.score - a.score);
+    // Falling ceiling; a ceiling that is not a number cannot rule anything out, so it goes first.
+    const key = (c: (typeof candidates)[number]) => (Number.isNaN(c.ceiling) ? Infinity : c.ceiling);
+    const byCeiling = [...candidates].sort((a, b) => key(b) - key(a) || a.order - b.order);
+    const scored: (Scored & { order: number })[] = [];
+    const ranked = () => [...scored].sort((a, b) => b.score - a.score || a.order - b.order);
+    for (let k = 0; k < byCeiling.length; k++) {
+      if (k > 0 && k % 16 === 0) {
+        const top = distinct(ranked(), keep.n, keep.metres, keep.degrees);
+        if (top.length === keep.n && key(byCeiling[k]) < top[top.length - 1].score) {
+          this.ev.skippedCount += byCeiling.length - k;
+          break;
+        }
+        progress(0.5 + (0.5 * k) / byCeiling.length);
+      }
+      this.check();
+      const c = byCeiling[k];
+      const score = this.ev.coarsePrepared(c.p);
+      if (score > -Infinity) scored.push({ pl: c.pl, score, order: c.order });
+    }
+    progress(1);
+    return ranked().map(({ pl, score }) => ({ pl, score }));
   }
 
   /** Compass search on x, y and heading; the legs follow the pose (longest clear) unless `fixedLegs`. */
@@ -108,10 +145,11 @@ export class Search {
     let used = 0;
     const moveTo = (x: number, y: number, h: number): Scored => {
       used++;
-      if (!fixedLegs) return this.at(x, y, h);
+      // Only a better score than the best moves the search, so the best is the floor.
+      if (!fixedLegs) return this.at(x, y, h, best.score);
       const pl = { ...best.pl, x, y, heading: h };
       const ok = bodyClear(this.ground, this.ev.model, x, y, h, this.ev.legs) && this.ev.legs.every((l, i) => padClear(this.ground, l, pl.extensions[i], x, y, h));
-      return { pl, score: ok ? this.score(pl) : -Infinity };
+      return { pl, score: ok ? this.score(pl, best.score) : -Infinity };
     };
     while ((dxy >= MIN_MOVE || dh >= MIN_TURN) && used < budget) {
       const { x, y, heading } = best.pl;
@@ -145,7 +183,7 @@ export class Search {
     const walk = (i: number, ext: number[]) => {
       if (i === options.length) {
         const pl = { x, y, heading, extensions: [...ext] };
-        const score = this.score(pl);
+        const score = this.score(pl, best.score);
         if (score > best.score) best = { pl, score };
         return;
       }

@@ -76,6 +76,7 @@ export interface AdvisorResult {
   /** The scene's own placement by the same measure; null when it cannot be analysed. */
   start: { leastMargin: { check: string; margin: number }; figures: PlacementFigures } | null;
   proposals: Proposal[];
-  evaluations: { coarse: number; exact: number };
+  /** Full coarse analyses, exact analyses, and placements left out by their ceiling (they could not win). */
+  evaluations: { coarse: number; exact: number; skipped: number };
   elapsedMs: number;
 }

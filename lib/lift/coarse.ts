@@ -317,3 +317,53 @@ export function limitsOf(p: PreparedLift): MarginLimits {
   const { limits, soil, loadChart } = p.input;
   return { percentOfTipping: limits.percentOfTipping, percentOfRated: limits.percentOfRated, clearance: limits.clearance, allowable: soil.allowable, hasChart: !!loadChart };
 }
+
+/**
+ * A ceiling on the coarse least margin from its cheap terms alone: the tipping and load-chart margins,
+ * the same figures analyzeCoarse gives them (closed form, no sampling), and the power lines' distance at a
+ * few of the samples analyzeCoarse takes every `step`° (its default, as analyzeCoarse's). The least margin is the smallest
+ * of all its terms, so it is never above this. A search can leave out the full coarse analysis of a
+ * placement whose ceiling is no better than what it already has. Throws as analyzeCoarse does.
+ */
+export function coarseCeiling(p: PreparedLift, step = COARSE_STEP): number {
+  assertStandsUnloaded(p);
+  const { input } = p;
+  const limits = limitsOf(p);
+  const up = input.weightUncertainty ? withLoadMass(p, upperWeight(input.load.mass, input.weightUncertainty)) : null;
+  const terms = [atMost(tippingOnArc(p, p.hookLoad).percent, limits.percentOfTipping)];
+  if (up) terms.push(atMost(tippingOnArc(up, up.hookLoad).percent, limits.percentOfTipping));
+  if (input.loadChart) {
+    terms.push(atMost(percentOfRated(input.loadChart, p.radius, input.boom.length, p.hookLoad).percent, limits.percentOfRated));
+    if (up) terms.push(atMost(percentOfRated(input.loadChart, up.radius, input.boom.length, up.hookLoad).percent, limits.percentOfRated));
+  }
+  // Power lines: the coarse distance is max(0, lb), where lb is at most the distance at every sample of
+  // lipschitzLowerBound; so the distance at a few of those same samples (the ends, and the one nearest the
+  // line's closest approach to the slew axis) is a ceiling for it.
+  const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach;
+  const last = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
+  for (const l of p.powerLines) {
+    const required = requiredClearance(l).required;
+    const rough = wireRough(p, l, reach);
+    if (required !== null && rough >= decisive(required)) {
+      terms.push(atLeast(rough, required));
+      continue;
+    }
+    let d = Infinity;
+    for (const k of [0, last, nearestSample(p, l, step, last)]) d = Math.min(d, powerLineDistanceAt(p, l, slewAt(p, Math.min(k * step, p.span))));
+    terms.push(atLeast(Math.max(0, d), required));
+  }
+  // As leastMargin: a term that is not a number is passed over.
+  let least = Infinity;
+  for (const m of terms) if (m < least) least = m;
+  return least;
+}
+
+/** The sample (index, `step` apart along the arc) where the hook points nearest the wire's closest point to the axis. */
+function nearestSample(p: PreparedLift, l: PreparedLift['powerLines'][number], step: number, last: number): number {
+  const dx = l.b.x - l.a.x, dy = l.b.y - l.a.y, len2 = dx * dx + dy * dy;
+  const u = len2 > 0 ? Math.min(1, Math.max(0, -(l.a.x * dx + l.a.y * dy) / len2)) : 0;
+  const x = l.a.x + u * dx, y = l.a.y + u * dy;
+  const slew = Math.atan2(y, x) / DEG - Math.atan2(p.hookY0, p.hookX0) / DEG;
+  const rel = (((p.sign * (slew - p.from)) % 360) + 360) % 360;
+  return rel <= p.span ? Math.min(last, Math.max(0, Math.round(rel / step))) : 0;
+}

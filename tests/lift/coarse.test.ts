@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { analyzeCoarse, analyzePrepared, coarseMargins, limitsOf, prepareLift, resultMargins, tippingAt, slewAt, type LiftInputIn, type PreparedLift } from '@/lib/lift';
+import { analyzeCoarse, analyzePrepared, coarseCeiling, coarseMargins, leastMargin, limitsOf, prepareLift, resultMargins, tippingAt, slewAt, type LiftInputIn, type PreparedLift } from '@/lib/lift';
 import { rotator } from './scenarios';
 
 /**
@@ -117,5 +117,24 @@ describe('coarse mode (fast-check)', () => {
       }),
       { numRuns: 40, seed: 5 },
     );
+  });
+
+  it('its ceiling (tipping, chart and a few power-line samples) is never below the coarse least margin', () => {
+    // The least margin is the smallest of all the terms, and each term of the ceiling is one of them or
+    // the same sampled distance before the Lipschitz allowance [derived]; the advisor skips on it.
+    let lines = 0;
+    fc.assert(
+      fc.property(scene, (input) => {
+        const p = preparedOrNull(input);
+        if (!p) return;
+        const least = leastMargin(coarseMargins(analyzeCoarse(p), limitsOf(p))).margin;
+        const ceiling = coarseCeiling(p);
+        if (least === -Infinity) return;
+        expect(ceiling).toBeGreaterThanOrEqual(least);
+        if (p.powerLines.length > 0) lines++;
+      }),
+      { numRuns: 150, seed: 23 },
+    );
+    expect(lines).toBeGreaterThan(20);
   });
 });
