@@ -2,7 +2,7 @@ import type { SceneDocument } from '@/lib/scene/schema';
 import type { LoadObject, TruckObject } from '@/lib/scene/objects';
 import type { TruckModel } from '@/lib/scene/truck/truck-model';
 import type { LiveAnalysis } from './live-analysis-types';
-import { sideOf, type LiftResult, type PreparedLift, type TruckSide } from '@/lib/lift';
+import { closest, segmentSegmentDistance, sideOf, type LiftResult, type PreparedLift, type TruckSide } from '@/lib/lift';
 import { DEG, placePoint, placePolygon, type Polygon, type Pt } from '@/lib/scene/geometry/vec';
 import { hookSitePoint, hookRadius } from '@/lib/scene/geometry/truck';
 import { loadLocalOutline } from '@/lib/scene/geometry/load';
@@ -34,6 +34,27 @@ export interface ClearanceMark {
   slew: number;
 }
 
+/**
+ * The boom's nearest approach to a part, obstacle or power line over the swing: the boom's plan line at
+ * that slew, its nearest point `p` and the nearest point `q` of what it passes (in plan), the engine's 3D
+ * gap and the height of the boom's point there.
+ */
+export interface BoomClearanceMark {
+  target: string;
+  name: string;
+  kind: 'body' | 'obstacle' | 'power-line';
+  boom: [Pt, Pt];
+  p: Pt;
+  q: Pt;
+  value: number;
+  /** The limit it is held to (the plan's clearance, or the line's required distance; null: set by the utility). */
+  limit: number | null;
+  height: number;
+  ok: boolean;
+  strikes: boolean;
+  slew: number;
+}
+
 export interface PowerZone {
   id: string;
   name: string;
@@ -56,6 +77,8 @@ export interface OverlayGeometry {
   set: Pt;
   worst: { slew: number; percent: number; line: string; side: TruckSide; from: Pt; to: Pt; over: boolean } | null;
   clearances: ClearanceMark[];
+  /** The boom's tightest clearances (every failing one, and the nearest parts and power lines). */
+  boomClearances: BoomClearanceMark[];
   nearestNow: ClearanceMark | null;
   powerZones: PowerZone[];
   loadAt(slew: number): Polygon;
@@ -63,6 +86,8 @@ export interface OverlayGeometry {
 
 /** How many of the tightest obstacle clearances get a mark on the plan (all failing ones always do). */
 const SHOWN_CLEARANCES = 5;
+/** The same for the boom's clearances to parts and obstacles. */
+const SHOWN_BOOM_CLEARANCES = 2;
 
 type ClearanceLike = { target: string; kind: 'body' | 'obstacle'; horizontal: number; vertical: number; slew: number; overlapsInPlan: boolean };
 
@@ -160,6 +185,45 @@ function swingGeometryOf(a: LiveAnalysis, doc: SceneDocument, model: TruckModel)
       if (m) clearances.push(m);
     }
   }
+  // The boom at a slew, in the truck frame (as the engine turns it), and its plan line on the site.
+  const boomAt = (slew: number) => {
+    const c = Math.cos(slew * DEG), sn = Math.sin(slew * DEG);
+    return { px: c * p.pivotX0 - sn * p.pivotY0, py: sn * p.pivotX0 + c * p.pivotY0, qx: c * p.hookX0 - sn * p.hookY0, qy: sn * p.hookX0 + c * p.hookY0 };
+  };
+  const boomClearances: BoomClearanceMark[] = [];
+  if (res) {
+    const sorted = [...res.boomClearances].sort((x, y) => x.distance - y.distance);
+    sorted.forEach((c, i) => {
+      const ok = !c.strikes && c.distance >= climit;
+      if (ok && i >= SHOWN_BOOM_CLEARANCES) return;
+      const poly = targetPoly(c.target);
+      if (!poly) return;
+      const b = boomAt(c.slew);
+      const u = p.input.boom.length > 0 ? Math.min(1, Math.max(0, c.alongBoom / p.input.boom.length)) : 0;
+      const at = toSite({ x: b.px + (b.qx - b.px) * u, y: b.py + (b.qy - b.py) * u });
+      const [, q] = closestPoints([at], poly);
+      boomClearances.push({
+        target: c.target, name: names[c.target] ?? c.name, kind: c.kind, boom: [toSite({ x: b.px, y: b.py }), toSite({ x: b.qx, y: b.qy })],
+        p: at, q, value: c.distance, limit: climit, height: c.height, ok, strikes: c.strikes, slew: c.slew,
+      });
+    });
+    // Power lines the boom comes nearest to (the hoist line or the load may be nearer for others).
+    for (const l of res.powerLines) {
+      if (l.nearest !== 'boom') continue;
+      const wire = p.powerLines.find((w) => w.id === l.id);
+      if (!wire) continue;
+      const b = boomAt(l.slew);
+      segmentSegmentDistance(b.px, b.py, p.pivotZ, b.qx, b.qy, p.tipZ, wire.a.x, wire.a.y, wire.a.z, wire.b.x, wire.b.y, wire.b.z);
+      const { s: u, t: v } = closest;
+      const ok = l.required !== null && l.distance >= l.required;
+      boomClearances.push({
+        target: l.id, name: names[l.id] ?? l.name, kind: 'power-line', boom: [toSite({ x: b.px, y: b.py }), toSite({ x: b.qx, y: b.qy })],
+        p: toSite({ x: b.px + (b.qx - b.px) * u, y: b.py + (b.qy - b.py) * u }),
+        q: toSite({ x: wire.a.x + (wire.b.x - wire.a.x) * v, y: wire.a.y + (wire.b.y - wire.a.y) * v }),
+        value: l.distance, limit: l.required, height: p.pivotZ + (p.tipZ - p.pivotZ) * u, ok, strikes: false, slew: l.slew,
+      });
+    }
+  }
   const powerZones: PowerZone[] = (p.input.site?.powerLines ?? []).map((l) => {
     const over = res?.powerLines.find((q) => q.id === l.id);
     const required = over?.required ?? null;
@@ -192,6 +256,7 @@ function swingGeometryOf(a: LiveAnalysis, doc: SceneDocument, model: TruckModel)
     set: hookSitePoint(truck, model, p.input.swing.to),
     worst,
     clearances,
+    boomClearances,
     powerZones,
     loadAt,
   };

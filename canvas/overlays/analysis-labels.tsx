@@ -59,5 +59,10 @@ export function analysisPillItems(g: OverlayGeometry, at: (p: Pt) => Pt, units: 
     const v = `${c.vertical ? 'above by ' : ''}${formatLength(c.value, units)}`;
     out.push({ key: `clear-${c.target}`, anchor: at({ x: (c.p.x + c.q.x) / 2, y: (c.p.y + c.q.y) / 2 }), tone: c.ok ? 'ok' : 'over', priority: c.ok ? 3 : 0, text: `${c.name} ${v}${c.ok ? '' : ' OVER LIMIT'}` });
   }
+  for (const c of g.boomClearances) {
+    const limit = c.kind === 'power-line' ? ` (keep ${c.limit === null ? 'the distance the utility sets' : formatLength(c.limit, units)})` : '';
+    const verdict = c.strikes ? ' — STRIKES' : c.ok ? '' : ' — OVER LIMIT';
+    out.push({ key: `boom-${c.kind}-${c.target}`, anchor: at({ x: (c.p.x + c.q.x) / 2, y: (c.p.y + c.q.y) / 2 }), tone: c.ok ? 'ok' : 'over', priority: c.ok ? 3 : 0, text: `Boom to ${c.name}: ${formatLength(c.value, units)}${limit} at ${formatAngle(c.slew)}${verdict}` });
+  }
   return out;
 }

@@ -6,6 +6,8 @@ import { analyzeLift, analyzeAtSlew, liftInputSchema, prepareLift } from '@/lib/
 import { HR7_SPEC } from '@/db/seed/demo-trucks';
 import { setSlew } from '@/canvas/commands/truck';
 import { overlayGeometry } from '@/canvas/analysis/overlay-geometry';
+import { analysisPillItems } from '@/canvas/overlays/analysis-labels';
+import { formatLength } from '@/lib/format/quantity';
 
 const HR7 = { id: 1, version: 1, name: 'Unit 7 — 50-ton rotator (example values)', unitNumber: 'HR-7', spec: HR7_SPEC };
 
@@ -103,5 +105,32 @@ describe('live analysis', () => {
     const load = t.byKind('load')[0];
     t.state.run((doc) => ({ capture: 'commit', document: { ...doc, objects: doc.objects.map((o) => (o.id === load.id ? { ...o, x: o.x + 1 } : o)) } }));
     expect(overlayGeometry(t.state.analysis, t.doc, t.state.truck)!.arc).not.toBe(g0.arc);
+  });
+
+  it('the boom\u2019s nearest clearance is drawn on the plan: its point on the boom, the gap to the part, the engine\u2019s figure in the user\u2019s units (issue 9)', () => {
+    // A tall shed beside the swing: the boom comes nearest it. The mark must carry the engine's own boom
+    // clearance (lib/lift/boom-clearance.ts), its point must lie on the boom's plan line at that slew, and
+    // the pill must print it in the editor's units [derived].
+    const t = coilScene();
+    const shed = t.byKind('obstacle')[0];
+    t.state.run((doc) => ({ capture: 'commit', document: { ...doc, objects: doc.objects.map((o) => (o.id === shed.id ? { ...o, height: 12 } : o)) } }));
+    const res = t.state.analysis!.result!;
+    const engine = [...res.boomClearances].sort((a, b) => a.distance - b.distance)[0];
+    const g = overlayGeometry(t.state.analysis, t.doc, t.state.truck)!;
+    const mark = g.boomClearances.find((c) => c.kind !== 'power-line' && c.target === engine.target)!;
+    expect(mark).toBeDefined();
+    expect(mark.value).toBe(engine.distance);
+    expect(mark.slew).toBe(engine.slew);
+    // p on the segment boom[0]–boom[1] (cross product ~0, between the ends).
+    const [a, b] = mark.boom;
+    const cross = (b.x - a.x) * (mark.p.y - a.y) - (b.y - a.y) * (mark.p.x - a.x);
+    expect(Math.abs(cross)).toBeLessThan(1e-6);
+    const dot = (mark.p.x - a.x) * (b.x - a.x) + (mark.p.y - a.y) * (b.y - a.y);
+    expect(dot).toBeGreaterThanOrEqual(-1e-9);
+    expect(dot).toBeLessThanOrEqual((b.x - a.x) ** 2 + (b.y - a.y) ** 2 + 1e-9);
+    for (const units of ['imperial', 'metric'] as const) {
+      const pill = analysisPillItems(g, (q) => q, units).find((it) => it.key === `boom-${mark.kind}-${mark.target}`)!;
+      expect(pill.text).toContain(`Boom to ${mark.name}: ${formatLength(engine.distance, units)}`);
+    }
   });
 });
