@@ -30,6 +30,13 @@ const nextConfig = {
           { key: 'Content-Security-Policy', value: "default-src 'none'; frame-ancestors 'none'" },
         ],
       },
+      // Uploaded images: a header set here replaces the one the route handler sets, so the rule above would
+      // take away their sandbox. This later rule wins for these paths. The same text as UPLOAD_CSP in
+      // lib/security/content-security-policy.ts (a .mjs config cannot import it; a unit test keeps them equal).
+      {
+        source: '/api/scenes/:id/background/:uploadId',
+        headers: [{ key: 'Content-Security-Policy', value: "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; frame-ancestors 'none'; sandbox" }],
+      },
     ];
   },
 };

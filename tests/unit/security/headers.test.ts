@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { NextRequest } from 'next/server';
 import proxy from '@/proxy';
 import { hasMalformedEscape } from '@/lib/security/path-escape';
+import { UPLOAD_CSP } from '@/lib/security/content-security-policy';
 
 type HeaderRule = { source: string; headers: { key: string; value: string }[] };
 // A plain .mjs file without types: import it by a computed name and say what we read from it.
@@ -22,6 +23,14 @@ describe('headers on every answer', () => {
     const rs = await rules();
     expect(valueOf(rs, '/api/:path*', 'Cache-Control')).toBe('no-store');
     expect(valueOf(rs, '/api/:path*', 'Content-Security-Policy')).toBe("default-src 'none'; frame-ancestors 'none'");
+  });
+
+  it("uploaded images keep their sandboxing CSP: a later rule for their path, after the API's, says the route's own policy", async () => {
+    const rs = await rules();
+    const source = '/api/scenes/:id/background/:uploadId';
+    expect(rs.findIndex((r) => r.source === source)).toBeGreaterThan(rs.findIndex((r) => r.source === '/api/:path*'));
+    expect(valueOf(rs, source, 'Content-Security-Policy')).toBe(UPLOAD_CSP);
+    expect(UPLOAD_CSP).toMatch(/(^|; )sandbox($|;)/);
   });
 
   it('each page gets a CSP with a fresh nonce (no unsafe-inline scripts), and Next is handed the same nonce', async () => {
