@@ -11,6 +11,7 @@ import { zoomAround } from '../editor/camera';
 import type { PointerInfo } from '../tools/tool-state';
 import { BackgroundImageNode } from '../background/background-image-node';
 import { useFontGeneration } from './use-font-generation';
+import { GestureReadout } from './gesture-readout';
 
 /** The plan view: a true-scale Konva stage. All hit-testing is the editor's own (footprint polygons). */
 export function PlanView() {
@@ -112,6 +113,7 @@ export function PlanView() {
           <LabelLayer />
         </Layer>
       </Stage>
+      <GestureReadout />
     </div>
   );
 }
