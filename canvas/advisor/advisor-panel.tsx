@@ -1,5 +1,6 @@
 'use client';
 import { CautionNote } from '@/components/caution-note';
+import { noneBetter, truckStanding, type Standing } from '@/lib/advisor/standing';
 import type { Proposal } from '@/lib/advisor/types';
 import { formatAngle, formatLength } from '@/lib/format/quantity';
 import type { UnitSystem } from '@/lib/units';
@@ -8,6 +9,7 @@ import { ProposalFigures, marginWords } from './proposal-figures';
 import { clearUsableArea, finishUsableArea } from './usable-area-actions';
 import { useUsableAreaDraft } from './usable-area-store';
 import { useAdvisor } from './use-advisor';
+import { useMemo } from 'react';
 
 const PHASE: Record<string, string> = { grid: 'Trying positions and headings', refine: 'Refining the best', legs: 'Trying leg extensions', confirm: 'Checking the best in full' };
 
@@ -20,11 +22,14 @@ export function AdvisorPanel() {
   const profiles = useEditorState((s) => s.profiles);
   const readOnly = useEditorState((s) => s.readOnly);
   const units = useEditorState((s) => s.units);
+  const model = useEditorState((s) => s.truck);
   const draft = useUsableAreaDraft();
   const { run, start, cancel, reset } = useAdvisor();
   const truck = doc.objects.find((o) => o.kind === 'truck');
   const hasLoad = doc.objects.some((o) => o.kind === 'load');
   const profile = truck?.kind === 'truck' ? profiles.find((p) => p.id === truck.profileId) : undefined;
+  // Where the truck as drawn stands, by the search's own ground rules (recomputed per edit, not per frame).
+  const standing = useMemo(() => (model && truck ? truckStanding(doc, model) : null), [doc, model, truck]);
   const missing = !truck ? 'Place the truck first.' : !hasLoad ? 'Place the load first.' : !profile ? 'This truck profile is not available here.' : null;
 
   const apply = (p: Proposal) => {
@@ -75,6 +80,8 @@ export function AdvisorPanel() {
         )}
       </div>
 
+      {standing && standing.status !== 'clear' && <StandingWarning standing={standing} />}
+
       {run.status === 'running' ? (
         <div className="space-y-2" data-testid="advisor-progress">
           <p className="text-sm">{PHASE[run.phase]}…</p>
@@ -101,6 +108,20 @@ export function AdvisorPanel() {
   );
 }
 
+const partWords = (parts: string[]) => parts.map((p) => (p === 'body' ? 'the body' : `pad ${p}`)).join(', ');
+
+/** The truck as drawn does not stand where the search may place it: said before and after a search. */
+function StandingWarning({ standing }: { standing: Standing }) {
+  return (
+    <p role="status" className="rounded-md border border-red-800 bg-red-50 p-2 text-sm text-red-900" data-testid="advisor-standing-warning">
+      <span className="font-semibold">Check the truck as drawn: </span>
+      {standing.status === 'outside'
+        ? `${partWords(standing.parts)} ${standing.parts.length > 1 ? 'stand' : 'stands'} outside the usable ground. The search only proposes placements inside it, and does not rank this one.`
+        : `${partWords(standing.parts)} ${standing.parts.length > 1 ? 'overlap' : 'overlaps'} ${standing.blockers.join(', ') || 'something on the ground'}. The search does not rank this placement.`}
+    </p>
+  );
+}
+
 function Results(props: { proposals: Proposal[]; start: { leastMargin: Proposal['leastMargin'] } | null; elapsed: number; units: UnitSystem; readOnly: boolean; onApply: (p: Proposal) => void }) {
   const { proposals, start, units } = props;
   return (
@@ -109,6 +130,12 @@ function Results(props: { proposals: Proposal[]; start: { leastMargin: Proposal[
         {start ? `This plan as drawn: ${marginWords(start.leastMargin)}. ` : ''}Searched in {(props.elapsed / 1000).toFixed(1)} s.
       </p>
       {proposals.length === 0 && <p className="text-sm">No placement could stand inside the marked ground within reach of both points.</p>}
+      {noneBetter(proposals, start) && (
+        <p role="status" className="rounded-md border border-amber-700 bg-amber-50 p-2 text-sm" data-testid="advisor-none-better">
+          <span className="font-semibold">No placement found beats the plan as drawn</span> ({marginWords(start!.leastMargin)}). Keep it, or mark more usable ground
+          to search wider.
+        </p>
+      )}
       {proposals.map((p) => (
         <article key={p.rank} className="rounded-md border border-paper-line p-2" data-testid="advisor-proposal">
           <h3 className="text-sm font-semibold">
