@@ -1,4 +1,4 @@
-import { expect, test, type BrowserContext, type Page } from '@playwright/test';
+import { expect, test, type APIResponse, type BrowserContext, type Page } from '@playwright/test';
 import { HARROW_SCENES, listedTitles, sceneIdByTitle, signIn } from './helpers';
 import { makePng } from '../fixtures/images';
 
@@ -104,4 +104,70 @@ test('sign-in, scene list, editor with a site image, PDF, review, queue and an u
   await expect.poll(() => csp.seen.filter((v) => v.startsWith('control:') && v.includes(CONTROL_URL)).length).toBeGreaterThan(0);
   console.log(`[figure] CSP reports seen: ${csp.seen.length}, of them from the control: ${csp.seen.filter((v) => v.startsWith('control:')).length}`);
   expect(csp.seen.filter((v) => !v.startsWith('control:'))).toEqual([]);
+});
+
+/**
+ * Issue 11 item 4, from outside: every answer of the running server (pages, redirects, API answers of
+ * every kind, a PDF, static files, errors) carries the headers. next.config and proxy.ts set them; this
+ * checks what actually leaves the server, where a route's own header can be replaced by a config rule.
+ */
+test('every answer of the running server carries the security headers', async ({ page }) => {
+  const everywhere = {
+    'x-content-type-options': 'nosniff',
+    'referrer-policy': 'strict-origin-when-cross-origin',
+    'x-frame-options': 'DENY',
+  };
+  const seen: { what: string; status: number; headers: Record<string, string> }[] = [];
+  const keep = async (what: string, res: Promise<APIResponse>) => {
+    const r = await res;
+    seen.push({ what, status: r.status(), headers: r.headers() });
+    return r;
+  };
+  const req = page.request;
+  const signInHtml = await (await keep('sign-in page', req.get('/sign-in'))).text();
+  const chunk = signInHtml.match(/\/_next\/static\/[^"']+\.js/)?.[0];
+  expect(chunk).toBeTruthy();
+  await keep('static script', req.get(chunk!));
+  await keep('signed-out app page (redirect)', req.get('/scenes', { maxRedirects: 0 }));
+  await keep('missing page', req.get('/no-such-page'));
+  await keep('signed-out API call', req.get('/api/scenes'));
+  await keep('malformed path escape', req.put('/api/scenes/%FF', { data: { revision: 1 } }));
+
+  await signIn(page, 'operator@harrow.example');
+  const coil = await sceneIdByTitle(page, HARROW_SCENES.coil);
+  await keep('scene list page', req.get('/scenes'));
+  await keep('editor page', req.get(`/scenes/${coil}`));
+  await keep('API list', req.get('/api/scenes'));
+  await keep('API not found', req.get('/api/scenes/99999999'));
+  await keep('API bad body', req.post('/api/scenes', { data: { title: '' } }));
+  await keep('API cross-site POST', req.post('/api/scenes', { headers: { origin: 'https://elsewhere.example', 'content-type': 'text/plain' }, data: '{"title":"Cross-site"}' }));
+  await keep('plan PDF', req.get(`/api/scenes/${coil}/plan.pdf`));
+
+  const statuses = Object.fromEntries(seen.map((s) => [s.what, s.status]));
+  expect(statuses).toEqual({
+    'sign-in page': 200,
+    'static script': 200,
+    'signed-out app page (redirect)': 307,
+    'missing page': 404,
+    'signed-out API call': 401,
+    'malformed path escape': 400,
+    'scene list page': 200,
+    'editor page': 200,
+    'API list': 200,
+    'API not found': 404,
+    'API bad body': 400,
+    'API cross-site POST': 403,
+    'plan PDF': 200,
+  });
+  for (const s of seen) {
+    for (const [key, value] of Object.entries(everywhere)) expect(s.headers[key], `${s.what}: ${key}`).toBe(value);
+    expect(s.headers['permissions-policy'], `${s.what}: permissions-policy`).toMatch(/camera=\(\)/);
+    if (s.what.startsWith('API') || s.what.startsWith('signed-out API') || s.what === 'malformed path escape' || s.what === 'plan PDF') {
+      expect(s.headers['cache-control'], `${s.what}: cache-control`).toBe('no-store');
+      expect(s.headers['content-security-policy'], `${s.what}: CSP`).toBe("default-src 'none'; frame-ancestors 'none'");
+    } else if (s.headers['content-type']?.startsWith('text/html')) {
+      expect(s.headers['content-security-policy'], `${s.what}: CSP`).toMatch(/script-src 'self' 'nonce-[^']+' 'strict-dynamic';.*frame-ancestors 'none'/);
+    }
+  }
+  expect(seen.find((s) => s.what === 'plan PDF')!.headers['content-disposition']).toMatch(/^attachment; filename=".+\.pdf"$/);
 });
