@@ -47,8 +47,8 @@ function buildDatabase(count: number): string {
   for (const f of [file, `${file}-wal`, `${file}-shm`]) fs.rmSync(f, { force: true });
   execFileSync('npx', ['tsx', 'db/seed.ts'], { env: { ...process.env, DATABASE_FILE: file }, stdio: 'ignore' });
   const db = new SQLite(file);
-  const { id: orgId } = db.prepare(`select id from organisations where slug = 'harrow'`).get() as { id: number };
-  const { id: ownerId } = db.prepare(`select id from users where email = 'operator@harrow.example'`).get() as { id: number };
+  // The demo operator's organisation, whatever its slug: the scenes go where the signed-in bench users look.
+  const { id: ownerId, organisation_id: orgId } = db.prepare(`select id, organisation_id from users where email = 'operator@harrow.example'`).get() as { id: number; organisation_id: number };
   const { n: have } = db.prepare('select count(*) as n from scenes where organisation_id = ?').get(orgId) as { n: number };
   const sizes = { small: JSON.stringify(documentOf(4, 1)), medium: JSON.stringify(documentOf(30, 2)), large: JSON.stringify(documentOf(200, 3)) };
   const insert = db.prepare(`insert into scenes (organisation_id, owner_id, title, location, notes, status, document, revision, created_at, updated_at) values (?, ?, ?, ?, ?, ?, ?, 1, ?, ?)`);
@@ -124,7 +124,7 @@ async function benchOne(count: number) {
     const sup = await signIn(base, 'supervisor@harrow.example');
     const op = await signIn(base, 'operator@harrow.example');
     const db = new SQLite(file, { readonly: true });
-    const deep = db.prepare(`select id, updated_at from scenes where organisation_id = (select id from organisations where slug = 'harrow') and deleted_at is null order by updated_at desc, id desc limit 1 offset ?`).get(Math.floor(count * 0.9)) as { id: number; updated_at: string };
+    const deep = db.prepare(`select id, updated_at from scenes where organisation_id = (select organisation_id from users where email = 'operator@harrow.example') and deleted_at is null order by updated_at desc, id desc limit 1 offset ?`).get(Math.floor(count * 0.9)) as { id: number; updated_at: string };
     const one = db.prepare(`select id from scenes where length(document) > 150000 limit 1`).get() as { id: number } | undefined;
     db.close();
     const deepCursor = encodeCursor({ v: deep.updated_at, id: deep.id });

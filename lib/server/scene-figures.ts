@@ -39,14 +39,25 @@ export async function figuresFor(db: Kysely<Database>, organisationId: number, s
 }
 
 async function computeAndStore(db: Kysely<Database>, organisationId: number, s: { id: number; revision: number }): Promise<ListFigures> {
-  const rev = await db
-    .selectFrom('scene_revisions')
-    .innerJoin('scenes', 'scenes.id', 'scene_revisions.scene_id')
-    .select('scene_revisions.document')
-    .where('scene_revisions.scene_id', '=', s.id)
-    .where('scene_revisions.revision', '=', s.revision)
-    .where('scenes.organisation_id', '=', organisationId)
+  // The current revision's document is the scene row's own (one read, no revision blob to inflate); an older
+  // revision, when the scene has moved on since the list was read, comes from the revision history.
+  const current = await db
+    .selectFrom('scenes')
+    .select('document')
+    .where('id', '=', s.id)
+    .where('revision', '=', s.revision)
+    .where('organisation_id', '=', organisationId)
     .executeTakeFirst();
+  const rev =
+    current ??
+    (await db
+      .selectFrom('scene_revisions')
+      .innerJoin('scenes', 'scenes.id', 'scene_revisions.scene_id')
+      .select('scene_revisions.document')
+      .where('scene_revisions.scene_id', '=', s.id)
+      .where('scene_revisions.revision', '=', s.revision)
+      .where('scenes.organisation_id', '=', organisationId)
+      .executeTakeFirst());
   if (!rev) return { percentOfTipping: null, percentOfBearing: null, leastClearance: null, beyond: null, problem: 'No saved revision' };
   const a = await computeDocument(db, organisationId, { sceneId: s.id, revision: s.revision }, rev.document);
   const f = a.ok ? planFigures(a.result) : null;
