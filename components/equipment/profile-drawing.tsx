@@ -3,6 +3,7 @@
 import type { TruckSpec } from '@/lib/equipment/truck-spec';
 import { type UnitSystem } from '@/lib/units';
 import { formatLength } from '@/lib/format/quantity';
+import { padName } from '@/lib/lift/names';
 
 /**
  * A to-scale plan and side view drawn straight from the profile's numbers (carrier frame: x forward from
@@ -59,6 +60,10 @@ export function ProfileDrawing({ spec, units }: { spec: DraftSpec; units: UnitSy
   const sideTop = Math.max(4, ...(PARTS.map((p) => c[p.id]?.top ?? 0).filter((v) => ok(v)) as number[]), ok(c.stowedHeight) ? c.stowedHeight! : 0) + 0.8;
   const sideY0 = planH + 0.9 + sideTop; // ground line of the side view, in drawing units below the plan
   const totalH = sideY0 + 1.1;
+  // The pads are labelled by their codes on the drawing; the key names each one (front/rear of the slew axis).
+  const axisX = ok(slew?.x) ? slew!.x! : 0;
+  const keyed = (spec.outriggers?.legs ?? []).filter((l) => l?.id && ok(l.mount?.x, l.mount?.y));
+  const padKey = keyed.length ? `Pads: ${keyed.map((l) => `${l!.id} ${padName(l!.id!, l!.mount!.x! - axisX, l!.mount!.y!)}`).join(' · ')}` : null;
   const lengthText = ok(c.length) ? formatLength(c.length!, units) : '—';
   return (
     <figure className="rounded-plate border border-paper-line bg-paper-raised p-2" data-testid="profile-drawing">
@@ -147,7 +152,14 @@ export function ProfileDrawing({ spec, units }: { spec: DraftSpec; units: UnitSy
           )}
         </g>
       </svg>
-      <figcaption className="px-1 pt-1 text-caption text-ink-muted">Drawn to scale from the numbers in the form. Amber squares: pads at full reach; dashed: retracted.</figcaption>
+      <figcaption className="px-1 pt-1 text-caption text-ink-muted">
+        Drawn to scale from the numbers in the form. Amber squares: pads at full reach; dashed: retracted.
+        {padKey && (
+          <span className="block" data-testid="drawing-pad-key">
+            {padKey}
+          </span>
+        )}
+      </figcaption>
     </figure>
   );
 }

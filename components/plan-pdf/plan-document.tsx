@@ -28,6 +28,8 @@ export function PlanDocument({ d }: { d: PlanData }) {
                 </View>
               ))}
             </View>
+            {/* The drawing labels pads by their short codes; this says what each code is. */}
+            {d.drawing.padKey && <Text style={{ fontSize: 7, marginTop: 2 }}>{d.drawing.padKey}</Text>}
           </View>
         ) : (
           <Text style={s.p}>No drawing: {d.problem ?? 'the sketch has nothing to compute yet'}.</Text>

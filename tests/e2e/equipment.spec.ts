@@ -123,6 +123,8 @@ test('an operator reads a profile but cannot edit it', async ({ page }) => {
   await page.getByRole('button', { name: 'Carrier', exact: true }).click();
   await expect(page.getByRole('textbox', { name: 'Overall length' })).toBeDisabled();
   await expect(page.getByTestId('drawing-length')).toHaveText('Overall length 40′ 0″');
+  // The drawing's pad codes are explained under it.
+  await expect(page.getByTestId('drawing-pad-key')).toHaveText('Pads: FL left front · FR right front · RL left rear · RR right rear · FJ front jack');
   await screens(page, 'equipment-profile-operator');
   const id = page.url().match(/equipment\/(\d+)/)![1];
   const current = await (await page.request.get(`/api/equipment/${id}`)).json();

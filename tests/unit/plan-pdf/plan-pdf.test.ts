@@ -50,6 +50,19 @@ describe('lift plan PDF', { timeout: 120_000 }, () => {
     expect(flat(draft.pages[0])).toMatch(/page 1 of/i);
   });
 
+  it('explains every pad code the drawing shows, in a key under it', () => {
+    const page = flat(draft.pages[0]);
+    const key = /Pads: ([^\n]+)/.exec(page)?.[1] ?? '';
+    const entries = [...key.matchAll(/\b([A-Z]{1,3}\d?) ([a-z][a-z ]+?)(?= ·|\s*$)/g)].map((m) => [m[1], m[2].trim()]);
+    const names: Record<string, string> = { FL: 'left front', FR: 'right front', RL: 'left rear', RR: 'right rear', FJ: 'front jack' };
+    expect(entries.length).toBeGreaterThanOrEqual(4);
+    for (const [code, name] of entries) expect(name).toBe(names[code]);
+    // Every code standing alone on the drawing page has its entry in the key.
+    const onPage = new Set(page.replace(/Pads: [^\n]+/, '').match(/\b(FL|FR|RL|RR|FJ)\b/g) ?? []);
+    expect(onPage.size).toBeGreaterThanOrEqual(4);
+    for (const code of onPage) expect(entries.map((e) => e[0])).toContain(code);
+  });
+
   it('carries the caution on every page', () => {
     // Each page's footer: the caution wraps over two lines, so look for its opening words per page and the whole in reading order.
     for (const page of draft.pages) expect(flat(page)).toContain("The manufacturer's load chart and operator's manual govern.");
