@@ -1,15 +1,41 @@
 import path from 'node:path';
 import fs from 'node:fs';
 import SQLite from 'better-sqlite3';
-import { Kysely } from 'kysely';
+import pg from 'pg';
+import { Kysely, PostgresDialect } from 'kysely';
 import type { Database } from './schema';
 import { JsonColumnsPlugin } from './json-columns';
-import { ImmediateSqliteDialect, STATEMENT_BUSY_TIMEOUT_MS } from './immediate-dialect';
+import { ImmediateSqliteDialect, STATEMENT_BUSY_TIMEOUT_MS, WRITE_LOCK_WAIT_MS } from './immediate-dialect';
 
 export type DB = Kysely<Database>;
 
 export function databaseFile(): string {
   return process.env.DATABASE_FILE ?? path.join(process.cwd(), 'data', 'arcline.db');
+}
+
+/**
+ * The PostgreSQL connection string when DATABASE_URL asks for PostgreSQL (postgres:// or postgresql://),
+ * else null and Arcline uses the SQLite file (DATABASE_FILE). Any other DATABASE_URL is refused rather than
+ * silently ignored.
+ */
+export function databaseUrl(): string | null {
+  const url = process.env.DATABASE_URL?.trim();
+  if (!url) return null;
+  if (!/^postgres(ql)?:\/\//i.test(url)) throw new Error('DATABASE_URL must start with postgres:// or postgresql:// (unset it to use the SQLite file DATABASE_FILE)');
+  return url;
+}
+
+/** Where the data lives, for log lines: the SQLite file, or the PostgreSQL URL without its password. */
+export function databaseLabel(): string {
+  const url = databaseUrl();
+  if (!url) return databaseFile();
+  try {
+    const u = new URL(url);
+    if (u.password) u.password = '***';
+    return u.toString();
+  } catch {
+    return 'postgres://(unparsable URL)';
+  }
 }
 
 /**
@@ -32,13 +58,44 @@ export function openDatabase(file: string = databaseFile()): DB {
   });
 }
 
+// pg's type ids: int8 (count(), sum() of integers) and numeric come back as strings unless parsed.
+const INT8 = 20;
+const NUMERIC = 1700;
+const pgTypes = {
+  getTypeParser: ((oid: number, format?: 'text' | 'binary') =>
+    oid === INT8 || oid === NUMERIC ? (v: string) => Number(v) : pg.types.getTypeParser(oid, format)) as typeof pg.types.getTypeParser,
+};
+
+/**
+ * Opens a Kysely instance over a PostgreSQL database through a connection pool (DATABASE_POOL_SIZE,
+ * default 10 per process). Counts come back as numbers (see pgTypes); transactions are PostgreSQL's
+ * default READ COMMITTED, and writes that must not race check their condition in the UPDATE itself.
+ * A statement waits at most WRITE_LOCK_WAIT_MS for a row lock (lock_timeout), then the route wrapper
+ * answers 503, as it does for a busy SQLite file.
+ */
+export function openPostgres(url: string): DB {
+  const pool = new pg.Pool({
+    connectionString: url,
+    max: Number(process.env.DATABASE_POOL_SIZE ?? 10),
+    types: pgTypes,
+    options: `-c lock_timeout=${WRITE_LOCK_WAIT_MS}`,
+  });
+  return new Kysely<Database>({ dialect: new PostgresDialect({ pool }), plugins: [new JsonColumnsPlugin()] });
+}
+
+/** Opens the configured database: PostgreSQL when DATABASE_URL says so, else the SQLite file. */
+export function openConfigured(): DB {
+  const url = databaseUrl();
+  return url ? openPostgres(url) : openDatabase(databaseFile());
+}
+
 // One instance per process, kept on globalThis so dev hot reload does not open new connections.
-const globalForDb = globalThis as unknown as { arclineDb?: { file: string; db: DB } };
+const globalForDb = globalThis as unknown as { arclineDb?: { key: string; db: DB } };
 
 export function getDb(): DB {
-  const file = databaseFile();
-  if (!globalForDb.arclineDb || globalForDb.arclineDb.file !== file) {
-    globalForDb.arclineDb = { file, db: openDatabase(file) };
+  const key = databaseUrl() ?? databaseFile();
+  if (!globalForDb.arclineDb || globalForDb.arclineDb.key !== key) {
+    globalForDb.arclineDb = { key, db: openConfigured() };
   }
   return globalForDb.arclineDb.db;
 }

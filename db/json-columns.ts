@@ -23,10 +23,18 @@ export class JsonColumnsPlugin implements KyselyPlugin {
         const v = row[key];
         if (!JSON_COLUMNS.has(key)) continue;
         if (typeof v === 'string') row[key] = JSON.parse(v);
-        // A compressed snapshot (an autosave revision: db/repositories/revision-storage.ts) comes back as bytes.
-        else if (v instanceof Uint8Array) row[key] = JSON.parse(gunzipSync(v).toString('utf8'));
+        // A compressed snapshot (an autosave revision: db/repositories/revision-storage.ts) comes back as
+        // gzip bytes; on PostgreSQL a kept revision comes back as the UTF-8 bytes of its JSON.
+        else if (v instanceof Uint8Array) row[key] = JSON.parse((isGzip(v) ? gunzipSync(v) : Buffer.from(v.buffer, v.byteOffset, v.byteLength)).toString('utf8'));
+        // PostgreSQL's json columns arrive already parsed by the driver: nothing to do.
+
       }
     }
     return args.result;
   }
+}
+
+/** gzip's two magic bytes; JSON text never starts with 0x1f. */
+function isGzip(v: Uint8Array): boolean {
+  return v.length >= 2 && v[0] === 0x1f && v[1] === 0x8b;
 }

@@ -1,7 +1,7 @@
-import { databaseFile, openDatabase } from './index';
+import { databaseLabel, openConfigured } from './index';
 import { migrateToLatest } from './migrator';
 
-const db = openDatabase();
+const db = openConfigured();
 const ran = await migrateToLatest(db);
-console.log(ran.length ? `Migrated ${databaseFile()}: ${ran.join(', ')}` : `${databaseFile()} is up to date`);
+console.log(ran.length ? `Migrated ${databaseLabel()}: ${ran.join(', ')}` : `${databaseLabel()} is up to date`);
 await db.destroy();

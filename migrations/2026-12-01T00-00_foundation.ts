@@ -1,13 +1,14 @@
 import { sql, type Kysely } from 'kysely';
+import { autoId, nowText, jsonType } from '@/db/dialect';
 
 // Migrations use Kysely<any>: they are frozen in time and must not follow later type changes.
 export async function up(db: Kysely<any>): Promise<void> {
-  const now = sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`;
+  const now = nowText(db);
 
   await db.schema
     .createTable('organisations')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('slug', 'text', (c) => c.notNull().unique())
     .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
@@ -16,7 +17,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('users')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('email', 'text', (c) => c.notNull().unique())
     .addColumn('name', 'text', (c) => c.notNull())
@@ -31,13 +32,13 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('equipment_profiles')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('kind', 'text', (c) => c.notNull())
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('unit_number', 'text')
     .addColumn('in_service', 'integer', (c) => c.notNull().defaultTo(1))
-    .addColumn('spec', 'text', (c) => c.notNull())
+    .addColumn('spec', jsonType(db), (c) => c.notNull())
     .addColumn('version', 'integer', (c) => c.notNull().defaultTo(1))
     .addColumn('retired_at', 'text')
     .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
@@ -53,14 +54,14 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('scenes')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('owner_id', 'integer', (c) => c.notNull().references('users.id'))
     .addColumn('title', 'text', (c) => c.notNull())
     .addColumn('status', 'text', (c) =>
       c.notNull().defaultTo('draft').check(sql`status in ('draft','submitted','approved','rejected','archived')`),
     )
-    .addColumn('document', 'text', (c) => c.notNull())
+    .addColumn('document', jsonType(db), (c) => c.notNull())
     .addColumn('revision', 'integer', (c) => c.notNull().defaultTo(1))
     .addColumn('equipment_profile_id', 'integer', (c) => c.references('equipment_profiles.id'))
     .addColumn('equipment_profile_version', 'integer')
@@ -75,7 +76,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('scene_revisions')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id').onDelete('cascade'))
     .addColumn('revision', 'integer', (c) => c.notNull())
     .addColumn('document', 'text', (c) => c.notNull())
@@ -87,12 +88,12 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('audit_log')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('user_id', 'integer', (c) => c.notNull().references('users.id'))
     .addColumn('scene_id', 'integer', (c) => c.references('scenes.id'))
     .addColumn('action', 'text', (c) => c.notNull())
-    .addColumn('detail', 'text')
+    .addColumn('detail', jsonType(db))
     .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
     .execute();
   await db.schema.createIndex('audit_scene_idx').ifNotExists().on('audit_log').column('scene_id').execute();

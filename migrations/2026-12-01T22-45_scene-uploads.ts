@@ -1,4 +1,5 @@
 import { sql, type Kysely } from 'kysely';
+import { autoId, nowText } from '@/db/dialect';
 
 // Uploaded files attached to a scene (for now: site background images). The bytes live in lib/storage.ts
 // under storage_key; this row says whose they are.
@@ -6,7 +7,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('scene_uploads')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id').onDelete('cascade'))
     .addColumn('storage_key', 'text', (c) => c.notNull().unique())
@@ -15,7 +16,7 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('width', 'integer')
     .addColumn('height', 'integer')
     .addColumn('uploader_id', 'integer', (c) => c.notNull().references('users.id'))
-    .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`))
+    .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(nowText(db)))
     .execute();
   await db.schema.createIndex('scene_uploads_scene_idx').ifNotExists().on('scene_uploads').columns(['organisation_id', 'scene_id']).execute();
 }

@@ -1,20 +1,21 @@
 import { sql, type Kysely } from 'kysely';
+import { autoId, nowText, doubleType, jsonType } from '@/db/dialect';
 
 // Profile versions (one row per saved version, kept for ever), rigging items and their inspections.
 export async function up(db: Kysely<any>): Promise<void> {
-  const now = sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`;
+  const now = nowText(db);
 
   await db.schema
     .createTable('equipment_profile_versions')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('profile_id', 'integer', (c) => c.notNull().references('equipment_profiles.id').onDelete('cascade'))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('version', 'integer', (c) => c.notNull())
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('unit_number', 'text')
     .addColumn('in_service', 'integer', (c) => c.notNull())
-    .addColumn('spec', 'text', (c) => c.notNull())
+    .addColumn('spec', jsonType(db), (c) => c.notNull())
     .addColumn('author_id', 'integer', (c) => c.references('users.id'))
     .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
     .addUniqueConstraint('equipment_versions_profile_version_uq', ['profile_id', 'version'])
@@ -26,17 +27,17 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('rigging_items')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('tag', 'text', (c) => c.notNull())
     .addColumn('kind', 'text', (c) =>
       c.notNull().check(sql`kind in ('round-sling','web-sling','wire-rope-sling','chain','shackle','snatch-block','hook','recovery-strap')`),
     )
     .addColumn('size', 'text', (c) => c.notNull().defaultTo(''))
-    .addColumn('length', 'real')
-    .addColumn('rating_vertical', 'real')
-    .addColumn('rating_choker', 'real')
-    .addColumn('rating_basket', 'real')
+    .addColumn('length', doubleType(db))
+    .addColumn('rating_vertical', doubleType(db))
+    .addColumn('rating_choker', doubleType(db))
+    .addColumn('rating_basket', doubleType(db))
     .addColumn('rating_source', 'text', (c) => c.notNull().defaultTo('entered'))
     .addColumn('status', 'text', (c) => c.notNull().defaultTo('in_service').check(sql`status in ('in_service','tagged_out','retired')`))
     .addColumn('last_inspection', 'text')
@@ -51,7 +52,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('rigging_inspections')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('item_id', 'integer', (c) => c.notNull().references('rigging_items.id').onDelete('cascade'))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('inspected_on', 'text', (c) => c.notNull())

@@ -1,12 +1,22 @@
 import { sql, type Kysely } from 'kysely';
+import { isPostgres } from '@/db/dialect';
 
 /**
  * Users: a session version (raised to end every session of a user at once), and e-mail unique within an
  * organisation instead of across all of them, so an admin creating an account learns nothing about other
  * organisations' addresses. SQLite cannot drop a column's UNIQUE, so the table is rebuilt (SQLite's
  * documented twelve-step ALTER procedure: foreign keys off, copy, drop, rename, check, foreign keys on).
+ * PostgreSQL alters the table in place (the migrator runs this inside a transaction there).
  */
 export async function up(db: Kysely<any>): Promise<void> {
+  if (isPostgres(db)) {
+    await sql`alter table users add column session_version integer not null default 0`.execute(db);
+    // The column's UNIQUE from the foundation migration carries PostgreSQL's default name.
+    await sql`alter table users drop constraint users_email_key`.execute(db);
+    await sql`create unique index users_org_email_idx on users (organisation_id, email)`.execute(db);
+    await sql`create index users_email_idx on users (email)`.execute(db);
+    return;
+  }
   await sql`pragma foreign_keys = off`.execute(db);
   try {
     await db.transaction().execute(async (trx) => {

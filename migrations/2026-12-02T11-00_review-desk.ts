@@ -1,25 +1,26 @@
 import { sql, type Kysely } from 'kysely';
+import { isPostgres, autoId, nowText, doubleType, jsonType } from '@/db/dialect';
 
 /**
  * The review desk (issue 13): the "returned" status, submissions with the figures the server computed,
  * pinned comments, in-app notifications and the e-mail outbox.
  */
 export async function up(db: Kysely<any>): Promise<void> {
-  const now = sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`;
+  const now = nowText(db);
   await returnedStatus(db);
 
   await db.schema
     .createTable('scene_submissions')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id').onDelete('cascade'))
     .addColumn('revision', 'integer', (c) => c.notNull())
     .addColumn('submitted_by', 'integer', (c) => c.notNull().references('users.id'))
     .addColumn('submitted_at', 'text', (c) => c.notNull().defaultTo(now))
     .addColumn('engine_version', 'text', (c) => c.notNull())
-    .addColumn('figures', 'text', (c) => c.notNull())
-    .addColumn('checks', 'text', (c) => c.notNull())
+    .addColumn('figures', jsonType(db), (c) => c.notNull())
+    .addColumn('checks', jsonType(db), (c) => c.notNull())
     .addColumn('state', 'text', (c) => c.notNull().defaultTo('pending').check(sql`state in ('pending','approved','returned','withdrawn')`))
     .addColumn('decided_by', 'integer', (c) => c.references('users.id'))
     .addColumn('decided_at', 'text')
@@ -33,15 +34,15 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('scene_comments')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id').onDelete('cascade'))
     .addColumn('author_id', 'integer', (c) => c.notNull().references('users.id'))
     .addColumn('parent_id', 'integer', (c) => c.references('scene_comments.id').onDelete('cascade'))
     .addColumn('revision', 'integer', (c) => c.notNull())
     .addColumn('body', 'text', (c) => c.notNull())
-    .addColumn('anchor_x', 'real')
-    .addColumn('anchor_y', 'real')
+    .addColumn('anchor_x', doubleType(db))
+    .addColumn('anchor_y', doubleType(db))
     .addColumn('anchor_object_id', 'text')
     .addColumn('resolved_at', 'text')
     .addColumn('resolved_by', 'integer', (c) => c.references('users.id'))
@@ -52,7 +53,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('notifications')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('user_id', 'integer', (c) => c.notNull().references('users.id').onDelete('cascade'))
     .addColumn('scene_id', 'integer', (c) => c.references('scenes.id').onDelete('cascade'))
@@ -67,7 +68,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('mail_outbox')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('to_user_id', 'integer', (c) => c.references('users.id'))
     .addColumn('to_address', 'text', (c) => c.notNull())
@@ -92,6 +93,13 @@ export async function up(db: Kysely<any>): Promise<void> {
  * definition is copied, so columns added by earlier migrations are kept.
  */
 async function returnedStatus(db: Kysely<any>) {
+  if (isPostgres(db)) {
+    // PostgreSQL alters the check in place; the foundation's inline check carries the default name.
+    await sql`alter table scenes drop constraint scenes_status_check`.execute(db);
+    await sql`update scenes set status = 'returned' where status = 'rejected'`.execute(db);
+    await sql`alter table scenes add constraint scenes_status_check check (status in ('draft','submitted','approved','returned','archived'))`.execute(db);
+    return;
+  }
   const table = (await sql<{ sql: string }>`select sql from sqlite_master where type = 'table' and name = 'scenes'`.execute(db)).rows[0]?.sql;
   if (!table || table.includes("'returned'")) return;
   if (!table.includes("'rejected'")) throw new Error('review-desk migration: the scenes status check is not the one expected');

@@ -1,13 +1,14 @@
-import { sql, type Kysely } from 'kysely';
+import { type Kysely } from 'kysely';
+import { autoId, nowText } from '@/db/dialect';
 
 // Trainers' lessons: an ordered list of steps, each a scene at a chosen revision with talking notes and an
 // optional question. Steps live in their own table so a scene's lessons can be found by the scene.
 export async function up(db: Kysely<any>): Promise<void> {
-  const now = sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`;
+  const now = nowText(db);
   await db.schema
     .createTable('lessons')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('organisation_id', 'integer', (c) => c.notNull().references('organisations.id').onDelete('cascade'))
     .addColumn('author_id', 'integer', (c) => c.notNull().references('users.id'))
     .addColumn('title', 'text', (c) => c.notNull())
@@ -18,7 +19,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('lesson_steps')
     .ifNotExists()
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('lesson_id', 'integer', (c) => c.notNull().references('lessons.id').onDelete('cascade'))
     .addColumn('position', 'integer', (c) => c.notNull())
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id'))

@@ -1,4 +1,5 @@
 import { sql, type Kysely } from 'kysely';
+import { doubleType } from '@/db/dialect';
 
 /**
  * Everyday scene actions and the list's figures.
@@ -16,9 +17,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('scene_id', 'integer', (c) => c.notNull().references('scenes.id').onDelete('cascade'))
     .addColumn('revision', 'integer', (c) => c.notNull())
     .addColumn('engine_version', 'text', (c) => c.notNull())
-    .addColumn('percent_of_tipping', 'real')
-    .addColumn('percent_of_bearing', 'real')
-    .addColumn('least_clearance', 'real')
+    .addColumn('percent_of_tipping', doubleType(db))
+    .addColumn('percent_of_bearing', doubleType(db))
+    .addColumn('least_clearance', doubleType(db))
     .addColumn('beyond_count', 'integer')
     .addColumn('problem', 'text')
     .addColumn('computed_at', 'text', (c) => c.notNull())

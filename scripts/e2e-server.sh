@@ -2,6 +2,8 @@
 # Builds the app and serves it against a freshly migrated and seeded e2e database.
 set -euo pipefail
 cd "$(dirname "$0")/.."
+# The e2e server always runs on its own SQLite file (DATABASE_FILE), whatever DATABASE_URL the shell has.
+unset DATABASE_URL
 rm -f "$DATABASE_FILE" "$DATABASE_FILE-wal" "$DATABASE_FILE-shm"
 rm -rf "$UPLOAD_DIR"
 npx tsx db/seed.ts

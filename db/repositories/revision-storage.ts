@@ -1,6 +1,7 @@
 import { gzipSync } from 'node:zlib';
 import { sql, type Kysely } from 'kysely';
 import type { Database } from '../schema';
+import { isPostgres, type HasExecutor } from '../dialect';
 
 type Db = Kysely<Database>;
 
@@ -21,11 +22,20 @@ export function compressedSnapshot(document: Record<string, unknown>): Buffer {
   return gzipSync(JSON.stringify(document), { level: 6 });
 }
 
+/**
+ * A full (uncompressed) JSON snapshot as the revision column takes it: text on SQLite, the JSON's UTF-8
+ * bytes on PostgreSQL, where the column is bytea (migrations/2026-12-02T14-30_revision-storage.ts).
+ */
+export function fullSnapshot(db: HasExecutor, document: Record<string, unknown> | string): string | Buffer {
+  const json = typeof document === 'string' ? document : JSON.stringify(document);
+  return isPostgres(db) ? Buffer.from(json, 'utf8') : json;
+}
+
 /** Marks a revision as kept (submitted or approved) and stores it as a full JSON snapshot. */
 export async function keepRevision(db: Db, sceneId: number, revision: number): Promise<boolean> {
   const row = await db.selectFrom('scene_revisions').select(['id', 'document']).where('scene_id', '=', sceneId).where('revision', '=', revision).executeTakeFirst();
   if (!row) return false;
-  await db.updateTable('scene_revisions').set({ kept: 1, document: JSON.stringify(row.document) }).where('id', '=', row.id).execute();
+  await db.updateTable('scene_revisions').set({ kept: 1, document: fullSnapshot(db, row.document) }).where('id', '=', row.id).execute();
   return true;
 }
 

@@ -1,5 +1,6 @@
 import { sql, type Expression, type Kysely, type SqlBool } from 'kysely';
 import type { Database } from '../schema';
+import { isPostgres, NEVER } from '../dialect';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { mayReadAllScenes } from '@/lib/auth/permissions';
 
@@ -87,6 +88,27 @@ export function ftsQuery(text: string): string | null {
   return words.slice(0, 12).map((w) => `"${w}"*`).join(' ');
 }
 
+/**
+ * The same search for PostgreSQL's to_tsquery: each word a prefix term ("word:*"), all required (&). The
+ * words hold only letters and digits, so no tsquery syntax gets through; accents are folded by the database
+ * (arcline_search_query, migrations/2026-12-02T14-00_scene-list.ts). Null when nothing searchable is left.
+ */
+export function tsQuery(text: string): string | null {
+  const words = text.normalize('NFKC').match(/[\p{L}\p{N}]+/gu);
+  if (!words) return null;
+  return words.slice(0, 12).map((w) => `${w}:*`).join(' & ');
+}
+
+/** Scene ids matching the search, on either database: FTS5 on SQLite, the tsvector GIN index on PostgreSQL. */
+function searchCondition(db: Db, text: string): Expression<SqlBool> | null {
+  if (isPostgres(db)) {
+    const q = tsQuery(text);
+    return q === null ? null : sql<SqlBool>`arcline_scene_search(scenes.title, scenes.location, scenes.notes) @@ arcline_search_query(${q})`;
+  }
+  const match = ftsQuery(text);
+  return match === null ? null : sql<SqlBool>`scenes.id in (select rowid from scenes_fts where scenes_fts match ${match})`;
+}
+
 /** The scenes a user may read: their organisation's, not deleted; operators see their own plus approved ones. */
 export function visibleScenes(db: Db, user: CurrentUser) {
   let q = db
@@ -106,9 +128,8 @@ function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
   q = opts.status ? q.where('scenes.status', '=', opts.status) : q.where('scenes.status', '!=', 'archived');
   if (opts.inTrainingSet !== undefined) q = q.where('scenes.in_training_set', '=', opts.inTrainingSet ? 1 : 0);
   if (opts.q !== undefined) {
-    const match = ftsQuery(opts.q);
     // A search with no letters or digits in it matches nothing, rather than everything.
-    q = match === null ? q.where(sql<SqlBool>`0`) : q.where('scenes.id', 'in', sql<number>`(select rowid from scenes_fts where scenes_fts match ${match})`);
+    q = q.where(searchCondition(db, opts.q) ?? NEVER);
   }
   return q;
 }

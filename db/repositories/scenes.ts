@@ -3,7 +3,7 @@ import type { Database, SceneRow } from '../schema';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { recordAudit } from './audit';
 import { inTransaction } from '../transaction';
-import { compressedSnapshot } from './revision-storage';
+import { compressedSnapshot, fullSnapshot } from './revision-storage';
 
 import { visibleScenes, type SceneSummary } from './scene-list';
 
@@ -79,7 +79,7 @@ export async function createScene(db: Db, user: CurrentUser, input: NewSceneInpu
       })
       .returning('id')
       .executeTakeFirstOrThrow();
-    await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: doc, author_id: user.id, created_at: now }).execute();
+    await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: 1, document: fullSnapshot(trx, doc), author_id: user.id, created_at: now }).execute();
     await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: row.id, action: 'scene.create', detail: { title: input.title } });
     return (await getScene(trx, user, row.id))!;
   });

@@ -5,6 +5,7 @@ import { DEMO_ORGS, DEMO_PASSWORD, DEMO_USERS } from './demo-users';
 import { DEMO_TRUCKS } from './demo-trucks';
 import { seedDemoRigging } from './demo-rigging';
 import { createEquipmentProfile } from '../repositories/equipment';
+import { fullSnapshot } from '../repositories/revision-storage';
 import { DEMO_SCENES, withTruckProfile } from './demo-scenes';
 import { REVIEW_SCENES } from './demo-review-scenes';
 import { seedDemoReview } from './demo-review';
@@ -67,7 +68,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<boolean> {
       // Earlier saves a day apart, so the replay's timeline has a story to tell.
       const at = (k: number) => new Date(Date.parse(now) - (revision - k) * 86_400_000).toISOString();
       for (const [i, d] of [...history, doc].entries()) {
-        await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: i + 1, document: d, author_id: owner, created_at: at(i + 1) }).execute();
+        await trx.insertInto('scene_revisions').values({ scene_id: row.id, revision: i + 1, document: fullSnapshot(trx, d), author_id: owner, created_at: at(i + 1) }).execute();
       }
       const details = DEMO_PLAN_DETAILS[s.title];
       if (details) {

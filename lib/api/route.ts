@@ -76,10 +76,14 @@ function tooDeepAt(value: unknown): string | null {
   return null;
 }
 
-/** SQLITE_BUSY (and its extended codes): another connection held the write lock past the busy timeout. */
+/**
+ * SQLITE_BUSY (and its extended codes): another connection held the write lock past the busy timeout.
+ * PostgreSQL: a row lock not granted within lock_timeout (55P03), a deadlock (40P01) or a serialization
+ * failure (40001); each is worth a retry a moment later.
+ */
 export function isDatabaseBusy(err: unknown): boolean {
   const code = (err as { code?: unknown } | null)?.code;
-  return typeof code === 'string' && (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED'));
+  return typeof code === 'string' && (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED') || code === '55P03' || code === '40P01' || code === '40001');
 }
 
 function answer(err: unknown, requestId: string): Response {

@@ -1,5 +1,5 @@
 import { staleRevisionBody } from '@/lib/api/errors';
-import { keepRevision } from '@/db/repositories/revision-storage';
+import { fullSnapshot, keepRevision } from '@/db/repositories/revision-storage';
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/schema';
 import { inTransaction } from '@/db/transaction';
@@ -164,7 +164,7 @@ export async function startNewRevision(db: Db, user: CurrentUser, id: number): P
       .where('status', '=', 'approved')
       .executeTakeFirst();
     if (Number(res.numUpdatedRows) !== 1) return false;
-    await trx.insertInto('scene_revisions').values({ scene_id: id, revision: next, document: JSON.stringify(scene.document), author_id: user.id, created_at: now }).execute();
+    await trx.insertInto('scene_revisions').values({ scene_id: id, revision: next, document: fullSnapshot(trx, scene.document), author_id: user.id, created_at: now }).execute();
     await recordAudit(trx, { organisationId: user.organisationId, userId: user.id, sceneId: id, action: 'scene.new-revision', detail: { approvedRevision: scene.revision, revision: next } });
     return true;
   });

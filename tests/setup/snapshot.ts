@@ -1,5 +1,6 @@
 import { sql } from 'kysely';
 import { getDb, type DB } from '@/db';
+import { isPostgres } from '@/db/dialect';
 
 export type DbSnapshot = Record<string, unknown[]>;
 
@@ -7,8 +8,18 @@ export type DbSnapshot = Record<string, unknown[]>;
  * Every row of every application table (Kysely's migration tables and SQLite's own excluded), in rowid
  * order. New tables are picked up without listing them, so a refused write to them is caught too.
  * Full-text indexes (and their shadow tables) are left out: triggers keep them in step with their table.
+ * On PostgreSQL (no rowid) rows come in the order of their first two columns: the id, or scene_figures' key.
  */
 export async function snapshotDb(db: DB = getDb()): Promise<DbSnapshot> {
+  if (isPostgres(db)) {
+    const tables = await sql<{ name: string }>`
+      select table_name as name from information_schema.tables
+      where table_schema = current_schema() and table_type = 'BASE TABLE' and table_name not like 'kysely!_%' escape '!'
+      order by table_name`.execute(db);
+    const out: DbSnapshot = {};
+    for (const { name } of tables.rows) out[name] = (await sql`select * from ${sql.table(name)} order by 1, 2`.execute(db)).rows;
+    return out;
+  }
   const tables = await sql<{ name: string }>`
     select name from sqlite_master
     where type = 'table' and name not like 'sqlite_%' and name not like 'kysely_%'

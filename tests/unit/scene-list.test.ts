@@ -1,8 +1,9 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { sql } from 'kysely';
 import type { DB } from '@/db';
+import { isPostgres } from '@/db/dialect';
 import { createScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
-import { COUNT_CAP, decodeCursor, ftsQuery, listScenes, type ListScenesOptions } from '@/db/repositories/scene-list';
+import { COUNT_CAP, decodeCursor, ftsQuery, listScenes, tsQuery, type ListScenesOptions } from '@/db/repositories/scene-list';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { demoUser } from '@/tests/setup/db';
 import { buildTemplate, resetToTemplate } from '@/tests/setup/template-db';
@@ -70,7 +71,7 @@ describe('keyset paging', () => {
   });
 });
 
-describe('full-text search (FTS5)', () => {
+describe('full-text search (FTS5 on SQLite, tsvector on PostgreSQL)', () => {
   it('folds accents and case, matches word prefixes, and covers location and notes', async () => {
     await createScene(db, op, { title: 'Reefer off the Château Ridge ramp', document: doc });
     await createScene(db, op, { title: 'Coil transfer', location: 'Mile 114, Route 9 northbound', document: doc });
@@ -92,13 +93,27 @@ describe('full-text search (FTS5)', () => {
     await db.deleteFrom('scene_revisions').where('scene_id', '=', s.id).execute();
     await db.deleteFrom('audit_log').where('scene_id', '=', s.id).execute();
     await db.deleteFrom('scenes').where('id', '=', s.id).execute();
-    const left = await sql<{ n: number }>`select count(*) as n from scenes_fts where scenes_fts match 'milk'`.execute(db);
+    // Nothing of it is left in the search index (on PostgreSQL the index is over the rows themselves).
+    const left = isPostgres(db)
+      ? await sql<{ n: number }>`select count(*) as n from scenes where arcline_scene_search(title, location, notes) @@ arcline_search_query('milk:*')`.execute(db)
+      : await sql<{ n: number }>`select count(*) as n from scenes_fts where scenes_fts match 'milk'`.execute(db);
     expect(left.rows[0].n).toBe(0);
   });
 
   it('quotes what people type, so FTS syntax in it is searched as words', () => {
     expect(ftsQuery('coil "AND" NEAR(x*')).toBe('"coil"* "AND"* "NEAR"* "x"*');
     expect(ftsQuery('%%')).toBeNull();
+    expect(tsQuery('coil & !x | (y:*)')).toBe('coil:* & x:* & y:*');
+    expect(tsQuery('%%')).toBeNull();
+  });
+
+  it('searches with query syntax typed into the box as plain words, on this database', async () => {
+    await createScene(db, op, { title: 'Quillwort tanker at the weir', document: doc });
+    const titles = async (q: string) => (await listScenes(db, op, { pageSize: 5, q })).items.map((i) => i.title);
+    expect(await titles('Quillw" & !(')).toEqual(['Quillwort tanker at the weir']);
+    expect(await titles('quillwort:* | weir')).toEqual(['Quillwort tanker at the weir']);
+    expect(await titles('quillwort -weir')).toEqual(['Quillwort tanker at the weir']);
+    expect(await titles('quillwort NOT weir OR x')).toEqual([]);
   });
 });
 

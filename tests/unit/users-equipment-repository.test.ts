@@ -7,6 +7,10 @@ import { HR4_SPEC } from '@/db/seed/demo-trucks';
 import { buildTemplate, resetToTemplate } from '@/tests/setup/template-db';
 import { snapshotDb } from '@/tests/setup/snapshot';
 
+// The database's own refusal, as SQLite words it ("UNIQUE constraint failed") or PostgreSQL does.
+const UNIQUE = /UNIQUE constraint failed|violates unique constraint/;
+const CHECK = /CHECK constraint failed|violates check constraint/;
+
 let template: string;
 let db: DB;
 let harrow: number, cobalt: number;
@@ -25,7 +29,7 @@ describe('organisations', () => {
   it('creates and finds an organisation; slugs are unique', async () => {
     const o = await createOrganisation(db, 'Tillbrook Heavy Recovery', 'tillbrook');
     expect(await findOrganisation(db, o.id)).toMatchObject({ name: 'Tillbrook Heavy Recovery', slug: 'tillbrook' });
-    await expect(createOrganisation(db, 'Another Tillbrook', 'tillbrook')).rejects.toThrow(/UNIQUE/);
+    await expect(createOrganisation(db, 'Another Tillbrook', 'tillbrook')).rejects.toThrow(UNIQUE);
     expect(await findOrganisation(db, 987654)).toBeUndefined();
   });
 });
@@ -36,7 +40,7 @@ describe('users', () => {
     expect(u.email).toBe('casey.ng@harrow.example');
     expect(u).not.toHaveProperty('password_hash');
     expect((await findUserByEmail(db, 'CASEY.NG@harrow.example'))?.id).toBe(u.id);
-    await expect(createUser(db, { organisation_id: harrow, email: 'casey.ng@HARROW.example', name: 'Dup', role: 'operator', password_hash: 'h' })).rejects.toThrow(/UNIQUE/);
+    await expect(createUser(db, { organisation_id: harrow, email: 'casey.ng@HARROW.example', name: 'Dup', role: 'operator', password_hash: 'h' })).rejects.toThrow(UNIQUE);
     // Another organisation may use the same address: e-mail is unique within an organisation only.
     const other = await createUser(db, { organisation_id: cobalt, email: 'casey.ng@HARROW.example', name: 'Casey Ng (Cobalt)', role: 'operator', password_hash: 'h' });
     expect(other.organisation_id).toBe(cobalt);
@@ -66,9 +70,9 @@ describe('users', () => {
 
   it('the database refuses a role or units outside the lists', async () => {
     const before = await snapshotDb(db);
-    await expect(createUser(db, { organisation_id: harrow, email: 'x@harrow.example', name: 'X', role: 'owner' as never, password_hash: 'h' })).rejects.toThrow(/CHECK/);
+    await expect(createUser(db, { organisation_id: harrow, email: 'x@harrow.example', name: 'X', role: 'owner' as never, password_hash: 'h' })).rejects.toThrow(CHECK);
     const row = (await findUserByEmail(db, 'admin@harrow.example'))!;
-    await expect(setUserUnits(db, row.id, 'furlongs' as never)).rejects.toThrow(/CHECK/);
+    await expect(setUserUnits(db, row.id, 'furlongs' as never)).rejects.toThrow(CHECK);
     expect(await snapshotDb(db)).toEqual(before);
   });
 });

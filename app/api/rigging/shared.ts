@@ -1,4 +1,5 @@
 import { HttpError } from '@/lib/api/errors';
+import { isUniqueViolation } from '@/db/dialect';
 import { resolveRatings, type StoredKindSize } from '@/lib/equipment/rigging-item';
 import type { RiggingItemData } from '@/lib/validations/rigging';
 
@@ -10,9 +11,9 @@ export function resolvedOr400(data: RiggingItemData, stored?: StoredKindSize) {
   return r.item;
 }
 
-/** SQLite's unique constraint on (organisation, tag), turned into a 409 that names the field. */
+/** The unique constraint on (organisation, tag), turned into a 409 that names the field. */
 export function tagConflict(err: unknown, tag: string): never {
-  if (err instanceof Error && /UNIQUE constraint failed: rigging_items/.test(err.message)) {
+  if (isUniqueViolation(err, 'rigging_items')) {
     throw new HttpError(409, `tag: ${tag} is already used by another item`, [{ path: 'tag', message: 'Already used' }]);
   }
   throw err;

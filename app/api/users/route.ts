@@ -1,4 +1,5 @@
 import { getDb } from '@/db';
+import { isUniqueViolation } from '@/db/dialect';
 import { inTransaction } from '@/db/transaction';
 import { recordAudit } from '@/db/repositories/audit';
 import { createUser, findUserByEmail, listUsers } from '@/db/repositories/users';
@@ -37,7 +38,7 @@ export const POST = route({ roles: rolesFor('manageUsers'), body: createUserSche
     return Response.json(created, { status: 201 });
   } catch (err) {
     // Another request may take the address between the check and the insert; the unique index decides.
-    if ((err as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE') throw emailTaken();
+    if (isUniqueViolation(err, 'users')) throw emailTaken();
     throw err;
   }
 });
