@@ -27,6 +27,26 @@ export function dueMail(db: Db, now: string, limit = 20): Promise<MailOutboxRow[
   return db.selectFrom('mail_outbox').selectAll().where('state', '=', 'pending').where('next_attempt_at', '<=', now).orderBy('id').limit(limit).execute();
 }
 
+/** How long a claimed message is left to the sender that claimed it before another may try it. */
+export const CLAIM_MS = 5 * 60 * 1000;
+
+/**
+ * Claims a due message for this sender before it is sent: moves its next attempt CLAIM_MS on, only if it is
+ * still pending with the next-attempt time it was read with. One conditional statement, so of several app
+ * instances (or overlapping rounds in one) exactly one wins each message; a sender that dies mid-send leaves
+ * the message to be retried once the claim runs out.
+ */
+export async function claimMail(db: Db, m: Pick<MailOutboxRow, 'id' | 'next_attempt_at'>, now: Date): Promise<boolean> {
+  const res = await db
+    .updateTable('mail_outbox')
+    .set({ next_attempt_at: new Date(now.getTime() + CLAIM_MS).toISOString() })
+    .where('id', '=', m.id)
+    .where('state', '=', 'pending')
+    .where('next_attempt_at', '=', m.next_attempt_at)
+    .executeTakeFirst();
+  return Number(res.numUpdatedRows) === 1;
+}
+
 export async function markSent(db: Db, id: number, messageId: string | null) {
   await db
     .updateTable('mail_outbox')

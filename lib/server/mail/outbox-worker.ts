@@ -2,7 +2,7 @@ import type { Kysely } from 'kysely';
 import type { Transporter } from 'nodemailer';
 import type { Database } from '@/db/schema';
 import { getDb } from '@/db';
-import { dueMail, markAttemptFailed, markSent } from '@/db/repositories/outbox';
+import { claimMail, dueMail, markAttemptFailed, markSent } from '@/db/repositories/outbox';
 import { MAIL_FROM, mailTransport } from './transport';
 
 /** Retry schedule after a failed send: 30 s, 1, 2, 4, 8 min; after six attempts the message is given up. */
@@ -11,12 +11,14 @@ export const backoffMs = (attempts: number) => 30_000 * 2 ** (attempts - 1);
 
 /**
  * Sends every due outbox message once. Runs after the transaction that queued them has committed, so a
- * slow or failing mail server never holds up or fails a request. Returns what happened, for tests and logs.
+ * slow or failing mail server never holds up or fails a request. Each message is claimed first, so another
+ * instance's round (several app instances share the outbox) never sends it too. Returns what happened.
  */
 export async function deliverDueMail(db: Kysely<Database>, transport: Transporter, now = new Date()): Promise<{ sent: number; failed: number }> {
   let sent = 0;
   let failed = 0;
   for (const m of await dueMail(db, now.toISOString())) {
+    if (!(await claimMail(db, m, now))) continue;
     try {
       const info = await transport.sendMail({ from: MAIL_FROM, to: m.to_address, subject: m.subject, text: m.text_body, html: m.html_body });
       await markSent(db, m.id, typeof info?.messageId === 'string' ? info.messageId : null);
