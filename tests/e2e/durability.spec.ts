@@ -340,6 +340,27 @@ test('two server processes on one database file: 20 writers for 20 s, no 500, no
     const saved = await send(servers[1]!, 'PUT', `/api/scenes/${ids[0]}`, { revision, title: 'Durability scene 0 after the restart' });
     expect(saved.status).toBe(200);
     expect(((await saved.json()) as { revision: number }).revision).toBe(revision + 1);
+
+    // Issue 11 item 8, from the servers' own output: one JSON line per API call with the request id, user,
+    // method, route, status and duration, and neither the password nor the session token anywhere.
+    const token = servers[0]!.cookie.match(/next-auth\.session-token=([^;]+)/)?.[1];
+    expect(token?.length).toBeGreaterThan(20);
+    for (const s of [a, b]) {
+      const text = fs.readFileSync(s.log, 'utf8');
+      const calls = text
+        .split('\n')
+        .filter((l) => l.startsWith('{'))
+        .map((l) => JSON.parse(l) as Record<string, unknown>)
+        .filter((l) => l.msg === 'api');
+      expect(calls.length, `API log lines of ${s.name}`).toBeGreaterThan(SCENES);
+      const saves = calls.filter((x) => x.method === 'PUT');
+      expect(saves.length, `save log lines of ${s.name}`).toBeGreaterThan(0);
+      for (const c of saves.slice(0, 50)) {
+        expect(c).toMatchObject({ requestId: expect.stringMatching(/^[\w.-]{8,}$/), userId: expect.any(Number), route: expect.stringMatching(/^\/api\/scenes\/\d+$/), status: expect.any(Number), ms: expect.any(Number) });
+      }
+      expect(text).not.toContain(PASSWORD);
+      expect(text).not.toContain(token!);
+    }
   } finally {
     await kill9(b);
     await kill9(a);
