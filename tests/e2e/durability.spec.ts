@@ -37,6 +37,12 @@ interface Server {
   child: ChildProcess;
 }
 
+/** Every server this spec started: killed after the test even when it fails or times out (they are detached). */
+const started: Server[] = [];
+test.afterEach(async () => {
+  for (const s of started.splice(0)) await kill9(s);
+});
+
 function startServer(name: string, port: string): Server {
   const base = `http://127.0.0.1:${port}`;
   const log = path.join(dataDir, `server-${name}.log`);
@@ -56,7 +62,9 @@ function startServer(name: string, port: string): Server {
     detached: true,
   });
   fs.closeSync(out);
-  return { name, base, port, log, child };
+  const server = { name, base, port, log, child };
+  started.push(server);
+  return server;
 }
 
 const logTail = (s: Server) => fs.readFileSync(s.log, 'utf8').split('\n').slice(-15).join('\n');
@@ -362,7 +370,6 @@ test('two server processes on one database file: 20 writers for 20 s, no 500, no
       expect(text).not.toContain(token!);
     }
   } finally {
-    await kill9(b);
-    await kill9(a);
+    for (const s of started.splice(0)) await kill9(s);
   }
 });
