@@ -201,12 +201,57 @@ function loadGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: 
   // they are far enough apart, the outlines where they come near.
   const far = decisive(limit) + lipschitz * step;
   const s = samples();
-  if (values.length < s.count) values = new Float64Array(s.count);
+  if (values.length < s.count) {
+    values = new Float64Array(s.count);
+    big = new Uint8Array(s.count);
+  }
+  // Samples whose bounding circles lie farther apart than `floor` get `floor` (a lower bound of their
+  // value, with a margin for rounding) instead of a square root each; see boundWithFloors.
+  const floor = Math.max(far, rough + 2 * lipschitz * step + 0.5);
+  const cut = floor + t.r + p.footprint.reach;
+  const cut2 = cut * cut * (1 + 1e-9);
+  let floors = 0;
   for (let k = 0; k < s.count; k++) {
+    const dx = s.hx[k] - t.cx, dy = s.hy[k] - t.cy;
+    if (dx * dx + dy * dy > cut2) {
+      values[k] = floor;
+      big[k] = 1;
+      floors++;
+      continue;
+    }
+    big[k] = 0;
+    const circles = Math.hypot(dx, dy) - t.r - p.footprint.reach;
+    values[k] = circles >= far ? circles : gapAt(p, t, s.deg[k]);
+  }
+  const lb = floors > 0 ? boundWithFloors(s, lipschitz) : lowerBoundOf(values, s, lipschitz);
+  if (!Number.isNaN(lb)) return Math.max(0, lb);
+  // A floored sample could decide the bound: work out every value.
+  for (let k = 0; k < s.count; k++) {
+    if (!big[k]) continue;
     const circles = Math.hypot(s.hx[k] - t.cx, s.hy[k] - t.cy) - t.r - p.footprint.reach;
     values[k] = circles >= far ? circles : gapAt(p, t, s.deg[k]);
   }
   return Math.max(0, lowerBoundOf(values, s, lipschitz));
+}
+
+let big = new Uint8Array(128);
+
+/**
+ * lowerBoundOf when some values are floors (big[k]): the true values are at least the floors and each term
+ * of the bound grows with its values, so when every term that uses a floor is above the least term that
+ * uses none, the bound is that least term, the same number as with every value worked out. NaN otherwise.
+ */
+function boundWithFloors(s: Samples, lipschitz: number): number {
+  let exact = big[0] ? Infinity : values[0];
+  let floored = big[0] ? values[0] : Infinity;
+  for (let k = 1; k < s.count; k++) {
+    const pair = (values[k - 1] + values[k] - lipschitz * (s.t[k] - s.t[k - 1])) / 2;
+    if (big[k]) floored = Math.min(floored, values[k]);
+    else exact = Math.min(exact, values[k]);
+    if (big[k] || big[k - 1]) floored = Math.min(floored, pair);
+    else exact = Math.min(exact, pair);
+  }
+  return floored > exact ? exact : NaN;
 }
 
 function boomGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: number, limit: number): number {
