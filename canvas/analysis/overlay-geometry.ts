@@ -174,7 +174,7 @@ function swingGeometryOf(a: LiveAnalysis, doc: SceneDocument, model: TruckModel)
     if (!poly) return null;
     const [pp, qq] = closestPoints(loadAt(c.slew), poly);
     const ok = c.horizontal >= climit || c.vertical >= climit;
-    return { target: c.target, name: names[c.target] ?? c.target, kind: c.kind, p: pp, q: qq, value: c.overlapsInPlan ? c.vertical : c.horizontal, vertical: c.overlapsInPlan, ok, slew: c.slew };
+    return { target: c.target, name: names[c.target] ?? (c.kind === 'body' ? 'the truck' : 'an obstacle'), kind: c.kind, p: pp, q: qq, value: c.overlapsInPlan ? c.vertical : c.horizontal, vertical: c.overlapsInPlan, ok, slew: c.slew };
   };
   const clearances: ClearanceMark[] = [];
   if (res) {

@@ -63,7 +63,7 @@ export function FiguresPanel({ big = false, hidden = false }: { big?: boolean; h
           <div>
             <p className={label}>Least clearance now</p>
             <p className={cx(big ? 'text-[32px] font-bold' : 'text-lg font-semibold', gap && gap.value < doc.limits.clearance && (big ? 'text-[#FF8A80]' : 'text-over'))} data-testid="replay-clearance">
-              {gap ? `${formatLength(gap.value, units)} to ${names[gap.target] ?? gap.target}` : 'no truck parts or obstacles to clear'}
+              {gap ? `${formatLength(gap.value, units)} to ${names[gap.target] ?? 'a truck part or obstacle'}` : 'no truck parts or obstacles to clear'}
             </p>
           </div>
           <div>

@@ -21,7 +21,7 @@ const KIND_WORDS: Record<string, string> = { truck: 'Truck', load: 'Load', trail
  */
 export function ChangesPanel({ changes, figures, since, units, names }: { changes: SceneChanges; figures: FigureChange[]; since: { revision: number; decision: string }; units: UnitSystem; names: Record<string, string> }) {
   const v = (f: FigureChange, x: number | null) => (x === null ? '—' : f.unit === '%' ? formatPercent(x) : formatLength(x, units));
-  const name = (c: { id: string; kind: string; label: string }) => c.label || names[c.id] || `${KIND_WORDS[c.kind] ?? c.kind} ${c.id}`;
+  const name = (c: { id: string; kind: string; label: string }) => c.label || names[c.id] || `${KIND_WORDS[c.kind] ?? 'Object'} (no label)`;
   const nothing = !changes.objects.length && !changes.site.length;
   return (
     <section aria-label="What changed" className="flex flex-col gap-3" data-testid="changes-panel">

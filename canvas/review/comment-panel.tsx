@@ -28,7 +28,7 @@ export function CommentPanel({ comments, names, units, canWrite, draft, setDraft
   useLeaveGuard(text.trim() !== '');
   const open = comments.threads.filter((t) => !t.resolved);
   const where = (a: Anchor | null) =>
-    !a ? 'General comment' : 'objectId' in a ? `On ${names[a.objectId] ?? a.objectId}` : `Pinned at ${formatLength(a.x, units)} E, ${formatLength(a.y, units)} N`;
+    !a ? 'General comment' : 'objectId' in a ? `On ${names[a.objectId] ?? 'an object no longer on the plan'}` : `Pinned at ${formatLength(a.x, units)} E, ${formatLength(a.y, units)} N`;
   const anchor = (): Anchor | null => (!draft?.pick ? null : draft.attach === 'object' && draft.pick.objectId ? { objectId: draft.pick.objectId } : draft.pick.point);
   const number = new Map(comments.threads.map((t, i) => [t.id, i + 1]));
   const shown = [...open, ...(showResolved ? comments.threads.filter((t) => t.resolved) : [])];

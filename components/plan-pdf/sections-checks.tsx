@@ -52,7 +52,7 @@ export function ClearanceSection({ d }: { d: PlanData }) {
       <Table
         columns={[{ title: 'Object', flex: 3 }, { title: 'Beside (plan gap)', flex: 2.5 }, { title: 'Above its top', flex: 2.5 }, { title: 'Nearest at slew', flex: 1.5 }, { title: 'Against limit', flex: 1.6 }]}
         rows={r.clearances.map((c) => [
-          `${d.names[c.target] ?? c.target} (${c.kind === 'body' ? 'truck' : 'site'})`,
+          `${d.names[c.target] ?? (c.kind === 'body' ? 'a truck part' : 'an unnamed obstacle')} (${c.kind === 'body' ? 'truck' : 'site'})`,
           c.overlapsInPlan ? 'passes over it' : dualLength(c.horizontal, u),
           dualLength(c.vertical, u),
           deg(c.slew),
@@ -67,7 +67,7 @@ export function ClearanceSection({ d }: { d: PlanData }) {
         <Table
           columns={[{ title: 'Line', flex: 2.5 }, { title: 'Nearest approach', flex: 3 }, { title: 'Required distance', flex: 2.5 }, { title: 'Rule', flex: 4 }, { title: 'Against it', flex: 1.4 }]}
           rows={r.powerLines.map((p) => [
-            d.names[p.id] ?? p.id,
+            d.names[p.id] ?? 'an unnamed power line',
             `${dualLength(p.distance, u)} (${p.nearest}, slew ${deg(p.slew)})`,
             p.required === null ? 'set by the utility' : dualLength(p.required, u),
             powerRuleWords(p.rule, p.rule.feet !== null ? dualLength(ftToM(p.rule.feet), u) : p.required !== null ? dualLength(p.required, u) : ''),

@@ -2,6 +2,7 @@ import type { Leg, TruckSpec } from './truck-spec';
 import { BODY_PART_IDS } from './truck-spec';
 import { toEngineLoadChart } from './load-chart';
 import { padCentre } from './truck-spec-rules';
+import { padLabel } from '@/lib/lift/names';
 
 /**
  * Turns a truck profile plus how it is set up (leg extensions, cribbing, boom) into the parts of the lift
@@ -72,13 +73,13 @@ export function boomCgFraction(spec: TruckSpec, length: number): number {
 function checkSetup(spec: TruckSpec, setup: TruckSetup) {
   for (const [id, s] of Object.entries(setup.legs)) {
     const leg = spec.outriggers.legs.find((l) => l.id === id);
-    if (!leg) throw new TruckSetupError(`legs.${id}`, `This truck has no leg ${id}`);
+    if (!leg) throw new TruckSetupError(`legs.${id}`, `This truck has no ${padLabel(id)} leg`);
     const travel = legTravel(leg);
     if (!Number.isFinite(s.extension) || s.extension < -SLACK || s.extension > travel + SLACK) {
-      throw new TruckSetupError(`legs.${id}.extension`, `Leg ${id} extends from 0 to ${travel.toFixed(3)} m; ${s.extension} m is outside that`);
+      throw new TruckSetupError(`legs.${id}.extension`, `The ${padLabel(id)} leg extends from 0 to ${travel.toFixed(3)} m; ${s.extension} m is outside that`);
     }
     if (s.cribbing && (!(s.cribbing.area > 0) || !(s.cribbing.mass >= 0))) {
-      throw new TruckSetupError(`legs.${id}.cribbing`, `Cribbing under leg ${id} needs an area above 0 and a mass of 0 or more`);
+      throw new TruckSetupError(`legs.${id}.cribbing`, `The cribbing under the ${padLabel(id)} leg needs an area above 0 and a mass of 0 or more`);
     }
   }
   const st = spec.boom.stages;

@@ -6,6 +6,7 @@ import { supportPolygon, type SupportPoint, type TippingLineGeom } from './suppo
 import { footprintLocal, type FootprintLocal } from './footprint';
 
 import { arcOf } from './swing';
+import { padName } from './names';
 import { normalizeDegrees } from './types';
 
 export { parseLiftInput } from './validate';
@@ -70,12 +71,14 @@ export interface PreparedLift {
 /** Validates the input (typed errors) and precomputes what every slew evaluation shares. */
 export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
   const input = parseLiftInput(raw);
-  input.masses.forEach((m, i) => assertMass(m.mass, `masses.${i}.mass`, `Mass "${m.id}"`));
+  // Messages name things as people do (the input's names, pad names), never by an internal id: they reach the
+  // editor's results panel and the plan's "nothing to compute" line as they are. `field` keeps the path.
+  input.masses.forEach((m, i) => assertMass(m.mass, `masses.${i}.mass`, `The truck's ${m.id} mass`));
   assertMass(input.boom.mass, 'boom.mass', 'The boom');
   assertMass(input.load.mass, 'load.mass', 'The load');
   assertMass(input.hook.blockMass, 'hook.blockMass', 'The hook block');
   assertMass(input.hook.riggingMass, 'hook.riggingMass', 'The rigging');
-  input.supports.forEach((s, i) => assertMass(s.cribbingMass ?? 0, `supports.${i}.cribbingMass`, `Cribbing under "${s.id}"`));
+  input.supports.forEach((s, i) => assertMass(s.cribbingMass ?? 0, `supports.${i}.cribbingMass`, `The cribbing under the ${s.name ?? padName(s.id, s.x, s.y)} pad`));
   if (!(input.boom.length > 0)) {
     throw new LiftError('zero-length-boom', `The boom length is ${input.boom.length} m; give the length from pivot to tip.`, 'boom.length');
   }
@@ -95,11 +98,11 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     return { id, name: name ?? id, kind, poly, n: poly.length / 2, top, cx, cy, r };
   };
   input.bodies.forEach((b, i) => {
-    targets.push(target(b.id, b.name, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `Body part "${b.id}"`), b.top));
+    targets.push(target(b.id, b.name, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `The truck's ${b.name ?? b.id}`), b.top));
   });
   [...input.obstacles, ...fromSite.obstacles].forEach((o, i) => {
     const field = i < input.obstacles.length ? `obstacles.${i}.polygon` : `site.obstacles.${i - input.obstacles.length}.polygon`;
-    targets.push(target(o.id, o.name, 'obstacle', checkPolygon(o.polygon, field, `Obstacle "${o.id}"`), o.top));
+    targets.push(target(o.id, o.name, 'obstacle', checkPolygon(o.polygon, field, o.name ? `The obstacle “${o.name}”` : 'An obstacle'), o.top));
   });
   if (input.load.footprint.kind === 'polygon') checkPolygon(input.load.footprint.points, 'load.footprint.points', 'The load footprint');
 

@@ -1,4 +1,5 @@
 import { LiftError } from './errors';
+import { padName } from './names';
 
 /**
  * The support polygon is the convex hull of the pads (and any tyres left on the ground); its edges are
@@ -62,7 +63,10 @@ export function supportPolygon(supports: readonly SupportPoint[]): { hull: Suppo
     for (let j = i + 1; j < supports.length; j++) {
       const d = Math.hypot(supports[i].x - supports[j].x, supports[i].y - supports[j].y);
       if (d < MIN_SUPPORT_SPACING) {
-        throw new LiftError('coincident-supports', `Supports "${supports[i].id}" and "${supports[j].id}" stand at the same spot (${(d * 1000).toFixed(1)} mm apart); each pad needs its own place.`, `supports.${j}`);
+        // Pads by name, never by id: this sentence reaches the editor's results panel as it is.
+        const a = padName(supports[i].id, supports[i].x, supports[i].y);
+        const b = padName(supports[j].id, supports[j].x, supports[j].y);
+        throw new LiftError('coincident-supports', `The ${a} and ${b} pads stand at the same spot (${(d * 1000).toFixed(1)} mm apart); each pad needs its own place.`, `supports.${j}`);
       }
     }
   }

@@ -41,7 +41,8 @@ export interface PlanFigures {
   beyondPlan: string[];
 }
 
-const name = (names: Record<string, string>, id: string) => names[id] ?? id;
+/** What the plan calls an object; never its internal id, which means nothing to a reader. */
+const name = (names: Record<string, string>, id: string) => names[id] ?? 'an unnamed object';
 
 /** Every hard-limit breach of a result, the nominal case and the upper end of an estimated weight. */
 export function hardLimitBreaches(result: LiftResult, allowable: number, names: Record<string, string>): LimitBreach[] {

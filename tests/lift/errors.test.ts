@@ -62,6 +62,25 @@ describe('typed engine errors', () => {
     expect(codeOf({ ...base, rigging: { shackles: [{ id: 'x', size: '9/16' }] } })).toBe('invalid-rigging');
     expect(codeOf({ ...base, swing: { from: 'north', to: 10, direction: 'ccw' } })).toBe('invalid-input');
   });
+  it('messages name things as people do, never by an internal id (they reach the editor and the plan as they are)', () => {
+    const messageOf = (input: unknown) => {
+      try {
+        analyzeLift(input as LiftInputIn);
+      } catch (e) {
+        return (e as LiftError).message;
+      }
+      return '';
+    };
+    const sliver = [{ x: 5, y: 0 }, { x: 6, y: 0 }, { x: 7, y: 0 }];
+    const named = messageOf({ ...base, obstacles: [{ id: 'obstacle-6c1am4', name: 'Light pole', polygon: sliver, top: 6 }] });
+    expect(named).toMatch(/^The obstacle “Light pole” has no area/);
+    const unnamed = messageOf({ ...base, obstacles: [{ id: 'obstacle-6c1am4', polygon: sliver, top: 6 }] });
+    expect(unnamed).toMatch(/^An obstacle has no area/);
+    const twin = messageOf({ ...base, supports: [...base.supports, { ...base.supports[0], id: 'FL2', x: base.supports[0].x + 0.004 }] });
+    expect(twin).toMatch(/^The left front and left front FL2 pads stand at the same spot \(4\.0 mm apart\)/);
+    // No id-like token: quoted codes, slug-with-suffix object ids, or check ids with colons.
+    for (const m of [named, unnamed, twin]) expect(m).not.toMatch(/"[A-Za-z0-9-]+"|[a-z]+-[a-z0-9]{6}\b|\b[a-z]+:[A-Za-z0-9:-]+/);
+  });
   it('a well-formed input passes', () => {
     expect(codeOf(base)).toBe('none');
   });

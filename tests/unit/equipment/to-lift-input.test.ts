@@ -115,7 +115,7 @@ describe('truckToLiftParts: setup errors name the field', () => {
   it('refuses a leg past its travel', () => {
     const e = setupErr(() => truckToLiftParts(HR7_SPEC, { legs: { ...fullOut, FL: { extension: 2.3 } }, boom: { length: 6.4, elevation: 0 } }));
     expect(e.field).toBe('legs.FL.extension');
-    expect(e.message).toBe('Leg FL extends from 0 to 2.200 m; 2.3 m is outside that');
+    expect(e.message).toBe('The left front (FL) leg extends from 0 to 2.200 m; 2.3 m is outside that');
   });
   it('refuses a leg the truck does not have', () => {
     expect(setupErr(() => truckToLiftParts(HR4_SPEC, { legs: { FL: { extension: 2.0 }, FJ: { extension: 0 } }, boom: { length: 5.8, elevation: 0 } })).field).toBe('legs.FJ');
