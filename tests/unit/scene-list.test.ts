@@ -107,6 +107,23 @@ describe('full-text search (FTS5 on SQLite, tsvector on PostgreSQL)', () => {
     expect(tsQuery('%%')).toBeNull();
   });
 
+  it('looks words up in the search index, not by reading every scene', async () => {
+    // The list's own search condition, planned by the database (sequential scans priced out on PostgreSQL,
+    // whose planner would rightly read a table this small from start to end).
+    if (isPostgres(db)) {
+      const plan = await db.transaction().execute(async (trx) => {
+        await sql`set local enable_seqscan = off`.execute(trx);
+        const q = trx.selectFrom('scenes').select('scenes.id').where(sql<boolean>`arcline_scene_search(scenes.title, scenes.location, scenes.notes) @@ arcline_search_query(${'chat:*'})`).compile();
+        return (await sql.raw<{ 'QUERY PLAN': string }>(`explain ${q.sql.replace('$1', "'chat:*'")}`).execute(trx)).rows.map((r) => r['QUERY PLAN']).join('\n');
+      });
+      expect(plan).toContain('scenes_search_idx');
+    } else {
+      // Without the JSON-columns plugin: EXPLAIN's own "detail" column is plain text.
+      const plan = await sql<{ detail: string }>`explain query plan select id from scenes where id in (select rowid from scenes_fts where scenes_fts match ${'"chat"*'})`.execute(db.withoutPlugins());
+      expect(plan.rows.map((r) => r.detail).join('\n')).toMatch(/VIRTUAL TABLE INDEX/);
+    }
+  });
+
   it('searches with query syntax typed into the box as plain words, on this database', async () => {
     await createScene(db, op, { title: 'Quillwort tanker at the weir', document: doc });
     const titles = async (q: string) => (await listScenes(db, op, { pageSize: 5, q })).items.map((i) => i.title);
