@@ -35,6 +35,8 @@ export default async function proxy(req: NextRequest) {
 }
 
 export const config = {
-  // Everything but built assets: pages get the nonce, API paths the escape check.
-  matcher: ['/((?!_next/static|_next/image|favicon.ico|arcline-mark.svg).*)'],
+  // Everything but built assets: pages get the nonce. API paths only when they hold a '%' (the escape check):
+  // while a proxy runs for a request, Next copies its body (up to 10 MB, twice) and waits for all of it
+  // before the route handler starts, so a route could not refuse an oversized chunked body while it streams.
+  matcher: ['/((?!_next/static|_next/image|favicon.ico|arcline-mark.svg|api/[^%]*$).*)'],
 };
