@@ -23,8 +23,11 @@ else
 fi
 
 started=0
+tests=
 cleanup() {
   local rc=$?
+  # vitest and its workers, as one process group (setsid below).
+  if [[ -n "$tests" ]] && kill -0 "$tests" 2>/dev/null; then kill -TERM -- "-$tests" 2>/dev/null || true; sleep 1; kill -KILL -- "-$tests" 2>/dev/null || true; fi
   if ((started)); then as_pg "$PGBIN/pg_ctl" -D "$DIR/data" -m immediate -w stop >/dev/null 2>&1 || true; fi
   if ((rc != 0)) && [[ -f "$DIR/log" ]]; then echo "--- last lines of the PostgreSQL log" >&2; tail -n 20 "$DIR/log" >&2 || true; fi
   rm -rf "$DIR"
@@ -50,4 +53,8 @@ else
   mapfile -t files < <(grep -rlE "from '@/(db|tests/setup/(db|template-db|route-matrix|fixtures))['/]" tests --include='*.test.ts' | grep -v -e 'tests/e2e/' -e 'tests/unit/security/contention.test.ts' -e 'tests/unit/layers.test.ts' | sort)
 fi
 echo "${#files[@]} suites"
-DATABASE_URL="postgresql://arcline@localhost:$PORT/postgres?host=$DIR" npx vitest run "${files[@]}"
+# In its own process group, in the background and waited for: an interrupt or TERM reaches the trap at once,
+# which ends vitest with its workers and still removes the cluster.
+DATABASE_URL="postgresql://arcline@localhost:$PORT/postgres?host=$DIR" setsid npx vitest run "${files[@]}" &
+tests=$!
+wait "$tests"
