@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { screens, signIn } from './helpers';
+import { HARROW_SCENES, sceneIdByTitle, screens, signIn } from './helpers';
 
 /**
  * The placement search from the Placement tab (issue 17): on a copy of the demo coil transfer (so the
@@ -9,8 +9,9 @@ import { screens, signIn } from './helpers';
 test('Placement tab: search the demo coil transfer, apply a proposal, the figures change and a new revision is saved', async ({ page }) => {
   test.setTimeout(180_000);
   await signIn(page, 'operator@harrow.example');
-  const list = (await (await page.request.get('/api/scenes?title=Coil')).json()) as { items: { id: number }[] };
-  const copy = await page.request.post(`/api/scenes/${list.items[0].id}/duplicate`, { data: { title: 'Placement search journey: coil copy' } });
+  // The copy's title leaves out "coil": other journeys find the seeded scene by searching for it.
+  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
+  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Placement search journey (weigh-station lift, copied)' } });
   expect(copy.status()).toBe(201);
   const id = ((await copy.json()) as { id: number }).id;
   const revision = async () => ((await (await page.request.get(`/api/scenes/${id}`)).json()) as { revision: number }).revision;
@@ -55,8 +56,7 @@ test('Placement tab: search the demo coil transfer, apply a proposal, the figure
 
 test('Placement tab warns when the truck as drawn overlaps something on the ground (demo reefer scene: the guardrail)', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
-  const list = (await (await page.request.get('/api/scenes?title=reefer')).json()) as { items: { id: number }[] };
-  await page.goto(`/scenes/${list.items[0].id}`);
+  await page.goto(`/scenes/${await sceneIdByTitle(page, HARROW_SCENES.reefer)}`);
   await page.getByTestId('tab-advisor').click();
   const warning = page.getByTestId('advisor-standing-warning');
   await expect(warning).toBeVisible();
