@@ -2,6 +2,7 @@
 
 import { useSyncExternalStore } from 'react';
 import { formatDay, formatWhen } from '@/components/scenes/format';
+import { formatDateTime } from '@/lib/format/date';
 
 const noSubscription = () => () => {};
 
@@ -11,7 +12,7 @@ const noSubscription = () => () => {};
  */
 export function LocalTime({ iso }: { iso: string }) {
   const local = useSyncExternalStore(noSubscription, () => formatWhen(iso), () => null);
-  const utc = new Date(iso).toLocaleString('en-GB', { timeZone: 'UTC', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }) + ' UTC';
+  const utc = `${formatDateTime(iso, 'en-GB', 'UTC')} UTC`;
   return (
     <time dateTime={iso} className="whitespace-nowrap tabular-nums">
       {local ?? utc}

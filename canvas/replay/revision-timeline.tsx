@@ -6,7 +6,7 @@ import { formatLength, formatPressure } from '@/lib/format/quantity';
 import type { UnitSystem } from '@/lib/units';
 import { cx } from '@/components/ui/cx';
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime as when } from '@/lib/format/date';
 
 function figureWords(f: HeadlineFigures | null, units: UnitSystem) {
   if (!f) return { pct: '—', pad: '—', gap: '—' };

@@ -70,14 +70,14 @@ export function SignOffSection({ d }: { d: PlanData }) {
     <View>
       <Text style={s.h2} minPresenceAhead={120}>Sign-off</Text>
       <Text style={s.p}>
-        Prepared by {d.meta.savedBy}, revision {d.meta.revision} saved {when(d.meta.savedAt)}.
+        Prepared by {d.meta.savedBy}, revision {d.meta.revision} saved {when(d.meta.savedAt, d.meta.units)}.
       </Text>
       {d.signOff.length ? (
         d.signOff.map((o, i) => (
           <View key={i} style={{ marginBottom: 4 }}>
             <Text style={s.p}>
               {o.action} by {o.by}
-              {o.role ? ` (${o.role})` : ''}, {when(o.at)}.
+              {o.role ? ` (${o.role})` : ''}, {when(o.at, d.meta.units)}.
             </Text>
             {o.conditions ? <Text style={s.p}>Conditions: {o.conditions}</Text> : null}
             {o.reason ? <Text style={s.p}>Reason for approval beyond the plan’s own limits: {o.reason}</Text> : null}

@@ -4,7 +4,7 @@ import { WEIGHT_SOURCE_WORDS } from '@/lib/plan-details/schema';
 import { SOIL_CHOICES } from '@/lib/lift/soil';
 import type { PlanData } from './plan-data';
 import { KeyValues, Table } from './table';
-import { checkWords, deg } from './format';
+import { checkWords, day, deg } from './format';
 import { s } from './styles';
 import { knownPadName } from '@/lib/lift/names';
 import { kindLabel } from '@/components/rigging/labels';
@@ -82,7 +82,7 @@ export function RiggingSection({ d }: { d: PlanData }) {
             `${r.pick.angleFromHorizontal}° from horizontal`,
             r.capacityKg !== null ? dualMass(r.capacityKg, u) : dualMass(r.pick.ratingKg, u),
             r.demandKg !== null && r.capacityKg ? `${Math.round((100 * r.demandKg) / r.capacityKg)} %` : '-',
-            r.lastInspection ? `${r.lastInspection}${r.nextDue ? ` (next due ${r.nextDue})` : ''}` : 'Not recorded',
+            r.lastInspection ? `${day(r.lastInspection, u)}${r.nextDue ? ` (next due ${day(r.nextDue, u)})` : ''}` : 'Not recorded',
           ])}
           tone={(i, j) => (j === 4 && d.rigging[i].demandKg !== null && d.rigging[i].capacityKg !== null ? (d.rigging[i].demandKg! > d.rigging[i].capacityKg! ? 'over' : null) : null)}
         />

@@ -8,6 +8,7 @@ import { may } from '@/lib/auth/permissions';
 import { idParams } from '@/lib/api/route';
 import { today } from '@/lib/dates';
 import { PageHeader } from '@/components/ui/page-header';
+import { LocalDay } from '@/components/local-time';
 import { Notice } from '@/components/ui/notice';
 import { ExampleValuesNote } from '@/components/equipment/example-note';
 import { RiggingItemForm } from '@/components/rigging/rigging-item-form';
@@ -40,7 +41,7 @@ export default async function RiggingItemPage({ params, searchParams }: { params
           </Notice>
         )}
         {item.status === 'tagged_out' && <Notice tone="error" title="Tagged out">The editor refuses this item until it is back in service.</Notice>}
-        {due === 'overdue' && <Notice tone="warning" title="Inspection overdue">It was due on {item.nextInspectionDue}. The editor warns when this item is picked.</Notice>}
+        {due === 'overdue' && <Notice tone="warning" title="Inspection overdue">It was due on <LocalDay ymd={item.nextInspectionDue!} />. The editor warns when this item is picked.</Notice>}
       </div>
       <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_28rem]">
         <RiggingItemForm id={item.id} units={user.units} readOnly={!canEdit} initial={{ tag: item.tag, kind: item.kind, size: item.size, length: item.length, ratings: item.ratings, status: item.status, lastInspection: item.lastInspection, nextInspectionDue: item.nextInspectionDue, notes: item.notes }} />
