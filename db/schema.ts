@@ -1,7 +1,7 @@
 import type { ColumnType, Generated, Insertable, JSONColumnType, Selectable, Updateable } from 'kysely';
 import type { RiggingKind, RiggingStatus, Role, SceneStatus } from '@/lib/domain';
 
-/** ISO-8601 text timestamps: SQLite has no date type, and text sorts correctly. */
+/** ISO-8601 UTC text timestamps on both databases (db/dialect.ts): SQLite has no date type, and text sorts correctly. */
 type Timestamp = ColumnType<string, string | undefined, string>;
 
 export interface OrganisationTable {
@@ -83,7 +83,7 @@ export interface SceneRevisionTable {
   id: Generated<number>;
   scene_id: number;
   revision: number;
-  /** JSON text for kept revisions; gzip bytes for autosaves (inflated on read by db/json-columns.ts). */
+  /** JSON for kept revisions (text on SQLite, UTF-8 bytes in PostgreSQL's bytea); gzip bytes for autosaves (both read back by db/json-columns.ts). */
   document: JSONColumnType<Record<string, unknown>, string | Buffer, string | Buffer>;
   author_id: number;
   /** 1 for a submitted or approved revision: a full snapshot that thinning never removes. */
