@@ -62,4 +62,10 @@ test('Placement tab warns when the truck as drawn overlaps something on the grou
   await expect(warning).toBeVisible();
   await expect(warning).toContainText('the body overlaps Guardrail');
   await screens(page, 'placement-standing-warning', ['laptop']);
+  // On a portrait tablet the panel is a drawer over the plan: the warning is there too.
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await page.getByRole('button', { name: 'Details & results' }).click();
+  await page.getByTestId('tab-advisor').click();
+  await expect(page.getByTestId('advisor-standing-warning')).toBeVisible();
+  await page.screenshot({ path: 'test-results/screens/placement-standing-warning-tablet-portrait.png' });
 });
