@@ -35,9 +35,9 @@ export function RiggingImport({ onImported }: { onImported: () => void }) {
         (by colour), a shackle (by size) or a chain (e.g. &ldquo;3/8 in grade 80&rdquo;) to fill them from the built-in tables. If any row is wrong, nothing is imported.
       </p>
       <div className="mt-3 flex flex-wrap items-center gap-3">
-        <label className="text-label">
+        <label className="min-w-0 max-w-full text-label">
           Choose a file{' '}
-          <input type="file" accept=".csv,text/csv" className="mt-1 block min-h-touch text-body" onChange={async (e) => setCsv((await e.target.files?.[0]?.text()) ?? '')} />
+          <input type="file" accept=".csv,text/csv" className="mt-1 block min-h-touch w-full max-w-full text-body" onChange={async (e) => setCsv((await e.target.files?.[0]?.text()) ?? '')} />
         </label>
       </div>
       <label htmlFor="rigging-csv" className="mt-3 block text-label">
