@@ -7,6 +7,7 @@ import { ToolButton } from './button';
 import { SceneSaveBar } from '../persistence/scene-save-bar';
 import { parseSceneDocument } from '@/lib/scene/parse';
 import { PlanExportMenu } from '../export/plan-export-menu';
+import { ViewMenu } from './view-menu';
 
 /** Scene title and status, undo/redo, snapping and zoom. */
 export function TopBar({ scene, user }: { scene: { id: number; title: string; status: string; revision: number; updatedAt: string }; user: { name: string; role: string } }) {
@@ -21,7 +22,7 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
       <Link href="/scenes" className="flex min-h-11 items-center rounded-md px-2 text-sm font-medium text-teal hover:bg-paper-sunk">
         ← Scenes
       </Link>
-      <div className="min-w-[7rem] flex-1 lg:min-w-[9rem]">
+      <div className="min-w-[6rem] flex-1 lg:min-w-[9rem]">
         <h1 className="truncate text-base font-semibold leading-tight" data-testid="scene-title">
           {scene.title}
         </h1>
@@ -49,26 +50,38 @@ export function TopBar({ scene, user }: { scene: { id: number; title: string; st
           <ToolButton title="Redo (Ctrl Shift Z)" aria-label="Redo" disabled={!canRedo} onClick={() => store.getState().redo()}>
             ↷
           </ToolButton>
-          <ToolButton title="Snap to grid (G)" active={snap} onClick={() => store.getState().set({ snapToGrid: !snap })} className="hidden md:flex">
+          <ToolButton title="Snap to grid (G)" active={snap} onClick={() => store.getState().set({ snapToGrid: !snap })} className="hidden lg:flex">
             Snap
           </ToolButton>
         </>
       )}
-      <ToolButton title="Zoom out (−)" aria-label="Zoom out" onClick={() => zoomBy(editor, 0.8)}>
-        −
-      </ToolButton>
-      <span className="hidden w-14 text-center text-sm tabular-nums lg:inline" data-testid="zoom" aria-label="Zoom">
-        {zoom}%
-      </span>
-      <ToolButton title="Zoom in (+)" aria-label="Zoom in" onClick={() => zoomBy(editor, 1.25)}>
-        +
-      </ToolButton>
-      <ToolButton title="Fit the scene (F)" onClick={() => fitToScene(editor)}>
-        Fit
-      </ToolButton>
-      <ToolButton title="Keyboard shortcuts (?)" aria-label="Keyboard shortcuts" onClick={() => store.getState().set({ helpOpen: true })}>
-        ?
-      </ToolButton>
+      {/* Laptop: the view controls in the bar. Tablet: one "View" menu, so the bar stays one row at 820 px. */}
+      <div className="hidden items-center gap-x-1 lg:flex">
+        <ToolButton title="Zoom out (−)" aria-label="Zoom out" onClick={() => zoomBy(editor, 0.8)}>
+          −
+        </ToolButton>
+        <span className="w-14 text-center text-sm tabular-nums" data-testid="zoom" aria-label="Zoom">
+          {zoom}%
+        </span>
+        <ToolButton title="Zoom in (+)" aria-label="Zoom in" onClick={() => zoomBy(editor, 1.25)}>
+          +
+        </ToolButton>
+        <ToolButton title="Fit the scene (F)" onClick={() => fitToScene(editor)}>
+          Fit
+        </ToolButton>
+        <ToolButton title="Keyboard shortcuts (?)" aria-label="Keyboard shortcuts" onClick={() => store.getState().set({ helpOpen: true })}>
+          ?
+        </ToolButton>
+      </div>
+      <ViewMenu
+        className="lg:hidden"
+        zoom={zoom}
+        snap={readOnly ? null : snap}
+        onSnap={() => store.getState().set({ snapToGrid: !snap })}
+        onZoom={(f) => zoomBy(editor, f)}
+        onFit={() => fitToScene(editor)}
+        onHelp={() => store.getState().set({ helpOpen: true })}
+      />
     </header>
   );
 }
