@@ -4,6 +4,7 @@ import SQLite from 'better-sqlite3';
 import pg from 'pg';
 import { Kysely, PostgresDialect } from 'kysely';
 import type { Database } from './schema';
+import { log } from '@/lib/log';
 import { JsonColumnsPlugin } from './json-columns';
 import { ImmediateSqliteDialect, STATEMENT_BUSY_TIMEOUT_MS, WRITE_LOCK_WAIT_MS } from './immediate-dialect';
 
@@ -80,6 +81,9 @@ export function openPostgres(url: string): DB {
     types: pgTypes,
     options: `-c lock_timeout=${WRITE_LOCK_WAIT_MS}`,
   });
+  // An idle pooled connection the server closes (a restart, a failover, an administrator) must not take the
+  // process down as an unhandled 'error' event; the pool drops it and opens a new one when next needed.
+  pool.on('error', (err) => log.warn({ err }, 'PostgreSQL closed an idle pooled connection'));
   return new Kysely<Database>({ dialect: new PostgresDialect({ pool }), plugins: [new JsonColumnsPlugin()] });
 }
 
