@@ -12,15 +12,12 @@ import { POST as sendRoute } from '@/app/api/users/[id]/password-reset/route';
 import { POST as completeRoute } from '@/app/api/password-reset/route';
 import { PATCH as patchUser } from '@/app/api/users/[id]/route';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { authOptions } from '@/lib/auth/options';
+import { authorize, idOf } from '@/tests/setup/credentials';
 import { hashResetToken } from '@/lib/auth/reset-token';
 import { sendPasswordReset } from '@/lib/server/password-reset';
 import { freshSeededDb, demoUser } from '@/tests/setup/db';
 import { snapshotDb } from '@/tests/setup/snapshot';
 
-type Authorize = (credentials: Record<string, unknown> | undefined, req: unknown) => Promise<unknown>;
-const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
-const idOf = async (email: string) => (await getDb().selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id;
 async function signInAs(email: string | null) {
   if (email === null) {
     session.userId = null;

@@ -11,12 +11,9 @@ import { getDb } from '@/db';
 import { DEMO_PASSWORD } from '@/db/seed/demo-users';
 import { PATCH } from '@/app/api/users/[id]/route';
 import { getCurrentUser } from '@/lib/auth/current-user';
-import { authOptions } from '@/lib/auth/options';
+import { authorize, idOf } from '@/tests/setup/credentials';
 import { freshSeededDb } from '@/tests/setup/db';
 
-type Authorize = (credentials: Record<string, unknown> | undefined, req: unknown) => Promise<unknown>;
-const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
-const idOf = async (email: string) => (await getDb().selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow()).id;
 /** A fresh session for this user: the token carries their current session version. */
 async function signInAt(id: number) {
   session.userId = id;
