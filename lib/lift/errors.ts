@@ -48,6 +48,6 @@ export const isLiftError = (e: unknown): e is LiftError => e instanceof LiftErro
 /** Throws invalid-mass unless m is a finite number ≥ 0. */
 export function assertMass(m: number, field: string, what: string): void {
   if (!Number.isFinite(m) || m < 0) {
-    throw new LiftError('invalid-mass', `${what} has mass ${String(m)} kg; a mass must be a number of kilograms, zero or more.`, field);
+    throw new LiftError('invalid-mass', `${what} has no usable mass (${Number.isFinite(m) ? 'below zero' : 'not a number'}); give a weight of zero or more.`, field);
   }
 }

@@ -80,7 +80,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
   assertMass(input.hook.riggingMass, 'hook.riggingMass', 'The rigging');
   input.supports.forEach((s, i) => assertMass(s.cribbingMass ?? 0, `supports.${i}.cribbingMass`, `The cribbing under the ${s.name ?? padName(s.id, s.x, s.y)} pad`));
   if (!(input.boom.length > 0)) {
-    throw new LiftError('zero-length-boom', `The boom length is ${input.boom.length} m; give the length from pivot to tip.`, 'boom.length');
+    throw new LiftError('zero-length-boom', 'The boom has no length (zero, below zero or not a number); give the length from pivot to tip.', 'boom.length');
   }
   const { hull, lines } = supportPolygon(input.supports);
   if (input.loadChart) validateLoadChart(input.loadChart);

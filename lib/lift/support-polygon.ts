@@ -66,7 +66,7 @@ export function supportPolygon(supports: readonly SupportPoint[]): { hull: Suppo
         // Pads by name, never by id: this sentence reaches the editor's results panel as it is.
         const a = padName(supports[i].id, supports[i].x, supports[i].y);
         const b = padName(supports[j].id, supports[j].x, supports[j].y);
-        throw new LiftError('coincident-supports', `The ${a} and ${b} pads stand at the same spot (${(d * 1000).toFixed(1)} mm apart); each pad needs its own place.`, `supports.${j}`);
+        throw new LiftError('coincident-supports', `The ${a} and ${b} pads stand at the same spot (within a hair's breadth); each pad needs its own place.`, `supports.${j}`);
       }
     }
   }

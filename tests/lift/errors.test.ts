@@ -77,7 +77,7 @@ describe('typed engine errors', () => {
     const unnamed = messageOf({ ...base, obstacles: [{ id: 'obstacle-6c1am4', polygon: sliver, top: 6 }] });
     expect(unnamed).toMatch(/^An obstacle has no area/);
     const twin = messageOf({ ...base, supports: [...base.supports, { ...base.supports[0], id: 'FL2', x: base.supports[0].x + 0.004 }] });
-    expect(twin).toMatch(/^The left front and left front FL2 pads stand at the same spot \(4\.0 mm apart\)/);
+    expect(twin).toMatch(/^The left front and left front FL2 pads stand at the same spot \(within a hair's breadth\)/);
     // No id-like token: quoted codes, slug-with-suffix object ids, or check ids with colons.
     for (const m of [named, unnamed, twin]) expect(m).not.toMatch(/"[A-Za-z0-9-]+"|[a-z]+-[a-z0-9]{6}\b|\b[a-z]+:[A-Za-z0-9:-]+/);
   });
