@@ -83,8 +83,15 @@ function storeLater(db: Kysely<Database>, s: { id: number; revision: number }, r
   const write = new Promise<void>((resolve) => setTimeout(resolve, 0))
     .then(() =>
       inTransaction(db, async (trx) => {
-        await trx.deleteFrom('scene_figures').where('scene_id', '=', s.id).execute();
-        await trx.insertInto('scene_figures').values({ scene_id: s.id, revision: s.revision, engine_version: ENGINE_VERSION, computed_at: new Date().toISOString(), ...row }).execute();
+        // Older revisions' rows go; this revision's row is written or replaced, so two instances storing the
+        // same figures at once both succeed (an upsert on the primary key, on SQLite and PostgreSQL alike).
+        await trx.deleteFrom('scene_figures').where('scene_id', '=', s.id).where('revision', '<>', s.revision).execute();
+        const values = { engine_version: ENGINE_VERSION, computed_at: new Date().toISOString(), ...row };
+        await trx
+          .insertInto('scene_figures')
+          .values({ scene_id: s.id, revision: s.revision, ...values })
+          .onConflict((oc) => oc.columns(['scene_id', 'revision']).doUpdateSet(values))
+          .execute();
       }),
     )
     .catch(() => undefined)

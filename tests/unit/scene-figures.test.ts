@@ -64,4 +64,15 @@ describe('the list’s plan figures', () => {
     await list();
     expect((await rowsFor(id)).map((r) => r.revision)).toEqual([2]);
   });
+
+  it('two lists computing the same figures at once (two instances) both answer, and one row is kept', async () => {
+    const op = await demoUser('operator@harrow.example');
+    signInAs(op);
+    const id = (await call({ handler: scenes.POST, method: 'POST', body: { title: 'Figures: two readers at once' } })).json.id as number;
+    // Neither read finds a stored row, so both compute and both store: the second store replaces the first.
+    const [a, b] = await Promise.all([call({ handler: scenes.GET, method: 'GET', query: 'pageSize=100' }), call({ handler: scenes.GET, method: 'GET', query: 'pageSize=100' })]);
+    expect([a.status, b.status]).toEqual([200, 200]);
+    await figureWritesSettled();
+    expect((await rowsFor(id)).map((r) => r.revision)).toEqual([1]);
+  });
 });
