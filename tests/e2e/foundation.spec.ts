@@ -32,11 +32,15 @@ test('Harrow operator: own and approved scenes, New scene button, no Users nav, 
   await expect(whoAmI(page)).toContainText('Operator');
   await expect(whoAmI(page)).toContainText('Harrow Ridge Recovery');
   expect(await navLabels(page)).toEqual(['Scenes', 'Notifications', 'Equipment', 'Rigging', 'Lessons', 'Settings']);
-  const titles = await listedTitles(page);
-  expect(titles).toEqual(expect.arrayContaining([HARROW_SCENES.coil, HARROW_SCENES.reefer]));
-  expect(titles).not.toContain(COBALT_SCENE);
   await expect(page.getByRole('link', { name: '+ New scene' })).toBeVisible();
   await screens(page, 'scenes-operator');
+  // Searched, not read off page 1: other journeys add scenes of this operator that push the seeded ones down.
+  for (const title of [HARROW_SCENES.coil, HARROW_SCENES.reefer]) {
+    await page.goto(`/scenes?q=${encodeURIComponent(title.split(',')[0]!)}`);
+    expect(await listedTitles(page)).toContain(title);
+  }
+  await page.goto(`/scenes?q=${encodeURIComponent('Quarry Road')}`);
+  expect(await listedTitles(page)).not.toContain(COBALT_SCENE);
 
   const res = await page.goto('/admin/users');
   expect(res?.status()).toBe(403);
