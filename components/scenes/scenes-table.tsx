@@ -193,6 +193,8 @@ export function ScenesTable({ canCreate, user, units }: { canCreate: boolean; us
   const table = useReactTable({
     data: data?.items ?? [],
     columns,
+    // Rows keyed by scene, not by position: after an action re-sorts the list, an open row menu stays with its scene.
+    getRowId: (row) => String(row.id),
     getCoreRowModel: getCoreRowModel(),
     manualSorting: true,
     manualPagination: true,

@@ -61,14 +61,19 @@ test('a trainer adds a scene to the training set from the list, and the filter f
   await page.getByLabel(`Actions for ${HARROW_SCENES.reefer}`).click();
   const toggle = page.getByRole('button', { name: /training set/ });
   const wasIn = (await toggle.getAttribute('aria-pressed')) === 'true';
-  await toggle.click();
-  // The filter, narrowed by the title too: other journeys add scenes that could push this one off page 1.
-  await page.goto(`/scenes?training=${wasIn ? '0' : '1'}&q=reefer`);
-  await expect(page.getByRole('table', { name: 'Scenes' }).getByText(HARROW_SCENES.reefer)).toBeVisible();
-  await expect(page.getByLabel('Training set')).toHaveValue(wasIn ? '0' : '1');
-  // Put the training set back as the seed has it: the replay journey builds a lesson from this scene.
   const id = await sceneIdByTitle(page, HARROW_SCENES.reefer);
-  expect((await page.request.put(`/api/scenes/${id}/training`, { data: { inTrainingSet: wasIn } })).status()).toBe(200);
+  try {
+    await toggle.click();
+    // Wait for the change to be saved before leaving the page, or the navigation can cancel it.
+    await expect(toggle).toHaveAttribute('aria-pressed', wasIn ? 'false' : 'true');
+    // The filter, narrowed by the title too: other journeys add scenes that could push this one off page 1.
+    await page.goto(`/scenes?training=${wasIn ? '0' : '1'}&q=reefer`);
+    await expect(page.getByRole('table', { name: 'Scenes' }).getByText(HARROW_SCENES.reefer)).toBeVisible();
+    await expect(page.getByLabel('Training set')).toHaveValue(wasIn ? '0' : '1');
+  } finally {
+    // Put the training set back as the seed has it, pass or fail: the replay and lesson journeys build lessons from this scene.
+    expect((await page.request.put(`/api/scenes/${id}/training`, { data: { inTrainingSet: wasIn } })).status()).toBe(200);
+  }
 });
 
 test('selects show a chevron', async ({ page }) => {
