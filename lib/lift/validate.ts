@@ -27,8 +27,49 @@ export function parseLiftInput(raw: LiftInputIn | LiftInput): LiftInput {
   const field = issue.path.map(String).join('.') || 'input';
   const last = String(issue.path[issue.path.length - 1] ?? '');
   const code = /mass$/i.test(last) ? 'invalid-mass' : 'invalid-input';
-  throw new LiftError(code, `${field}: ${issue.message}`, field);
+  throw new LiftError(code, `${fieldWords(issue.path)}: ${issue.message}`, field);
 }
+
+/** One item of each list in the input, as a person names it. */
+const ITEM: Record<string, string> = {
+  supports: 'support',
+  masses: 'mass',
+  obstacles: 'obstacle',
+  powerLines: 'power line',
+  bodies: 'truck part',
+  polygon: 'outline point',
+  points: 'point',
+  radii: 'radius',
+  boomLengths: 'boom length',
+  rated: 'rating row',
+  snatchBlocks: 'snatch block',
+  hooks: 'hook',
+  slings: 'sling',
+  shackles: 'shackle',
+};
+
+/**
+ * A zod path in words for the message (the machine-readable path stays in `field`):
+ * ['supports', 2, 'cribbingMass'] reads "Support 3 cribbing mass", counted from 1 as people count.
+ */
+export function fieldWords(path: readonly PropertyKey[]): string {
+  const words: string[] = [];
+  for (let i = 0; i < path.length; i++) {
+    const key = path[i];
+    const next = path[i + 1];
+    if (typeof key === 'number') words.push(String(key + 1));
+    else if (typeof next === 'number') {
+      words.push(`${ITEM[String(key)] ?? camelWords(String(key))} ${next + 1}`);
+      i++;
+    } else words.push(camelWords(String(key)));
+  }
+  const text = words.join(' ') || 'input';
+  return text[0]!.toUpperCase() + text.slice(1);
+}
+
+/** Field names that camel-case splitting would garble. */
+const WORD: Record<string, string> = { kV: 'voltage', wll: 'working load limit', cgFraction: 'centre of gravity position', z: 'height' };
+const camelWords = (key: string) => WORD[key] ?? key.replace(/([a-z0-9])([A-Z])/g, '$1 $2').toLowerCase();
 
 /**
  * A parsed input with some of its parts swapped for other parsed values (a search that moves the truck

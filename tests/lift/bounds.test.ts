@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyzeLift, analyzeAtSlew, LiftError, prepareLift, RANGE, type LiftInputIn } from '@/lib/lift';
+import { fieldWords } from '@/lib/lift/validate';
 import { squareOfPads } from './scenarios';
 
 /** Field named by the typed error for an input, or 'none'. */
@@ -43,6 +44,24 @@ describe('bounds on every number of the engine input', () => {
     ['rigging.hooks.0.wll', { ...base, rigging: { hooks: [{ id: 'H1', wll: 2e7 }] } }, 'invalid-input'],
   ])('%s out of range → typed error naming it', (field, input, code) => {
     expect(fieldOf(input)).toBe(`${code} ${field}`);
+  });
+
+  it('the message names the field in words, counted from 1, while `field` keeps the path for machines', () => {
+    const messageOf = (input: unknown) => {
+      try {
+        analyzeLift(input as LiftInputIn);
+        return 'none';
+      } catch (e) {
+        return (e as LiftError).message;
+      }
+    };
+    const crib = messageOf({ ...base, supports: base.supports.map((s, i) => (i === 2 ? { ...s, cribbingArea: 1, cribbingMass: 2e7 } : s)) });
+    expect(crib).toBe(`Support 3 cribbing mass: must be from 0 to ${RANGE.mass} kg`);
+    const corner = messageOf({ ...base, obstacles: [{ id: 'x', polygon: [{ x: 5, y: 0 }, { x: 6e300, y: 0 }, { x: 6, y: 1 }], top: 1 }] });
+    expect(corner).toMatch(/^Obstacle 1 outline point 2 x: must be from /);
+    expect(fieldWords(['powerLines', 0, 'kV'])).toBe('Power line 1 voltage');
+    expect(fieldWords(['boom', 'pivot', 'z'])).toBe('Boom pivot height');
+    expect(fieldWords([])).toBe('Input');
   });
 
   it('a step under 0.01° is refused, naming the step', () => {
