@@ -33,7 +33,8 @@ function extent(spec: DraftSpec) {
     xs.push(leg.mount!.x! + leg.stages!.full! * Math.cos(a) + 0.5, leg.mount!.x! + leg.stages!.full! * Math.cos(a) - 0.5);
     ys.push(leg.mount!.y! + leg.stages!.full! * Math.sin(a) + 0.5, leg.mount!.y! + leg.stages!.full! * Math.sin(a) - 0.5);
   }
-  return { minX: Math.min(...xs) - 0.8, maxX: Math.max(...xs) + 0.8, minY: Math.min(...ys) - 0.6, maxY: Math.max(...ys) + 0.6 };
+  // Bands above and below the plan hold the title, the scale bar and the overall length clear of the pad codes.
+  return { minX: Math.min(...xs) - 0.8, maxX: Math.max(...xs) + 0.8, minY: Math.min(...ys) - 1.4, maxY: Math.max(...ys) + 1.1 };
 }
 
 function ScaleBar({ x, y, units }: { x: number; y: number; units: UnitSystem }) {

@@ -125,6 +125,19 @@ test('an operator reads a profile but cannot edit it', async ({ page }) => {
   await expect(page.getByTestId('drawing-length')).toHaveText('Overall length 40′ 0″');
   // The drawing's pad codes are explained under it.
   await expect(page.getByTestId('drawing-pad-key')).toHaveText('Pads: FL left front · FR right front · RL left rear · RR right rear · FJ front jack');
+  // No two words on the drawing overlap (the scale bar once sat on the right rear pad's code).
+  const overlaps = await page.getByTestId('profile-drawing').evaluate((fig) => {
+    const boxes = [...fig.querySelectorAll('svg text')].map((t) => ({ text: t.textContent ?? '', r: t.getBoundingClientRect() }));
+    const hits: string[] = [];
+    for (let i = 0; i < boxes.length; i++)
+      for (let j = i + 1; j < boxes.length; j++) {
+        const a = boxes[i]!.r, b = boxes[j]!.r;
+        if (a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom) hits.push(`${boxes[i]!.text} / ${boxes[j]!.text}`);
+      }
+    return { count: boxes.length, hits };
+  });
+  expect(overlaps.count).toBeGreaterThan(8);
+  expect(overlaps.hits).toEqual([]);
   await screens(page, 'equipment-profile-operator');
   const id = page.url().match(/equipment\/(\d+)/)![1];
   const current = await (await page.request.get(`/api/equipment/${id}`)).json();
