@@ -21,8 +21,10 @@ interface Props {
   revision: number;
   details: PlanDetails;
   units: UnitSystem;
-  /** False: shown read-only (not the owner, or not an operator). */
+  /** False: shown read-only (not the owner, or not an operator, or the plan is frozen). */
   canEdit: boolean;
+  /** Why the form is read-only, when it is for another reason than ownership (a submitted or approved plan). */
+  readOnlyNote?: string;
 }
 
 type Outcome = { kind: 'saved'; revision: number } | { kind: 'conflict'; current: number | null } | { kind: 'error'; message: string } | null;
@@ -53,7 +55,7 @@ const Section = ({ title, children }: { title: string; children: React.ReactNode
 );
 
 /** The plan details form: react-hook-form over the same zod schema the route parses with. Saving makes a new revision. */
-export function PlanDetailsForm({ sceneId, revision, details, units, canEdit }: Props) {
+export function PlanDetailsForm({ sceneId, revision, details, units, canEdit, readOnlyNote }: Props) {
   const router = useRouter();
   const [base, setBase] = useState(revision);
   const [outcome, setOutcome] = useState<Outcome>(null);
@@ -202,7 +204,7 @@ export function PlanDetailsForm({ sceneId, revision, details, units, canEdit }: 
           <p className="text-caption text-ink-muted">Saving makes a new revision of the scene; this page loaded revision {base}.</p>
         </div>
       ) : (
-        <p className="text-body text-ink-muted">Only the scene’s owner can change its plan details.</p>
+        <p className="text-body text-ink-muted">{readOnlyNote ?? 'Only the scene’s owner can change its plan details.'}</p>
       )}
     </form>
   );

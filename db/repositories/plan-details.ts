@@ -1,6 +1,6 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema';
-import type { CurrentUser } from '@/lib/domain';
+import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { emptyPlanDetails, planDetailsSchema, type PlanDetails } from '@/lib/plan-details/schema';
 import { updateScene, type UpdateOutcome } from './scenes';
 import { inTransaction } from '../transaction';
@@ -43,12 +43,13 @@ export async function revisionExists(db: Db, sceneId: number, revision: number):
 /**
  * Saves plan details as a new revision of the scene (the document is carried over unchanged), so a
  * revision's PDF always shows the details that were current when it was saved. Stale base revision → 'stale'.
+ * `status`: the scene's new status, when the save changes it (a returned plan goes back to draft).
  */
-export async function savePlanDetails(db: Db, user: CurrentUser, sceneId: number, baseRevision: number, details: PlanDetails): Promise<UpdateOutcome> {
+export async function savePlanDetails(db: Db, user: CurrentUser, sceneId: number, baseRevision: number, details: PlanDetails, status?: SceneStatus): Promise<UpdateOutcome> {
   return inTransaction(db, async (trx) => {
     // The job's location is also the scene's searchable location (the list's full-text search covers it).
     const location = details.job.location.trim() || undefined;
-    const outcome = await updateScene(trx, user, sceneId, { revision: baseRevision, ...(location !== undefined && { location: location.slice(0, 200) }) });
+    const outcome = await updateScene(trx, user, sceneId, { revision: baseRevision, ...(location !== undefined && { location: location.slice(0, 200) }), ...(status !== undefined && { status }) });
     if (outcome.kind !== 'ok') return outcome;
     await trx
       .insertInto('scene_plan_details')

@@ -76,4 +76,36 @@ describe('plan details route', () => {
     expect((await call({ handler: GET, method: 'GET', id: coil })).status).toBe(200);
     expect((await call({ handler: PUT, method: 'PUT', id: coil, body: { revision: 1, details: emptyPlanDetails() } })).status).toBe(403);
   });
+
+  it('refuses to save the details of a submitted or approved plan (409, nothing written); a returned plan goes back to draft', async () => {
+    const db = getDb();
+    const sceneOf = async (title: string) => db.selectFrom('scenes').select(['id', 'revision', 'status']).where('title', '=', title).executeTakeFirstOrThrow();
+    const revisionsOf = async (id: number) => Number((await db.selectFrom('scene_revisions').select((eb) => eb.fn.countAll<number>().as('n')).where('scene_id', '=', id).executeTakeFirstOrThrow()).n);
+
+    signInAs(await demoUser('operator@harrow.example'));
+    const approved = await sceneOf('Overturned reefer trailer, Mill Creek on-ramp');
+    expect(approved.status).toBe('approved');
+    const before = await revisionsOf(approved.id);
+    const refused = await call({ handler: PUT, method: 'PUT', id: String(approved.id), body: { revision: approved.revision, details: emptyPlanDetails() } });
+    expect(refused.status).toBe(409);
+    expect(refused.json.issues?.[0].path).toBe('status');
+    expect(String(refused.json.error)).toContain('Start a new revision');
+    expect(await sceneOf('Overturned reefer trailer, Mill Creek on-ramp')).toEqual(approved);
+    expect(await revisionsOf(approved.id)).toBe(before);
+
+    signInAs(await demoUser('operator2@harrow.example'));
+    const submitted = await sceneOf('Pipe bundle onto the low-loader, Station Road yard');
+    expect(submitted.status).toBe('submitted');
+    const frozen = await call({ handler: PUT, method: 'PUT', id: String(submitted.id), body: { revision: submitted.revision, details: emptyPlanDetails() } });
+    expect(frozen.status).toBe(409);
+    expect(String(frozen.json.error)).toContain('Withdraw it');
+    expect((await sceneOf('Pipe bundle onto the low-loader, Station Road yard')).revision).toBe(submitted.revision);
+
+    const returned = await sceneOf('Tipped grain trailer, Kestrel Lane');
+    expect(returned.status).toBe('returned');
+    const saved = await call({ handler: PUT, method: 'PUT', id: String(returned.id), body: { revision: returned.revision, details: emptyPlanDetails() } });
+    expect(saved.status).toBe(200);
+    expect(saved.json.revision).toBe(returned.revision + 1);
+    expect(await sceneOf('Tipped grain trailer, Kestrel Lane')).toEqual({ ...returned, revision: returned.revision + 1, status: 'draft' });
+  });
 });

@@ -6,6 +6,8 @@ import { getScene } from '@/db/repositories/scenes';
 import { planDetailsAt } from '@/db/repositories/plan-details';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { idParams } from '@/lib/api/route';
+import { mayEditScene } from '@/lib/auth/permissions';
+import { transition } from '@/lib/review/lifecycle';
 import { PageHeader } from '@/components/ui/page-header';
 import { Card, CardBody } from '@/components/ui/card';
 import { PlanDetailsForm } from '@/components/scenes/plan-details-form';
@@ -25,7 +27,10 @@ export default async function PlanDetailsPage({ params }: Props) {
   const scene = await getScene(db, user, parsed.data.id);
   if (!scene) notFound();
   const stored = await planDetailsAt(db, scene.id, scene.revision);
-  const canEdit = user.role === 'operator' && scene.ownerId === user.id;
+  // The owner edits the details while the plan is editable; a submitted, approved or archived plan is frozen.
+  const frozen = mayEditScene(user, scene) ? transition(scene.status, 'edit') : null;
+  const canEdit = frozen?.ok === true;
+  const readOnlyNote = frozen && !frozen.ok ? frozen.message : undefined;
   return (
     <>
       <p className="mb-3 flex flex-wrap gap-x-6">
@@ -43,7 +48,7 @@ export default async function PlanDetailsPage({ params }: Props) {
             The job, the people, communication, site control, weather, hazards and the pre-lift checklist: everything the lift plan document carries that the sketch does not.
             {stored.savedAt ? ` Last saved with revision ${stored.savedAt} by ${stored.savedBy}.` : ' Not filled in yet.'}
           </p>
-          <PlanDetailsForm sceneId={scene.id} revision={scene.revision} details={stored.details} units={user.units} canEdit={canEdit} />
+          <PlanDetailsForm sceneId={scene.id} revision={scene.revision} details={stored.details} units={user.units} canEdit={canEdit} readOnlyNote={readOnlyNote} />
         </CardBody>
       </Card>
     </>

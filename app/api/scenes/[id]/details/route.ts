@@ -7,6 +7,7 @@ import { HttpError, staleRevisionBody } from '@/lib/api/errors';
 import { planRevisionQuery, savePlanDetailsSchema } from '@/lib/validations/plan';
 import { planRevision } from '../plan-revision';
 import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
+import { isEditable, transition } from '@/lib/review/lifecycle';
 
 export const runtime = 'nodejs';
 
@@ -18,13 +19,19 @@ export const GET = route({ params: idParams, query: planRevisionQuery }, async (
   return { id: scene.id, revision, savedAt: stored.savedAt, savedBy: stored.savedBy, details: stored.details };
 });
 
-/** Saves the details as a new revision of the scene (the sketch is carried over unchanged). */
+/** Saves the details as a new revision of the scene (the sketch is carried over unchanged); a frozen plan is 409. */
 export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body: savePlanDetailsSchema }, async ({ user, params, body }) => {
   const outcome = await inTransaction(getDb(), async (trx) => {
     const scene = await getScene(trx, user, params.id);
     if (!scene) throw new HttpError(404, 'Scene not found');
     if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit its plan details');
-    return savePlanDetails(trx, user, params.id, body.revision, body.details);
+    // A new revision of the details is an edit of the plan: a submitted, approved or archived plan is frozen
+    // (as for PUT /api/scenes/{id}), and saving a returned plan's details takes it back to draft.
+    if (!isEditable(scene.status)) {
+      const t = transition(scene.status, 'edit');
+      throw new HttpError(409, t.ok ? 'This plan cannot be edited now' : t.message, [{ path: 'status', message: `The plan is ${scene.status}` }]);
+    }
+    return savePlanDetails(trx, user, params.id, body.revision, body.details, scene.status === 'returned' ? 'draft' : undefined);
   });
   if (outcome.kind === 'missing') throw new HttpError(404, 'Scene not found');
   if (outcome.kind === 'stale') {
