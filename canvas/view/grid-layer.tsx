@@ -1,4 +1,5 @@
 'use client';
+import { memo } from 'react';
 import { Layer, Shape } from 'react-konva';
 import type { Camera } from '../store/types';
 import { PAL } from './palette';
@@ -12,8 +13,11 @@ export function visibleGridStep(grid: number, units: UnitSystem, pxPerM: number)
   return ladder.find((s) => s >= grid && s * pxPerM >= 10) ?? ladder[ladder.length - 1];
 }
 
-/** The plan grid, drawn in one canvas pass (cheaper than a node per line at any zoom). */
-export function GridLayer({ camera, viewport, grid, units }: { camera: Camera; viewport: { width: number; height: number }; grid: number; units: UnitSystem }) {
+/**
+ * The plan grid, drawn in one canvas pass (cheaper than a node per line at any zoom). Memoised: a parent that
+ * re-renders every frame (the replay) would otherwise hand Konva a new draw function and repaint the grid.
+ */
+export const GridLayer = memo(function GridLayer({ camera, viewport, grid, units }: { camera: Camera; viewport: { width: number; height: number }; grid: number; units: UnitSystem }) {
   const step = visibleGridStep(grid, units, camera.pxPerM);
   return (
     <Layer listening={false}>
@@ -48,4 +52,4 @@ export function GridLayer({ camera, viewport, grid, units }: { camera: Camera; v
       />
     </Layer>
   );
-}
+});

@@ -9,6 +9,9 @@ import { obstacleFootprints, wireEnds } from '@/lib/scene/geometry/obstacle';
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 
 /** Obstacles by kind; a power line is a wire (its approach zone is an overlay). */
+const RING_DASH = [3, 2];
+const LANE_DASH = [12, 8];
+
 export const ObstacleShape = memo(function ObstacleShape({ obstacle, pxPerM }: { obstacle: ObstacleObject; pxPerM?: number }) {
   const colour = PAL.obstacle[obstacle.obstacleKind] ?? PAL.muted;
   const ends = wireEnds(obstacle);
@@ -24,7 +27,7 @@ export const ObstacleShape = memo(function ObstacleShape({ obstacle, pxPerM }: {
     <Group listening={false}>
       {/* Too small to see at this zoom: a ring at the minimum size marks where it stands (the outline inside stays true to size). */}
       {sizePx < MIN_DRAWN_PX && pxPerM && (
-        <Circle x={obstacle.x} y={obstacle.y} radius={MIN_DRAWN_PX / 2 / pxPerM} fill={colour} opacity={0.35} stroke={PAL.ink} strokeWidth={1.5} dash={[3, 2]} strokeScaleEnabled={false} perfectDrawEnabled={false} />
+        <Circle x={obstacle.x} y={obstacle.y} radius={MIN_DRAWN_PX / 2 / pxPerM} fill={colour} opacity={0.35} stroke={PAL.ink} strokeWidth={1.5} dash={RING_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} />
       )}
       <Line
         points={flat(poly)}
@@ -33,7 +36,7 @@ export const ObstacleShape = memo(function ObstacleShape({ obstacle, pxPerM }: {
         perfectDrawEnabled={false} opacity={lane ? 0.45 : obstacle.obstacleKind === 'tree' ? 0.55 : 0.75}
         stroke={PAL.ink}
         strokeWidth={1}
-        dash={lane ? [12, 8] : undefined}
+        dash={lane ? LANE_DASH : undefined}
         strokeScaleEnabled={false}
       />
     </Group>

@@ -1,0 +1,67 @@
+import { expect, test, type Page } from '@playwright/test';
+import { HARROW_SCENES, sceneIdByTitle, signIn } from './helpers';
+
+/**
+ * What moves with the slew is drawn on its own canvas: scrubbing the slew redraws only the top (live) layer,
+ * never the scene's obstacles, trailer, truck body, tape or grid. Counted, not timed: each Konva layer's
+ * drawScene is wrapped in the page and its calls are counted while the slew changes.
+ */
+async function countLayerDraws(page: Page) {
+  await page.evaluate(() => {
+    const K = (window as unknown as { Konva: { stages: { getLayers(): unknown[] }[]; Layer: { prototype: { drawScene: (...a: unknown[]) => unknown } } } }).Konva;
+    const layers = K.stages[0]!.getLayers();
+    const counts = layers.map(() => 0);
+    const original = K.Layer.prototype.drawScene;
+    K.Layer.prototype.drawScene = function (this: unknown, ...a: unknown[]) {
+      const i = layers.indexOf(this);
+      if (i >= 0) counts[i]! += 1;
+      return original.apply(this, a);
+    };
+    (window as unknown as { __layerDraws: number[] }).__layerDraws = counts;
+  });
+  return async () => {
+    // Two frames' grace, so a draw requested by the last change has happened.
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+    return page.evaluate(() => [...(window as unknown as { __layerDraws: number[] }).__layerDraws]);
+  };
+}
+
+test('scrubbing the slew in the editor redraws only the live layer', async ({ page }) => {
+  await signIn(page, 'operator@harrow.example');
+  // A copy of the coil transfer (it has a tape, obstacles, a trailer): scrubbing an editable scene saves the slew.
+  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
+  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Redraw check (coil copy)' } });
+  expect(copy.status()).toBe(201);
+  const id = (await copy.json()).id as number;
+  try {
+    await page.goto(`/scenes/${id}`);
+    await expect(page.getByTestId('live-readout')).toBeVisible({ timeout: 30_000 });
+    const slider = page.getByTestId('slew-slider');
+    await slider.fill('10');
+    const read = await countLayerDraws(page);
+    for (let v = 11; v <= 40; v++) await slider.fill(String(v));
+    const draws = await read();
+    const live = draws[draws.length - 1]!;
+    expect(live).toBeGreaterThanOrEqual(10);
+    // Every layer under the live one (grid, scene) stays as it was drawn before the scrub.
+    expect(draws.slice(0, -1)).toEqual(draws.slice(0, -1).map(() => 0));
+  } finally {
+    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
+  }
+});
+
+test('playing the replay redraws only the live layer', async ({ page }) => {
+  await signIn(page, 'trainer@harrow.example');
+  const id = await sceneIdByTitle(page, HARROW_SCENES.reefer);
+  await page.goto(`/scenes/${id}/replay`);
+  await expect(page.getByTestId('replay-percent')).toBeVisible({ timeout: 30_000 });
+  const read = await countLayerDraws(page);
+  const slew = async () => (await page.getByTestId('replay-slew').textContent()) ?? '';
+  const before = await slew();
+  const forward = page.getByRole('button', { name: 'One degree forward' });
+  for (let i = 0; i < 20; i++) await forward.click();
+  await expect.poll(slew).not.toBe(before);
+  const draws = await read();
+  expect(draws[draws.length - 1]!).toBeGreaterThanOrEqual(5);
+  expect(draws.slice(0, -1)).toEqual(draws.slice(0, -1).map(() => 0));
+});
