@@ -95,6 +95,7 @@ const UNPACED = ['--disable-gpu-vsync', '--disable-frame-rate-limit'];
 interface Pass {
   frames: number[];
   work: number[];
+  cost: number[];
   idle: number[];
   jsBytes: number;
 }
@@ -157,20 +158,26 @@ async function pass(extraArgs: string[], sceneId: number | null): Promise<Pass &
       const start = truck.boom.slew;
       const times = [];
       const work = [];
+      const cost = [];
       let i = 0;
       let last = performance.now();
       const frame = (now) => {
         times.push(now - last);
         last = now;
-        if (i++ >= 360) return resolve({ frames: times.slice(1), work });
+        if (i++ >= 360) return resolve({ frames: times.slice(1), work, cost: cost.slice(1) });
         const slew = (start + i) % 360;
         const t0 = performance.now();
+        // A message posted now runs once this frame's rendering (every rAF callback, Konva's draw among
+        // them, then style, layout and paint) has finished on the main thread: its delay is the frame's cost.
+        const ch = new MessageChannel();
+        ch.port1.onmessage = () => cost.push(performance.now() - t0);
+        ch.port2.postMessage(0);
         store.getState().run((doc) => ({ document: { ...doc, objects: doc.objects.map((o) => (o.kind === 'truck' ? { ...o, boom: { ...o.boom, slew } } : o)) }, capture: 'gesture' }));
         work.push(performance.now() - t0);
         requestAnimationFrame(frame);
       };
       requestAnimationFrame(frame);
-    })`)) as { frames: number[]; work: number[] };
+    })`)) as { frames: number[]; work: number[]; cost: number[] };
     return { ...run, idle, jsBytes, sceneId: id };
   } finally {
     await browser.close();
@@ -181,7 +188,7 @@ async function pass(extraArgs: string[], sceneId: number | null): Promise<Pass &
  * The replay room on the same scene: the playback clock moved one degree per frame along the planned arc
  * and back (360 frames), as playing at speed does, measured like the editor's scrub.
  */
-async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frames: number[]; work: number[] }> {
+async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frames: number[]; work: number[]; cost: number[] }> {
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...ARGS, ...extraArgs] });
   try {
     const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
@@ -191,13 +198,16 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
     const script = (frames: number) => `new Promise((resolve) => {
       const r = window.__arclineReplay;
       const span = r.playback.clock.arc.span;
-      const times = []; const work = [];
+      const times = []; const work = []; const cost = [];
       let i = 0; let last = performance.now();
       const frame = (now) => {
         times.push(now - last); last = now;
-        if (i++ >= ${frames}) return resolve({ frames: times.slice(1), work });
+        if (i++ >= ${frames}) return resolve({ frames: times.slice(1), work, cost: cost.slice(1) });
         const k = i % (2 * Math.floor(span));
         const t0 = performance.now();
+        const ch = new MessageChannel();
+        ch.port1.onmessage = () => cost.push(performance.now() - t0);
+        ch.port2.postMessage(0);
         window.__arclineReplay.playback.seek(k <= span ? k : 2 * Math.floor(span) - k);
         work.push(performance.now() - t0);
         requestAnimationFrame(frame);
@@ -205,7 +215,7 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
       requestAnimationFrame(frame);
     })`;
     await page.evaluate(script(180)); // untimed warm-up
-    return (await page.evaluate(script(360))) as { frames: number[]; work: number[] };
+    return (await page.evaluate(script(360))) as { frames: number[]; work: number[]; cost: number[] };
   } finally {
     await browser.close();
   }
@@ -215,7 +225,7 @@ async function replayPass(extraArgs: string[], sceneId: number): Promise<{ frame
  * The reach envelope shown while the truck is dragged (unpaced): the grid is worked out in a Web Worker,
  * so the frames measure what the main thread still does (store, analysis, drawing the last envelope).
  */
-async function envelopePass(extraArgs: string[], sceneId: number): Promise<{ frames: number[]; workerMs: string }> {
+async function envelopePass(extraArgs: string[], sceneId: number): Promise<{ frames: number[]; cost: number[]; workerMs: string }> {
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: [...ARGS, ...extraArgs] });
   try {
     const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
@@ -227,10 +237,14 @@ async function envelopePass(extraArgs: string[], sceneId: number): Promise<{ fra
     const drag = (frames: number) => `new Promise((resolve) => {
       const store = window.__arclineEditor.store;
       const x0 = store.getState().document.objects.find((o) => o.kind === 'truck').x;
-      const times = []; let i = 0; let last = performance.now();
+      const times = []; const cost = []; let i = 0; let last = performance.now();
       const frame = (now) => {
         times.push(now - last); last = now;
-        if (i++ >= ${frames}) return resolve(times.slice(1));
+        if (i++ >= ${frames}) return resolve({ frames: times.slice(1), cost: cost.slice(1) });
+        const t0 = performance.now();
+        const ch = new MessageChannel();
+        ch.port1.onmessage = () => cost.push(performance.now() - t0);
+        ch.port2.postMessage(0);
         const x = x0 + 0.05 * (i < ${frames / 2} ? i : ${frames} - i);
         store.getState().run((doc) => ({ document: { ...doc, objects: doc.objects.map((o) => (o.kind === 'truck' ? { ...o, x } : o)) }, capture: 'gesture' }));
         requestAnimationFrame(frame);
@@ -238,9 +252,9 @@ async function envelopePass(extraArgs: string[], sceneId: number): Promise<{ fra
       requestAnimationFrame(frame);
     })`;
     await page.evaluate(drag(60)); // untimed warm-up
-    const frames = (await page.evaluate(drag(240))) as number[];
+    const { frames, cost } = (await page.evaluate(drag(240))) as { frames: number[]; cost: number[] };
     await page.waitForTimeout(1500);
-    return { frames, workerMs: (await page.getByTestId('reach-envelope-ms').textContent()) ?? '' };
+    return { frames, cost, workerMs: (await page.getByTestId('reach-envelope-ms').textContent()) ?? '' };
   } finally {
     await browser.close();
   }
@@ -253,26 +267,29 @@ try {
   console.log(`Editor drag, 300 obstacles, one obstacle dragged over ${drag.frames} frames, validating the engine input (Node):`);
   console.log(`  full zod parse per frame: median ${ms(drag.fullMedian)}; incremental parse (what the editor runs): median ${ms(drag.incrementalMedian)} (${(drag.fullMedian / drag.incrementalMedian).toFixed(1)}× less); full parses during the drag: ${drag.fullParses - 1} after the first frame`);
   await waitForServer();
+  const verdict = (p95: number) => `target p95 < 16.7 ms: ${p95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / p95).toFixed(1)}× headroom`;
   const paced = await pass([], null);
   const unpaced = await pass(UNPACED, paced.sceneId);
   const dropped = paced.frames.filter((f) => f > 1.5 * pct(paced.idle, 50)).length;
-  const p95 = pct(unpaced.frames, 95);
+  const p95 = pct(unpaced.cost, 95);
   console.log(`Editor slew scrub, 300 obstacles, ${paced.frames.length} frames (1° per frame through 360°), Chromium 1366×900:`);
   console.log(`  paced (60 Hz display): frame interval median ${ms(pct(paced.frames, 50))}, p95 ${ms(pct(paced.frames, 95))}; idle page median ${ms(pct(paced.idle, 50))}, p95 ${ms(pct(paced.idle, 95))}; frames over 1.5× the idle interval: ${dropped} of ${paced.frames.length}`);
-  console.log(`  unpaced (frame-rate limit off): frame time median ${ms(pct(unpaced.frames, 50))}, p95 ${ms(p95)}; idle page median ${ms(pct(unpaced.idle, 50))} (target p95 < 16.7 ms: ${p95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / p95).toFixed(1)}× headroom)`);
+  console.log(`  with the frame-rate limit flags: interval median ${ms(pct(unpaced.frames, 50))}, p95 ${ms(pct(unpaced.frames, 95))}; idle page median ${ms(pct(unpaced.idle, 50))}${pct(unpaced.idle, 50) > 12 ? ' (this headless Chromium keeps requestAnimationFrame at 60 Hz whatever the flags, so intervals cannot show a frame\'s cost)' : ''}`);
+  console.log(`  frame cost (main thread, from the frame's first callback to the end of its rendering: store, React, Konva drawing, style, layout, paint): median ${ms(pct(unpaced.cost, 50))}, p95 ${ms(p95)} (${verdict(p95)})`);
   console.log(`  script work per frame (store update + analysis snapshot + React render, synchronous): median ${ms(pct(paced.work, 50))}, p95 ${ms(pct(paced.work, 95))}`);
   console.log(`  JS loaded by the editor page, compressed on the wire: ${(paced.jsBytes / 1024).toFixed(1)} KiB (${paced.jsBytes} bytes)`);
   const replay = await replayPass(UNPACED, paced.sceneId);
-  const rp95 = pct(replay.frames, 95);
+  const rp95 = pct(replay.cost, 95);
   console.log(`Replay room, same scene, playback clock 1° per frame along the planned arc and back (${replay.frames.length} frames):`);
-  console.log(`  unpaced (frame-rate limit off): frame time median ${ms(pct(replay.frames, 50))}, p95 ${ms(rp95)} (target p95 < 16.7 ms: ${rp95 < 16.7 ? 'within target' : 'OVER target'}, ${(16.7 / rp95).toFixed(1)}× headroom)`);
+  console.log(`  frame interval median ${ms(pct(replay.frames, 50))}, p95 ${ms(pct(replay.frames, 95))}`);
+  console.log(`  frame cost (main thread, measured as for the editor): median ${ms(pct(replay.cost, 50))}, p95 ${ms(rp95)} (${verdict(rp95)})`);
   console.log(`  script work per frame (clock + store + analysis snapshot + React render): median ${ms(pct(replay.work, 50))}, p95 ${ms(pct(replay.work, 95))}`);
   const grid = envelopeNodeTimes();
   console.log(`Reach envelope grid (36 radii × 240 slews, lib/envelope), engine bench scene with 50 obstacles (Node): median ${ms(pct(grid, 50))}, p95 ${ms(pct(grid, 95))} (a 60 fps frame is 16.7 ms: ${pct(grid, 50) > 16.7 ? 'too long for the main thread, so the editor runs it in a Web Worker' : 'fits a frame'})`);
   const env = await envelopePass(UNPACED, paced.sceneId);
-  const ep95 = pct(env.frames, 95);
-  console.log(`Editor truck drag with the reach envelope shown, 300 obstacles (${env.frames.length} frames, unpaced): frame time median ${ms(pct(env.frames, 50))}, p95 ${ms(ep95)} (target p95 < 16.7 ms: ${ep95 < 16.7 ? 'within target' : 'OVER target'}); last worker answer: "${env.workerMs}"`);
-  console.log(`Summary, unpaced p95 with 300 obstacles: editor scrub ${ms(p95)}, replay ${ms(rp95)}, truck drag with the envelope ${ms(ep95)} (target 16.7 ms)`);
+  const ep95 = pct(env.cost, 95);
+  console.log(`Editor truck drag with the reach envelope shown, 300 obstacles (${env.frames.length} frames): interval median ${ms(pct(env.frames, 50))}, p95 ${ms(pct(env.frames, 95))}; frame cost median ${ms(pct(env.cost, 50))}, p95 ${ms(ep95)} (${verdict(ep95)}); last worker answer: "${env.workerMs}"`);
+  console.log(`Summary, frame cost p95 with 300 obstacles: editor scrub ${ms(p95)}, replay ${ms(rp95)}, truck drag with the envelope ${ms(ep95)} (target 16.7 ms)`);
 } finally {
   if (server.pid) process.kill(-server.pid, 'SIGTERM');
 }
