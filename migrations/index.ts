@@ -10,6 +10,7 @@ import * as sceneList from './2026-12-02T14-00_scene-list';
 import * as revisionStorage from './2026-12-02T14-30_revision-storage';
 import * as sceneActions from './2026-12-02T16-00_scene-actions';
 import * as passwordResets from './2026-12-03T08-00_password-resets';
+import * as sceneCountIndex from './2026-12-03T11-30_scene-count-index';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -27,4 +28,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02T14-30_revision-storage': revisionStorage,
   '2026-12-02T16-00_scene-actions': sceneActions,
   '2026-12-03T08-00_password-resets': passwordResets,
+  '2026-12-03T11-30_scene-count-index': sceneCountIndex,
 };

@@ -135,6 +135,14 @@ function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions) {
 }
 
 /**
+ * The matching scenes counted up to COUNT_CAP + 1. Every column its filters read is in `scenes_count_idx`,
+ * so the count reads that index alone, never the scenes' rows (search adds the FTS look-up).
+ */
+export function countQuery(db: Db, user: CurrentUser, opts: Pick<ListScenesOptions, 'status' | 'inTrainingSet' | 'q'>) {
+  return db.selectFrom(filtered(db, user, opts as ListScenesOptions).select('scenes.id').limit(COUNT_CAP + 1).as('matching')).select((eb) => eb.fn.countAll<number>().as('n'));
+}
+
+/**
  * One page of the scenes a user may read, by keyset: the page after (or before) a cursor, never OFFSET,
  * so a deep page costs what page 1 costs and rows saved between pages are neither repeated nor skipped.
  */
@@ -183,14 +191,7 @@ export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOpti
   const hasNext = backward ? cursor !== null : more;
   const hasPrev = backward ? more : cursor !== null;
 
-  const counted = Number(
-    (
-      await db
-        .selectFrom(filtered(db, user, opts).select('scenes.id').limit(COUNT_CAP + 1).as('matching'))
-        .select((eb) => eb.fn.countAll<number>().as('n'))
-        .executeTakeFirstOrThrow()
-    ).n,
-  );
+  const counted = Number((await countQuery(db, user, opts).executeTakeFirstOrThrow()).n);
   return {
     items,
     total: Math.min(counted, COUNT_CAP),
