@@ -158,12 +158,10 @@ export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOpti
 
   let q = filtered(db, user, opts);
   if (cursor) {
-    q = q.where((eb) =>
-      eb.or([
-        eb(col, cmp, cursor.v as never),
-        eb.and([eb(col, '=', cursor.v as never), eb('scenes.id', cmp, cursor.id)]),
-      ]) as Expression<SqlBool>,
-    );
+    // A row-value comparison, (col, id) < (v, id): both databases read it as one range of the list index. The
+    // equivalent `col < v or (col = v and id < id)` made SQLite walk the index from the top when the values
+    // are bound parameters (13 ms for a page at 90 % of 100,000 scenes, against 2 ms for page 1).
+    q = q.where((eb) => eb(eb.refTuple(col, 'scenes.id'), cmp, eb.tuple(cursor.v as never, cursor.id as never)) as Expression<SqlBool>);
   }
   const rows = await q
     .select(['scenes.id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.updated_at', 'scenes.in_training_set', 'scenes.location', 'users.name as owner_name'])
