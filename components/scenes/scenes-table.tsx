@@ -88,7 +88,8 @@ const columnsFor = (user: Who, units: UnitSystem) => [
     id: 'details',
     header: () => <span className="sr-only">Details and actions</span>,
     cell: (c) => (
-      <div className="flex items-center justify-end gap-1">
+      // Stacked below laptop width, so the actions menu is not cut off at the table's edge on a portrait tablet.
+      <div className="flex flex-col items-end gap-1 xl:flex-row xl:items-center xl:justify-end">
         <Link
           href={`/scenes/${c.row.original.id}/details`}
           aria-label={`Details of ${c.row.original.title}`}

@@ -13,13 +13,16 @@ export interface NavItem {
   count?: { value: number; label: string };
 }
 
-/** Main navigation. Vertical in the laptop / landscape sidebar, a scrolling row of tabs on a portrait tablet. */
+/**
+ * Main navigation. Vertical in the laptop / landscape sidebar; a row of tabs on a portrait tablet that wraps
+ * rather than hiding tabs off the edge; a row that scrolls sideways on a phone.
+ */
 export function AppNav({ items, orientation }: { items: NavItem[]; orientation: 'vertical' | 'horizontal' }) {
   const path = usePathname();
   const vertical = orientation === 'vertical';
   return (
     <nav aria-label="Main">
-      <ul className={cx(vertical ? 'flex flex-col gap-1' : 'flex gap-1 overflow-x-auto')}>
+      <ul className={cx(vertical ? 'flex flex-col gap-1' : 'flex gap-1 overflow-x-auto md:flex-wrap md:overflow-visible')}>
         {items.map((item) => {
           const active = path === item.href || path.startsWith(item.href + '/');
           return (
@@ -28,8 +31,8 @@ export function AppNav({ items, orientation }: { items: NavItem[]; orientation: 
                 href={item.href}
                 aria-current={active ? 'page' : undefined}
                 className={cx(
-                  'flex min-h-touch items-center gap-3 rounded-plate px-3 text-body font-semibold whitespace-nowrap',
-                  vertical ? 'border-l-4' : 'border-b-4 rounded-b-none',
+                  'flex min-h-touch items-center rounded-plate text-body font-semibold whitespace-nowrap',
+                  vertical ? 'gap-3 border-l-4 px-3' : 'gap-2 border-b-4 rounded-b-none px-2.5',
                   active ? 'border-signal bg-paper-raised/10 text-paper-raised' : 'border-transparent text-paper-raised/80 hover:bg-paper-raised/10 hover:text-paper-raised',
                 )}
               >

@@ -82,3 +82,30 @@ test('operator, supervisor and trainer pages fit 1366, 820 and 390 px', async ({
     await page.context().close();
   }
 });
+
+test('on a portrait tablet every navigation tab is in view, none hidden off the edge', async ({ page }) => {
+  // The admin has the most tabs (Scenes, Review, Notifications, Equipment, Rigging, Lessons, Users, Settings).
+  await signIn(page, 'admin@harrow.example');
+  await page.setViewportSize(VIEWPORTS['tablet-portrait']);
+  await page.goto('/scenes');
+  const nav = page.getByRole('navigation', { name: 'Main' }).filter({ visible: true });
+  const links = nav.getByRole('link');
+  expect(await links.count()).toBeGreaterThanOrEqual(7);
+  const width = VIEWPORTS['tablet-portrait'].width;
+  for (const link of await links.all()) {
+    const box = (await link.boundingBox())!;
+    expect(box.x, `${await link.textContent()} starts on screen`).toBeGreaterThanOrEqual(0);
+    expect(box.x + box.width, `${await link.textContent()} ends on screen`).toBeLessThanOrEqual(width);
+  }
+  // The list's rows keep their actions menu inside the table's card, not cut off at its edge.
+  const table = page.getByRole('table', { name: 'Scenes' });
+  await expect(table).toBeVisible();
+  const card = (await table.evaluate((t) => {
+    const r = (t.parentElement as HTMLElement).getBoundingClientRect();
+    return { right: r.right };
+  }))!;
+  const menus = page.getByTestId('scene-row-actions').locator('summary');
+  expect(await menus.count()).toBeGreaterThan(0);
+  for (const m of (await menus.all()).slice(0, 3)) expect((await m.boundingBox())!.x + (await m.boundingBox())!.width).toBeLessThanOrEqual(card.right);
+  await page.screenshot({ path: 'test-results/screens/nav-admin-tablet-portrait.png' });
+});
