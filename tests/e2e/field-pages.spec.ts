@@ -64,8 +64,9 @@ test('a trainer adds a scene to the training set from the list, and the filter f
   const id = await sceneIdByTitle(page, HARROW_SCENES.reefer);
   try {
     await toggle.click();
-    // Wait for the change to be saved before leaving the page, or the navigation can cancel it.
-    await expect(toggle).toHaveAttribute('aria-pressed', wasIn ? 'false' : 'true');
+    // Wait for the change to be saved before leaving the page, or the navigation can cancel it. (The list
+    // refreshes after the change and its row menu may close, so the saved scene is read, not the button.)
+    await expect.poll(async () => ((await (await page.request.get(`/api/scenes/${id}`)).json()) as { inTrainingSet: boolean }).inTrainingSet).toBe(!wasIn);
     // The filter, narrowed by the title too: other journeys add scenes that could push this one off page 1.
     await page.goto(`/scenes?training=${wasIn ? '0' : '1'}&q=reefer`);
     await expect(page.getByRole('table', { name: 'Scenes' }).getByText(HARROW_SCENES.reefer)).toBeVisible();

@@ -114,8 +114,9 @@ test('an unsaved edit survives a reload: the draft is restored and sent', async 
   await signIn(page, OPERATOR);
   const id = await newScene(page.request, 'Draft check, Mill Creek');
   await openEditor(page, id);
-  // The connection drops for saves only: the PUT never reaches the server.
-  await page.route(`**/api/scenes/${id}`, (route) => (route.request().method() === 'PUT' ? route.abort('internetdisconnected') : route.continue()));
+  // The connection drops for saves only: the PUT never reaches the server. Routed on the context, so the
+  // block holds through reloads (a page's own route can miss a request sent while its document is replaced).
+  await page.context().route(`**/api/scenes/${id}`, (route) => (route.request().method() === 'PUT' ? route.abort('internetdisconnected') : route.continue()));
   await setGrid(page, 4.2);
   await expect(status(page)).toHaveAttribute('data-save-status', 'offline');
   expect((await sceneFromApi(page.request, id)).document.grid).not.toBe(4.2);
@@ -126,7 +127,7 @@ test('an unsaved edit survives a reload: the draft is restored and sent', async 
   expect((await sceneFromApi(page.request, id)).document.grid).not.toBe(4.2);
 
   // Connection back, reload once more: the restored draft is sent.
-  await page.unroute(`**/api/scenes/${id}`);
+  await page.context().unroute(`**/api/scenes/${id}`);
   await openEditor(page, id);
   await expect(status(page)).toHaveAttribute('data-save-status', 'saved');
   await expect.poll(async () => (await sceneFromApi(page.request, id)).document.grid).toBe(4.2);
