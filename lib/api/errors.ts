@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { transition, type PlanStatus } from '@/lib/review/lifecycle';
 
 export interface FieldIssue {
   /** Dotted path of the field, e.g. "document.objects.0.x"; "body" for the body as a whole. */
@@ -46,4 +47,14 @@ export function staleRevisionBody(what: string, sent: number, current: number) {
     issues: [{ path: 'revision', message: 'Stale revision' }],
     currentRevision: current,
   };
+}
+
+/**
+ * The status a plan takes when it is edited (a returned plan goes back to draft), or a 409 naming `status`
+ * when its status freezes it (submitted, approved, archived). The one check for every route that edits a plan.
+ */
+export function statusAfterEdit(status: PlanStatus): PlanStatus {
+  const t = transition(status, 'edit');
+  if (!t.ok) throw new HttpError(409, t.message, [{ path: 'status', message: `The plan is ${status}` }]);
+  return t.to;
 }

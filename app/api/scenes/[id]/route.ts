@@ -3,10 +3,9 @@ import { inTransaction } from '@/db/transaction';
 import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
-import { HttpError, staleRevisionBody } from '@/lib/api/errors';
+import { HttpError, staleRevisionBody, statusAfterEdit } from '@/lib/api/errors';
 import { scenePin } from '@/lib/server/truck-pin';
 import { updateSceneSchema } from '@/lib/validations/scenes';
-import { isEditable, transition } from '@/lib/review/lifecycle';
 import { mayDeleteScene, mayEditScene, mayReadScene, rolesFor } from '@/lib/auth/permissions';
 
 export const runtime = 'nodejs';
@@ -28,12 +27,9 @@ export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body:
     if (!scene || !mayReadScene(user, scene)) throw notFound();
     if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit it');
     // A submitted or approved plan is frozen; the message says what to do instead (withdraw, new revision).
-    if (!isEditable(scene.status)) {
-      const t = transition(scene.status, 'edit');
-      throw new HttpError(409, t.ok ? 'This plan cannot be edited now' : t.message, [{ path: 'status', message: `The plan is ${scene.status}` }]);
-    }
     // Editing a returned plan takes it back to draft.
-    const status = scene.status === 'returned' ? ({ status: 'draft' } as const) : {};
+    const to = statusAfterEdit(scene.status);
+    const status = to !== scene.status ? { status: to } : {};
     // The record names the profile version the saved sketch's truck is drawn from (lib/api/truck-pin).
     const pin = await scenePin(trx, user.organisationId, body, { keepProfileId: scene.equipmentProfileId });
     return updateScene(trx, user, params.id, { ...body, ...pin, ...status });

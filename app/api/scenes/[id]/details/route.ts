@@ -3,11 +3,10 @@ import { inTransaction } from '@/db/transaction';
 import { getScene } from '@/db/repositories/scenes';
 import { planDetailsAt, savePlanDetails } from '@/db/repositories/plan-details';
 import { idParams, route } from '@/lib/api/route';
-import { HttpError, staleRevisionBody } from '@/lib/api/errors';
+import { HttpError, staleRevisionBody, statusAfterEdit } from '@/lib/api/errors';
 import { planRevisionQuery, savePlanDetailsSchema } from '@/lib/validations/plan';
 import { planRevision } from '../plan-revision';
 import { mayEditScene, rolesFor } from '@/lib/auth/permissions';
-import { isEditable, transition } from '@/lib/review/lifecycle';
 
 export const runtime = 'nodejs';
 
@@ -27,11 +26,8 @@ export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body:
     if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can edit its plan details');
     // A new revision of the details is an edit of the plan: a submitted, approved or archived plan is frozen
     // (as for PUT /api/scenes/{id}), and saving a returned plan's details takes it back to draft.
-    if (!isEditable(scene.status)) {
-      const t = transition(scene.status, 'edit');
-      throw new HttpError(409, t.ok ? 'This plan cannot be edited now' : t.message, [{ path: 'status', message: `The plan is ${scene.status}` }]);
-    }
-    return savePlanDetails(trx, user, params.id, body.revision, body.details, scene.status === 'returned' ? 'draft' : undefined);
+    const status = statusAfterEdit(scene.status);
+    return savePlanDetails(trx, user, params.id, body.revision, body.details, status !== scene.status ? status : undefined);
   });
   if (outcome.kind === 'missing') throw new HttpError(404, 'Scene not found');
   if (outcome.kind === 'stale') {
