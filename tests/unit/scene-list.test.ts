@@ -3,7 +3,7 @@ import { CompiledQuery, sql } from 'kysely';
 import type { DB } from '@/db';
 import { isPostgres } from '@/db/dialect';
 import { createScene, softDeleteScene, updateScene } from '@/db/repositories/scenes';
-import { COUNT_CAP, countQuery, decodeCursor, ftsQuery, listScenes, tsQuery, type ListScenesOptions } from '@/db/repositories/scene-list';
+import { COUNT_CAP, countQuery, decodeCursor, ftsQuery, listScenes, SEARCH_DRIVES_AT_MOST, searchIsNarrow, tsQuery, type ListScenesOptions } from '@/db/repositories/scene-list';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { demoUser } from '@/tests/setup/db';
 import { buildTemplate, resetToTemplate } from '@/tests/setup/template-db';
@@ -164,5 +164,51 @@ describe('the total', () => {
     expect(res.items).toHaveLength(10);
     const few = await listScenes(db, sup, { pageSize: 10, q: 'Bulk 1234' });
     expect(few).toMatchObject({ total: 1, totalCapped: false });
+  });
+});
+
+describe('a narrow search starts from its matches, a broad one walks the list', () => {
+  it('chooses by the number of matches, and either way gives the pages and total the unsearched list gives', async () => {
+    const now = Date.parse('2026-01-01T00:00:00Z');
+    // Broad: every bulk scene says "gravel"; narrow: one in 97 also says "culvert". Operator and supervisor
+    // scenes both, so visibility still filters the matches.
+    const rows = Array.from({ length: SEARCH_DRIVES_AT_MOST + 40 }, (_, i) => ({
+      organisation_id: op.organisationId,
+      owner_id: i % 3 === 0 ? sup.id : op.id,
+      status: i % 5 === 0 ? 'approved' : 'draft',
+      title: `Gravel pit ${i}${i % 97 === 0 ? ' culvert' : ''}`,
+      document: '{}',
+      created_at: new Date(now + i * 60_000).toISOString(),
+      updated_at: new Date(now + (i % 50) * 60_000).toISOString(),
+    }));
+    for (let i = 0; i < rows.length; i += 500) await db.insertInto('scenes').values(rows.slice(i, i + 500) as never).execute();
+    if (!isPostgres(db)) {
+      expect(await searchIsNarrow(db, 'culvert')).toBe(true);
+      expect(await searchIsNarrow(db, 'gravel')).toBe(false);
+      // The narrow count reads the matches by id, not the list's index.
+      const q = countQuery(db, op, { q: 'culvert' }, true).compile();
+      const plan = await db.withoutPlugins().executeQuery<{ detail: string }>(CompiledQuery.raw(`explain query plan ${q.sql}`, [...q.parameters]));
+      const detail = plan.rows.map((r) => r.detail).join('\n');
+      expect(detail).toMatch(/SEARCH scenes USING INTEGER PRIMARY KEY/);
+      expect(detail).not.toMatch(/scenes_count_idx|scenes_list_idx/);
+    }
+    // Whichever way it is read, a search gives the unsearched list's rows that match, in its order.
+    for (const user of [op, sup]) {
+      const all = await listScenes(db, user, { pageSize: 100 });
+      const every: { id: number; title: string }[] = [];
+      for (let after: string | undefined, p = 0; p < 100; p++) {
+        const res = await listScenes(db, user, { pageSize: 100, after });
+        every.push(...res.items);
+        if (!res.nextCursor) break;
+        after = res.nextCursor;
+      }
+      expect(every.length).toBe(all.total);
+      for (const [word, test] of [['culvert', / culvert$/], ['gravel', /^Gravel/]] as const) {
+        const expected = every.filter((s) => test.test(s.title)).map((s) => s.id);
+        expect(expected.length).toBeGreaterThan(0);
+        expect(await walk(user, { pageSize: 7, q: word })).toEqual(expected);
+        expect((await listScenes(db, user, { pageSize: 7, q: word })).total).toBe(expected.length);
+      }
+    }
   });
 });
