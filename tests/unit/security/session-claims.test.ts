@@ -1,6 +1,6 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { encode, type JWT } from 'next-auth/jwt';
-import { claimsFromToken, sessionTokenFrom } from '@/lib/auth/session-claims';
+import { claimsFromToken, DECODED_TOKENS_KEPT, keptTokenCount, sessionTokenFrom } from '@/lib/auth/session-claims';
 
 const SECRET = 'unit-test-secret-of-some-length';
 /** A token as next-auth writes it; some tests leave claims out or give them the wrong type on purpose. */
@@ -42,5 +42,35 @@ describe('session claims read straight from the next-auth JWT', () => {
     expect(joined).toBe(token);
     expect(await claimsFromToken(joined, SECRET)).toEqual({ userId: 7, sessionVersion: 1 });
     expect(sessionTokenFrom(() => undefined)).toBeNull();
+  });
+
+  describe('decrypted tokens kept until they expire', () => {
+    afterEach(() => vi.useRealTimers());
+
+    it('answers a kept token only under its own secret, and never past its expiry', async () => {
+      const token = await tok({ userId: 9, sessionVersion: 2 }, SECRET, 60);
+      expect(await claimsFromToken(token, SECRET)).toEqual({ userId: 9, sessionVersion: 2 });
+      // Kept now: another secret still does not open it.
+      expect(await claimsFromToken(token, 'another-secret-entirely')).toBeNull();
+      expect(await claimsFromToken(token, SECRET)).toEqual({ userId: 9, sessionVersion: 2 });
+      vi.useFakeTimers({ toFake: ['Date'] });
+      // Past the expiry and next-auth's 15 s clock tolerance.
+      vi.setSystemTime(Date.now() + 80_000);
+      expect(await claimsFromToken(token, SECRET)).toBeNull();
+    });
+
+    it('keeps no more than DECODED_TOKENS_KEPT tokens, and a refused token is never kept', async () => {
+      const before = keptTokenCount();
+      const first = await tok({ userId: 1, sessionVersion: 1 }, SECRET, 60);
+      expect(await claimsFromToken(first, SECRET)).not.toBeNull();
+      expect(keptTokenCount()).toBe(before + 1);
+      const tampered = first.slice(0, -4) + (first.endsWith('AAAA') ? 'BBBB' : 'AAAA');
+      expect(await claimsFromToken(tampered, SECRET)).toBeNull();
+      expect(await claimsFromToken(tampered, SECRET)).toBeNull();
+      expect(keptTokenCount()).toBe(before + 1);
+      const others = await Promise.all(Array.from({ length: DECODED_TOKENS_KEPT }, (_, i) => tok({ userId: 100 + i, sessionVersion: 1 }, SECRET, 600)));
+      for (const t of others) await claimsFromToken(t, SECRET);
+      expect(keptTokenCount()).toBe(DECODED_TOKENS_KEPT);
+    });
   });
 });
