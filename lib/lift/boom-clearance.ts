@@ -1,7 +1,13 @@
-import { pointInPolygon, pointPolygonDistance, pointSegmentDist2, segmentsIntersect } from './geometry';
+import * as geometry from './geometry';
 import { slewAt, type PreparedLift, type Target } from './prepare';
 import { lipschitzMin } from './search';
-import { closest, segmentSegmentDistance } from './segment3d';
+import * as segment3d from './segment3d';
+
+// The walks below call these tens of thousands of times per analysis. Taken once into module constants:
+// where modules are compiled to CommonJS (tsx, which runs `npm run bench`), every call through an import
+// binding goes through a getter first.
+const { pointInPolygon, pointPolygonDistance, pointSegmentDist2, segmentsIntersect } = geometry;
+const { closest, segmentSegmentDistance } = segment3d;
 
 /**
  * The boom against obstacles and the truck's own parts, in 3D. The boom is a capsule: its axis runs from
@@ -132,6 +138,94 @@ export function boomAxisToPrism(px: number, py: number, pz: number, qx: number, 
   return best;
 }
 
+/**
+ * Outside a polygon's box, pointInPolygon is false: a point above or below the box crosses no edge's span
+ * in y, and one to the left or right of it (by more than the rounding of the crossing's x, hence the
+ * margin) lies on the same side of every crossing, of which a closed outline has an even number.
+ */
+function outsideBox(x: number, y: number, t: Target): boolean {
+  const m = 1e-9 * (1 + Math.abs(t.x0) + Math.abs(t.x1));
+  return y > t.y1 || y < t.y0 || x > t.x1 + m || x < t.x0 - m;
+}
+
+/** The edge of the part's top face that came nearest in the last boomAxisGap call: tried first in the next. */
+let lastEdge = 0;
+
+/**
+ * boomAxisToPrism's distance, the same number bit for bit, for the clearance walks (which need only the
+ * distance, not where on the boom it is). The candidates are those of boomAxisToPrism: the piece at or
+ * below the top (the same planSegmentPolygon), each end of the piece above it straight over the face, and
+ * each edge of the face; their least is the distance whichever order they are taken in. What changes:
+ * - an end outside the face's box is not over the face (outsideBox), so no point-in-polygon test;
+ * - the edge nearest at the previous slew is tried first (the walks move a small step at a time);
+ * - an edge is passed over when it cannot come nearer than the best so far: its distance is at least
+ *   √(g² + h²), with g the plan gap between its box and the box of the part of the upper piece lower than
+ *   top + best (the rest is more than best above the face), and h the upper piece's lowest height above the
+ *   face. The 1e-9 relative and 1e-18 m² room is boomAxisToPrism's own, far above the rounding of either.
+ */
+export function boomAxisGap(px: number, py: number, pz: number, qx: number, qy: number, qz: number, t: Target): number {
+  const dz = qz - pz;
+  let lo0 = 0, lo1 = 1;
+  if (dz === 0) {
+    if (pz > t.top) lo1 = -1;
+  } else {
+    const ut = (t.top - pz) / dz;
+    if (dz > 0) lo1 = Math.min(1, ut);
+    else lo0 = Math.max(0, ut);
+  }
+  let best = Infinity;
+  if (lo1 >= lo0) {
+    const ax = px + (qx - px) * lo0, ay = py + (qy - py) * lo0, bx = px + (qx - px) * lo1, by = py + (qy - py) * lo1;
+    best = planSegmentPolygon(ax, ay, bx, by, t.poly, t.n);
+    if (best === 0) return 0;
+  }
+  let u0: number, u1: number;
+  if (lo1 < lo0) {
+    u0 = 0;
+    u1 = 1;
+  } else if (dz > 0) {
+    u0 = Math.max(0, lo1);
+    u1 = 1;
+  } else {
+    u0 = 0;
+    u1 = Math.min(1, lo0);
+  }
+  if (u1 <= u0 && lo1 >= lo0) return best;
+  const sx = px + (qx - px) * u0, sy = py + (qy - py) * u0, sz = pz + dz * u0;
+  const ex = px + (qx - px) * u1, ey = py + (qy - py) * u1, ez = pz + dz * u1;
+  const top = t.top, poly = t.poly, n = t.n;
+  if (sz - top < best && !outsideBox(sx, sy, t) && pointInPolygon(sx, sy, poly, n)) best = sz - top;
+  if (ez - top < best && !outsideBox(ex, ey, t) && pointInPolygon(ex, ey, poly, n)) best = ez - top;
+  const low = Math.max(0, Math.min(sz, ez) - top);
+  const first = lastEdge < n ? lastEdge : 0;
+  for (let m = 0; m < n; m++) {
+    const i = m === 0 ? first : m <= first ? m - 1 : m;
+    const j = i === 0 ? n - 1 : i - 1;
+    const cx = poly[2 * j], cy = poly[2 * j + 1], fx = poly[2 * i], fy = poly[2 * i + 1];
+    if (best < Infinity) {
+      // The upper piece's plan box, cut to where it is less than best (with room) above the face.
+      let x0 = sx < ex ? sx : ex, x1 = sx < ex ? ex : sx, y0 = sy < ey ? sy : ey, y1 = sy < ey ? ey : sy;
+      const reachZ = top + best * (1 + 1e-6) + 1e-9;
+      if (sz !== ez && (sz > reachZ || ez > reachZ)) {
+        // Fraction of the piece (from its lower end) below reachZ; the box of that part.
+        const lowX = sz < ez ? sx : ex, lowY = sz < ez ? sy : ey, highX = sz < ez ? ex : sx, highY = sz < ez ? ey : sy;
+        const f = Math.min(1, Math.max(0, (reachZ - Math.min(sz, ez)) / Math.abs(ez - sz)) * (1 + 1e-9) + 1e-9);
+        const cutX = lowX + (highX - lowX) * f, cutY = lowY + (highY - lowY) * f;
+        x0 = lowX < cutX ? lowX : cutX; x1 = lowX < cutX ? cutX : lowX; y0 = lowY < cutY ? lowY : cutY; y1 = lowY < cutY ? cutY : lowY;
+      }
+      const gx = Math.max(0, (cx < fx ? cx : fx) - x1, x0 - (cx < fx ? fx : cx));
+      const gy = Math.max(0, (cy < fy ? cy : fy) - y1, y0 - (cy < fy ? fy : cy));
+      if (gx * gx + gy * gy + low * low > best * best * (1 + 1e-9) + 1e-18) continue;
+    }
+    const d = segmentSegmentDistance(sx, sy, sz, ex, ey, ez, cx, cy, top, fx, fy, top);
+    if (d < best) {
+      best = d;
+      lastEdge = i;
+    }
+  }
+  return best;
+}
+
 /** Gap between the boom's surface and a part at slew `deg`, m (negative: they overlap). */
 export function boomGapAt(p: PreparedLift, t: Target, deg: number): number {
   const a = (deg * Math.PI) / 180;
@@ -140,6 +234,14 @@ export function boomGapAt(p: PreparedLift, t: Target, deg: number): number {
 
 /** boomGapAt with the slew given as its cosine and sine. */
 function boomGapCS(p: PreparedLift, t: Target, c: number, s: number): number {
+  const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
+  const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
+  return boomAxisGap(px, py, p.pivotZ, qx, qy, p.tipZ, t) - p.boomRadius;
+}
+
+/** boomGapAt by boomAxisToPrism, which also leaves where on the boom it came nearest in nearestU. */
+function boomGapWhere(p: PreparedLift, t: Target, deg: number): number {
+  const a = (deg * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
   const px = c * p.pivotX0 - s * p.pivotY0, py = s * p.pivotX0 + c * p.pivotY0;
   const qx = c * p.hookX0 - s * p.hookY0, qy = s * p.hookX0 + c * p.hookY0;
   return boomAxisToPrism(px, py, p.pivotZ, qx, qy, p.tipZ, t) - p.boomRadius;
@@ -176,7 +278,7 @@ export function boomClearanceOver(p: PreparedLift, t: Target): BoomClearance {
 }
 
 export function boomClearanceAt(p: PreparedLift, t: Target, slew: number): BoomClearance {
-  const g = boomGapAt(p, t, slew);
+  const g = boomGapWhere(p, t, slew);
   const along = nearestU * p.input.boom.length;
   const height = p.pivotZ + (p.tipZ - p.pivotZ) * nearestU;
   return { target: t.id, name: t.name, kind: t.kind, distance: Math.max(0, g), slew, alongBoom: along, height, strikes: g <= 0 };

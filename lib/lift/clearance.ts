@@ -1,7 +1,15 @@
-import { placeOutline } from './footprint';
-import { pointPolygonDistance, polygonGap } from './geometry';
-import { slewAt, type PreparedLift, type Target } from './prepare';
+import * as footprint from './footprint';
+import * as geometry from './geometry';
+import * as prepare from './prepare';
+import type { PreparedLift, Target } from './prepare';
 import { lipschitzMin } from './search';
+
+// The walk below calls these thousands of times per analysis, so they are read once into module constants:
+// where a loader compiles modules to CommonJS (tsx does for some under `npm run bench`), each call through
+// an imported name first calls a getter.
+const { placeOutline } = footprint;
+const { pointPolygonDistance, polygonGap } = geometry;
+const { slewAt } = prepare;
 
 /**
  * Clearance between the load and the truck's own parts and obstacles as the load turns with the boom.
@@ -64,12 +72,20 @@ export function clearanceOver(p: PreparedLift, target: Target): Clearance {
   // Outline points move at most (radius + reach) metres per radian of slew.
   const lipschitz = ((p.radius + p.footprint.reach) * Math.PI) / 180;
   let best = Infinity;
+  const reach = target.r + p.footprint.reach;
   const gap = (t: number) => {
     // One cosine and sine per angle, shared by the bound and the exact gap.
     const a = (slewAt(p, t) * Math.PI) / 180, c = Math.cos(a), s = Math.sin(a);
-    const rough = roughGapCS(p, target, c, s);
-    // Far above the best so far: the bound is enough to decide the stride.
-    if (rough > best * (1 + WALK.tolRel) + 4 * WALK.tolAbs) return rough;
+    const above = best * (1 + WALK.tolRel) + 4 * WALK.tolAbs;
+    // The bound is hypot(dx, dy) − reach. When dx² + dy² is clearly below (above + reach)², the bound is
+    // not above `above` (the 1e-9 room dwarfs the rounding of either side), so the exact gap is worked
+    // out without the hypot; otherwise the test is made as written.
+    const dx = c * p.hookX0 - s * p.hookY0 - target.cx, dy = s * p.hookX0 + c * p.hookY0 - target.cy, lim = above + reach;
+    if (!(dx * dx + dy * dy < lim * lim * (1 - 1e-9))) {
+      const rough = roughGapCS(p, target, c, s);
+      // Far above the best so far: the bound is enough to decide the stride.
+      if (rough > above) return rough;
+    }
     const g = gapCS(p, target, c, s);
     if (g < best) best = g;
     return g;

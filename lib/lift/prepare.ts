@@ -25,6 +25,11 @@ export interface Target {
   cx: number;
   cy: number;
   r: number;
+  /** The vertices' box: least and greatest x and y. */
+  x0: number;
+  x1: number;
+  y0: number;
+  y1: number;
 }
 
 /** Everything the per-angle evaluations need, worked out once per input. */
@@ -95,7 +100,7 @@ export function prepareLift(raw: LiftInputIn | LiftInput): PreparedLift {
     const cx = (x0 + x1) / 2, cy = (y0 + y1) / 2;
     let r = 0;
     for (let i = 0; i < poly.length; i += 2) r = Math.max(r, Math.hypot(poly[i] - cx, poly[i + 1] - cy));
-    return { id, name: name ?? id, kind, poly, n: poly.length / 2, top, cx, cy, r };
+    return { id, name: name ?? id, kind, poly, n: poly.length / 2, top, cx, cy, r, x0, x1, y0, y1 };
   };
   input.bodies.forEach((b, i) => {
     targets.push(target(b.id, b.name, 'body', checkPolygon(b.polygon, `bodies.${i}.polygon`, `The truck's ${b.name ?? b.id}`), b.top));
@@ -153,5 +158,11 @@ export function withLoadMass(p: PreparedLift, loadMass: number): PreparedLift {
   return { ...p, input, hookLoad: loadMass + input.hook.blockMass + input.hook.riggingMass };
 }
 
-/** Slew at `t` degrees along the planned arc, in [0, 360). */
-export const slewAt = (p: PreparedLift, t: number): number => normalizeDegrees(p.from + p.sign * t);
+/**
+ * Slew at `t` degrees along the planned arc, in [0, 360). Between 0 and 360 exclusive normalizeDegrees
+ * returns its argument unchanged, so that case skips it (the swing walks call this thousands of times).
+ */
+export const slewAt = (p: PreparedLift, t: number): number => {
+  const d = p.from + p.sign * t;
+  return d > 0 && d < 360 ? d : normalizeDegrees(d);
+};
