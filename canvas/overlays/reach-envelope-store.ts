@@ -1,6 +1,7 @@
 'use client';
 import { useSyncExternalStore } from 'react';
-import type { EnvelopeGrid, EnvelopeShapes } from '@/lib/envelope';
+import type { EnvelopeGrid } from '@/lib/envelope';
+import type { EnvelopePicture } from './envelope-picture';
 
 /**
  * Whether the reach envelope is shown, and the last one computed. Module state rather than the editor
@@ -10,14 +11,17 @@ import type { EnvelopeGrid, EnvelopeShapes } from '@/lib/envelope';
 export interface EnvelopeState {
   on: boolean;
   grid: EnvelopeGrid | null;
-  shapes: EnvelopeShapes | null;
+  /** Names of what the load meets inside the limits. */
+  cutBy: string[];
+  /** The envelope painted for the part of the plan in view (null: none of it in view, or not painted yet). */
+  picture: EnvelopePicture | null;
   /** Time the last grid took, ms, and where it ran. */
   ms: number | null;
   where: 'worker' | 'main' | null;
   busy: boolean;
 }
 
-let state: EnvelopeState = { on: false, grid: null, shapes: null, ms: null, where: null, busy: false };
+let state: EnvelopeState = { on: false, grid: null, cutBy: [], picture: null, ms: null, where: null, busy: false };
 const listeners = new Set<() => void>();
 
 export const envelopeStore = {

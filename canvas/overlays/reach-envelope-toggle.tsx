@@ -3,7 +3,7 @@ import { CAUTION_LINES } from '@/lib/caution';
 import { formatMass } from '@/lib/format/quantity';
 import { formatNumber } from '@/lib/format/number';
 import { useEditorState } from '../editor-context';
-import { ENVELOPE_STYLE } from './reach-envelope-overlay';
+import { ENVELOPE_STYLE } from './envelope-picture';
 import { envelopeStore, useEnvelopeState } from './reach-envelope-store';
 import { useReachEnvelope } from './use-reach-envelope';
 
@@ -28,7 +28,7 @@ function LineKey({ stroke, dash }: { stroke: string; dash: readonly number[] }) 
 /** Button to show the reach envelope on the plan, and its key while it is shown (top left of the plan). */
 export function ReachEnvelopeToggle() {
   useReachEnvelope();
-  const { on, grid, shapes, ms, where, busy } = useEnvelopeState((s) => s);
+  const { on, grid, cutBy, ms, where, busy } = useEnvelopeState((s) => s);
   const units = useEditorState((s) => s.units);
   const uncertain = useEditorState((s) => (s.analysis?.lift.ok ? (s.analysis.lift.input.weightUncertainty ?? 0) > 0 : false));
   return (
@@ -46,7 +46,7 @@ export function ReachEnvelopeToggle() {
         <details open className="mt-1.5 rounded-md border border-ink/20 bg-paper-raised/95 p-2 shadow-sm" data-testid="reach-envelope-key">
           <summary className="cursor-pointer font-semibold">Key</summary>
           <div className="mt-1 space-y-1">
-            {!grid || !shapes ? (
+            {!grid ? (
               <p>{busy ? 'Working out the envelope…' : 'Place the truck and the load to see where the load can be held.'}</p>
             ) : (
               <>
@@ -55,8 +55,8 @@ export function ReachEnvelopeToggle() {
                 </p>
                 <p className="flex flex-wrap items-center gap-1.5"><Swatch {...ENVELOPE_STYLE.ample} /> under 60 % <Swatch {...ENVELOPE_STYLE.fair} /> 60–90 % <Swatch {...ENVELOPE_STYLE.near} /> within 10 % of a limit</p>
                 <p className="flex items-center gap-1.5"><LineKey stroke={ENVELOPE_STYLE.tipping.stroke} dash={ENVELOPE_STYLE.tipping.dash} /> tipping <LineKey stroke={ENVELOPE_STYLE.chart.stroke} dash={ENVELOPE_STYLE.chart.dash} /> load chart <LineKey stroke={ENVELOPE_STYLE.reach.stroke} dash={ENVELOPE_STYLE.reach.dash} /> reach</p>
-                {shapes.cutBy.length > 0 && (
-                  <p className="flex items-center gap-1.5" data-testid="reach-envelope-cut"><Swatch fill={ENVELOPE_STYLE.cut.fill} alpha={1} hatch /> load meets {shapes.cutBy.length > 4 ? `${shapes.cutBy.slice(0, 3).join(', ')} and ${shapes.cutBy.length - 3} more` : shapes.cutBy.join(', ')}</p>
+                {cutBy.length > 0 && (
+                  <p className="flex items-center gap-1.5" data-testid="reach-envelope-cut"><Swatch fill={ENVELOPE_STYLE.cut.fill} alpha={1} hatch /> load meets {cutBy.length > 4 ? `${cutBy.slice(0, 3).join(', ')} and ${cutBy.length - 3} more` : cutBy.join(', ')}</p>
                 )}
                 <p className="text-ink-muted">{CAUTION_LINES[0]}</p>
                 {ms !== null && <p className="text-ink-muted" data-testid="reach-envelope-ms">Worked out in {formatNumber(ms)} ms{where === 'worker' ? ' beside the editor' : ''}{busy ? '; updating…' : ''}.</p>}
