@@ -9,11 +9,12 @@ import { PAL } from './palette';
 import { useDisplaySlew } from './use-display-slew';
 import { AnalysisOverlays } from '../overlays/analysis-overlays';
 import { ReachEnvelopeOverlay } from '../overlays/reach-envelope-overlay';
+import { MovingObjects } from './scene-layer';
 import type { LoadObject, TruckObject } from '@/lib/scene/objects';
 
 const flat = (poly: { x: number; y: number }[]) => poly.flatMap((p) => [p.x, p.y]);
 
-/** What moves: the analysis overlays, the boom and the hanging load, the selection and its handles. */
+/** What moves: objects being dragged, the analysis overlays, the boom and the hanging load, the selection and its handles. */
 export function LiveLayer() {
   const { editor } = useEditorContext();
   const doc = useEditorState((s) => s.document);
@@ -31,6 +32,7 @@ export function LiveLayer() {
   const handles = editor.handles();
   return (
     <>
+      <MovingObjects />
       <ReachEnvelopeOverlay />
       <AnalysisOverlays />
       {doc.objects

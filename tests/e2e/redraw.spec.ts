@@ -50,6 +50,43 @@ test('scrubbing the slew in the editor redraws only the live layer', async ({ pa
   }
 });
 
+test('dragging the truck redraws the scene layer only as the drag starts and ends', async ({ page }) => {
+  await signIn(page, 'operator@harrow.example');
+  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
+  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Redraw check, truck drag (coil copy)' } });
+  expect(copy.status()).toBe(201);
+  const id = (await copy.json()).id as number;
+  try {
+    await page.goto(`/scenes/${id}`);
+    await expect(page.getByTestId('live-readout')).toBeVisible({ timeout: 30_000 });
+    const box = (await page.getByTestId('plan-view').boundingBox())!;
+    // The truck's reference point on screen, from the editor's own camera.
+    const at = await page.evaluate(() => {
+      const st = window.__arclineEditor!.store.getState();
+      const t = st.document.objects.find((o) => o.kind === 'truck')!;
+      return { x: st.viewport.width / 2 + (t.x - st.camera.x) * st.camera.pxPerM, y: st.viewport.height / 2 - (t.y - st.camera.y) * st.camera.pxPerM, x0: t.x };
+    });
+    const read = await countLayerDraws(page);
+    await page.mouse.move(box.x + at.x, box.y + at.y);
+    await page.mouse.down();
+    for (let i = 1; i <= 20; i++) await page.mouse.move(box.x + at.x + 3 * i, box.y + at.y);
+    const during = await read();
+    await page.mouse.up();
+    const after = await read();
+    const moved = await page.evaluate(() => window.__arclineEditor!.store.getState().document.objects.find((o) => o.kind === 'truck')!.x);
+    expect(moved).toBeGreaterThan(at.x0);
+    const scene = during.length - 2;
+    // The truck leaves the scene's canvas for the live one once, as it starts to move...
+    expect(during[scene]).toBeLessThanOrEqual(1);
+    expect(during[during.length - 1]!).toBeGreaterThanOrEqual(10);
+    // ...and goes back once when it is set down. The grid never redraws.
+    expect(after[scene]! - during[scene]!).toBe(1);
+    expect(after.slice(0, scene)).toEqual(after.slice(0, scene).map(() => 0));
+  } finally {
+    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
+  }
+});
+
 test('playing the replay redraws only the live layer', async ({ page }) => {
   await signIn(page, 'trainer@harrow.example');
   const id = await sceneIdByTitle(page, HARROW_SCENES.reefer);
