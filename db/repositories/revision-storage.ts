@@ -18,8 +18,8 @@ type Db = Kysely<Database>;
 
 export const KEEP_ALL_FOR_MS = 24 * 60 * 60 * 1000;
 
-export function compressedSnapshot(document: Record<string, unknown>): Buffer {
-  return gzipSync(JSON.stringify(document), { level: 6 });
+export function compressedSnapshot(document: Record<string, unknown> | string): Buffer {
+  return gzipSync(typeof document === 'string' ? document : JSON.stringify(document), { level: 6 });
 }
 
 /**
