@@ -1,4 +1,4 @@
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import type { Database, SceneRow } from '../schema';
 import type { CurrentUser, SceneStatus } from '@/lib/domain';
 import { recordAudit } from './audit';
@@ -46,6 +46,25 @@ function toScene(row: SceneWithOwner): Scene {
 export async function getScene(db: Db, user: CurrentUser, id: number): Promise<Scene | undefined> {
   const row = await visibleScenes(db, user).selectAll('scenes').select('users.name as owner_name').where('scenes.id', '=', id).executeTakeFirst();
   return row ? toScene(row as SceneWithOwner) : undefined;
+}
+
+/**
+ * A scene as GET /api/scenes/{id} answers it, with its document still the JSON text it is stored as: the
+ * route splices that text into the answer instead of parsing it into objects and serialising them again
+ * (about 2.5 ms of a 200 kB scene's GET). The text is what a save stored: JSON.stringify's output.
+ */
+export async function getSceneAsJson(db: Db, user: CurrentUser, id: number): Promise<string | undefined> {
+  const row = await visibleScenes(db, user)
+    .select(['scenes.id', 'scenes.organisation_id', 'scenes.title', 'scenes.status', 'scenes.revision', 'scenes.owner_id', 'scenes.equipment_profile_id', 'scenes.equipment_profile_version', 'scenes.in_training_set', 'scenes.location', 'scenes.notes', 'scenes.created_at', 'scenes.updated_at'])
+    .select('users.name as owner_name')
+    // Cast, so neither the JSON-columns plugin nor pg's json type parser turns it into objects.
+    .select(sql<string>`cast(scenes.document as text)`.as('document_text'))
+    .where('scenes.id', '=', id)
+    .executeTakeFirst();
+  if (!row) return undefined;
+  const { document_text: text, ...rest } = row as unknown as SceneWithOwner & { document_text: string };
+  const { document: _parsed, ...scene } = toScene({ ...rest, document: {} } as SceneWithOwner);
+  return `${JSON.stringify(scene).slice(0, -1)},"document":${text}}`;
 }
 
 export interface NewSceneInput {

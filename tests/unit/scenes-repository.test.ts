@@ -1,6 +1,6 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { DB } from '@/db';
-import { createScene, getScene, listRevisions, setTrainingSet, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { createScene, getScene, getSceneAsJson, listRevisions, setTrainingSet, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { listScenes } from '@/db/repositories/scene-list';
 import { listSceneAudit } from '@/db/repositories/audit';
 import { inTransaction } from '@/db/transaction';
@@ -139,6 +139,24 @@ describe('listScenes and getScene', () => {
     const s = await createScene(db, op, { title: 'Harrow plan', document: doc(1) });
     expect(await listRevisions(db, other.organisationId, s.id)).toEqual([]);
     expect(await listRevisions(db, op.organisationId, s.id)).toHaveLength(1);
+  });
+});
+
+describe('getSceneAsJson (the single-scene GET)', () => {
+  it('answers exactly what getScene gives, the stored document spliced in as text, and nothing a reader may not see', async () => {
+    const document = { version: 1, grid: 2.5, objects: [{ kind: 'tape', length: 3, label: 'Château "ramp" \\ ✓\n' }, { kind: 'tape', length: 1e-7 }] };
+    const s = await createScene(db, op, { title: 'Spliced reefer', location: 'Mile 3', notes: null, document });
+    await updateScene(db, op, s.id, { revision: 1, document: { ...document, grid: 3 } });
+    for (const reader of [op, sup, admin]) {
+      const text = await getSceneAsJson(db, reader, s.id);
+      expect(text).toBeDefined();
+      expect(JSON.parse(text!)).toEqual(await getScene(db, reader, s.id));
+    }
+    expect(JSON.parse((await getSceneAsJson(db, op, s.id))!).document).toEqual({ ...document, grid: 3 });
+    // Another organisation, and a deleted scene, read nothing.
+    expect(await getSceneAsJson(db, other, s.id)).toBeUndefined();
+    await softDeleteScene(db, op, s.id);
+    expect(await getSceneAsJson(db, op, s.id)).toBeUndefined();
   });
 });
 

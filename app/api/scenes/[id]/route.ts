@@ -1,6 +1,6 @@
 import { getDb } from '@/db';
 import { inTransaction } from '@/db/transaction';
-import { getScene, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
+import { getScene, getSceneAsJson, sceneForSave, softDeleteScene, updateScene } from '@/db/repositories/scenes';
 import { scheduleThinning } from '@/db/repositories/revision-storage';
 import { idParams, route } from '@/lib/api/route';
 import { HttpError, staleRevisionBody, statusAfterEdit } from '@/lib/api/errors';
@@ -13,9 +13,9 @@ export const runtime = 'nodejs';
 const notFound = () => new HttpError(404, 'Scene not found');
 
 export const GET = route({ params: idParams }, async ({ user, params }) => {
-  const scene = await getScene(getDb(), user, params.id);
-  if (!scene) throw notFound();
-  return scene;
+  const json = await getSceneAsJson(getDb(), user, params.id);
+  if (json === undefined) throw notFound();
+  return new Response(json, { headers: { 'content-type': 'application/json' } });
 });
 
 export const PUT = route({ roles: rolesFor('editScene'), params: idParams, body: updateSceneSchema }, async ({ user, params, body }) => {
