@@ -99,7 +99,7 @@ describe('GET /api/scenes/{id}/revisions/{revision}', () => {
     signInAs(await demoUser('trainer@harrow.example'));
     const missing = await one(coil, 7);
     expect(missing.status).toBe(404);
-    expect((await missing.json()).issues).toEqual([{ path: 'revision', message: 'No such revision' }]);
+    expect((await missing.json()).issues).toEqual([{ path: 'params.revision', message: 'No such revision' }]);
     const bad = await one(coil, '1e1');
     expect(bad.status).toBe(400);
     expect((await bad.json()).issues[0].path).toBe('params.revision');

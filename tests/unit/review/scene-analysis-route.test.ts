@@ -113,6 +113,7 @@ describe('GET /api/scenes/{id}/analysis', () => {
     const missing = await get(coil, 'revision=99');
     expect(missing.status).toBe(404);
     expect(missing.json.error).toMatch(/revision 99/);
+    expect(missing.json.issues).toEqual([{ path: 'query.revision', message: 'No such revision' }]);
     for (const bad of ['revision=0', 'revision=abc', 'revision=1.5', 'other=1']) {
       const r = await get(coil, bad);
       expect(r.status, bad).toBe(400);

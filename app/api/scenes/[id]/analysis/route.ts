@@ -17,7 +17,7 @@ export const GET = route({ params: idParams, query }, async ({ user, params, que
   const found = await analyseSavedScene(getDb(), user, params.id, query.revision);
   if (found.kind === 'missing') throw new HttpError(404, 'Scene not found');
   if (found.kind === 'no-revision') {
-    throw new HttpError(404, `revision: this scene has no revision ${query.revision}; the latest is ${found.latest}`, [{ path: 'revision', message: 'No such revision' }]);
+    throw new HttpError(404, `query.revision: this scene has no revision ${query.revision}; the latest is ${found.latest}`, [{ path: 'query.revision', message: 'No such revision' }]);
   }
   const { analysis, cached } = found;
   const headers = { 'x-analysis-cache': cached ? 'hit' : 'miss' };

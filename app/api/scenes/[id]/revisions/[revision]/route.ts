@@ -14,7 +14,7 @@ export const GET = route({ params }, async ({ user, params }) => {
   const found = await revisionDetail(getDb(), user, params.id, params.revision);
   if (found.kind === 'missing') throw new HttpError(404, 'Scene not found');
   if (found.kind === 'no-revision') {
-    throw new HttpError(404, `revision: this scene has no revision ${params.revision}; the latest is ${found.latest}`, [{ path: 'revision', message: 'No such revision' }]);
+    throw new HttpError(404, `params.revision: this scene has no revision ${params.revision}; the latest is ${found.latest}`, [{ path: 'params.revision', message: 'No such revision' }]);
   }
   return found.body;
 });
