@@ -1,7 +1,7 @@
 import { G } from '@/lib/units';
-import { boomGapAt, boomMeets } from './boom-clearance';
-import { gapAt } from './clearance';
-import { pointSegmentDist2 } from './geometry';
+import * as boomClearance from './boom-clearance';
+import * as clearance from './clearance';
+import * as geometry from './geometry';
 import { lipschitzLowerBound, reactionSlopes, ROUNDING, tippingOnArc } from './coarse-bounds';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
@@ -10,6 +10,11 @@ import { slewAt, withLoadMass, type PreparedLift, type Target } from './prepare'
 import { createReactionState, reactionsAt } from './reactions';
 import { assertStandsUnloaded } from './tipping';
 import { atLeast, atMost, CLEARANCE_MARGIN_CAP, clearanceScale, type Margin } from './margins';
+
+// Called per sample of every part and obstacle, so read once into module constants (as in clearance.ts).
+const { boomGapAt, boomMeets } = boomClearance;
+const { gapAt } = clearance;
+const { pointSegmentDist2 } = geometry;
 
 /**
  * The coarse mode: the same limits as analyzeLift, each as a bound that is never on the favourable side
@@ -132,12 +137,10 @@ function hookArcDistance(p: PreparedLift, x: number, y: number): number {
   const slew = Math.atan2(y, x) / DEG - hookAngle;
   const rel = (((p.sign * (slew - p.from)) % 360) + 360) % 360;
   if (rel <= p.span) return Math.abs(p.radius - d);
-  let best = Infinity;
-  for (const t of [0, p.span]) {
-    const a = (slewAt(p, t) + hookAngle) * DEG;
-    best = Math.min(best, Math.hypot(p.radius * Math.cos(a) - x, p.radius * Math.sin(a) - y));
-  }
-  return best;
+  // The nearer end of the arc (no array of the two: this runs per part and obstacle of every placement).
+  const a0 = (slewAt(p, 0) + hookAngle) * DEG, a1 = (slewAt(p, p.span) + hookAngle) * DEG;
+  const best = Math.min(Infinity, Math.hypot(p.radius * Math.cos(a0) - x, p.radius * Math.sin(a0) - y));
+  return Math.min(best, Math.hypot(p.radius * Math.cos(a1) - x, p.radius * Math.sin(a1) - y));
 }
 
 /** Below this a bound is refined by sampling; at or above it the margin is capped anyway (margins.ts). */
@@ -159,10 +162,18 @@ interface Samples {
   qy: Float64Array;
 }
 
+/** The grid's arrays, kept from one analysis to the next (a search analyses thousands of placements). */
+const grid: Samples = { count: 0, t: new Float64Array(0), deg: new Float64Array(0), hx: new Float64Array(0), hy: new Float64Array(0), px: new Float64Array(0), py: new Float64Array(0), qx: new Float64Array(0), qy: new Float64Array(0) };
+
+/** Fills the shared grid (every entry up to count is written afresh). */
 function samplesOf(p: PreparedLift, step: number): Samples {
   const n = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
-  const f = () => new Float64Array(n + 1);
-  const out: Samples = { count: n + 1, t: f(), deg: f(), hx: f(), hy: f(), px: f(), py: f(), qx: f(), qy: f() };
+  const out = grid;
+  if (out.t.length < n + 1) {
+    const f = () => new Float64Array(n + 1);
+    Object.assign(out, { t: f(), deg: f(), hx: f(), hy: f(), px: f(), py: f(), qx: f(), qy: f() });
+  }
+  out.count = n + 1;
   const hookAngle = Math.atan2(p.hookY0, p.hookX0);
   for (let k = 0; k <= n; k++) {
     const t = Math.min(k * step, p.span);
@@ -304,9 +315,9 @@ export function analyzeCoarse(p: PreparedLift, options: CoarseOptions = {}): Coa
   const nominal = reactionBounds(p, step);
   const upper = up ? reactionBounds(up, step) : null;
   const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0)) + p.footprint.reach;
-  // The shared sample grid, made when the first part or obstacle needs sampling.
-  let grid: Samples | null = null;
-  const samples = () => (grid ??= samplesOf(p, step));
+  // The shared sample grid, filled when the first part or obstacle needs sampling.
+  let filled: Samples | null = null;
+  const samples = () => (filled ??= samplesOf(p, step));
   return {
     percentOfTipping: tippingOnArc(p, p.hookLoad).percent,
     upperPercentOfTipping: up ? tippingOnArc(up, up.hookLoad).percent : null,
