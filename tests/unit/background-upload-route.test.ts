@@ -63,6 +63,26 @@ describe('POST /api/scenes/[id]/background', () => {
     expect(await footprint()).toEqual(before);
   });
 
+  it('refuses a plan that is submitted or approved with 409 naming status, and stores nothing', async () => {
+    // The demo's frozen plans, each uploaded to by its own owner (who may edit it in every other respect).
+    const frozen = await getDb()
+      .selectFrom('scenes')
+      .innerJoin('users', 'users.id', 'scenes.owner_id')
+      .select(['scenes.id', 'scenes.status', 'users.email'])
+      .where('scenes.status', 'in', ['submitted', 'approved'])
+      .where('scenes.deleted_at', 'is', null)
+      .execute();
+    expect(new Set(frozen.map((f) => f.status))).toEqual(new Set(['submitted', 'approved']));
+    for (const f of frozen) {
+      signInAs(await demoUser(f.email as never));
+      const before = await footprint();
+      const res = await upload(f.id, new Blob([png]));
+      expect(res.status, f.status).toBe(409);
+      expect((await res.json()).issues).toEqual([{ path: 'status', message: `The plan is ${f.status}` }]);
+      expect(await footprint()).toEqual(before);
+    }
+  });
+
   it('answers 404 to an operator of another organisation', async () => {
     signInAs(await demoUser('operator@cobalt.example'));
     const before = await footprint();

@@ -1,7 +1,7 @@
 import { getDb } from '@/db';
 import { getScene } from '@/db/repositories/scenes';
 import { idParams, route } from '@/lib/api/route';
-import { HttpError, zodIssues, describeIssues } from '@/lib/api/errors';
+import { HttpError, statusAfterEdit, zodIssues, describeIssues } from '@/lib/api/errors';
 import { ACCEPTED_IMAGE_TYPES, oversizedImageReason, sniffImage } from '@/lib/image-sniff';
 import { readBodyLimited } from '@/lib/api/body';
 import { storeSceneUpload } from '@/lib/server/store-scene-upload';
@@ -19,6 +19,8 @@ export const POST = route({ roles: rolesFor('editScene'), params: idParams }, as
   const scene = await getScene(db, user, params.id);
   if (!scene) throw new HttpError(404, 'Scene not found');
   if (!mayEditScene(user, scene)) throw new HttpError(403, 'Only the scene owner can add a background image');
+  // A submitted, approved or archived plan is frozen: an image it could never place is refused (409 naming status).
+  statusAfterEdit(scene.status);
 
   // Counted while it streams: a declared length over the limit is refused unread, a chunked one at the limit.
   let raw: Uint8Array;
