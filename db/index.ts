@@ -84,7 +84,20 @@ export function openPostgres(url: string): DB {
   // An idle pooled connection the server closes (a restart, a failover, an administrator) must not take the
   // process down as an unhandled 'error' event; the pool drops it and opens a new one when next needed.
   pool.on('error', (err) => log.warn({ err }, 'PostgreSQL closed an idle pooled connection'));
-  return new Kysely<Database>({ dialect: new PostgresDialect({ pool }), plugins: [new JsonColumnsPlugin()] });
+  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }), plugins: [new JsonColumnsPlugin()] });
+  pools.set(db, pool);
+  return db;
+}
+
+const pools = new WeakMap<DB, pg.Pool>();
+
+/**
+ * The connection pool under a PostgreSQL Kysely instance opened here, or null (SQLite). For a library that
+ * takes a pg pool of its own (the shared sign-in limiter): its queries run on their own pooled connections,
+ * never inside a transaction of ours.
+ */
+export function postgresPoolOf(db: DB): pg.Pool | null {
+  return pools.get(db) ?? null;
 }
 
 /** Opens the configured database: PostgreSQL when DATABASE_URL says so, else the SQLite file. */

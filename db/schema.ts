@@ -244,6 +244,15 @@ export interface PasswordResetTable {
   used_at: string | null;
 }
 
+/** Wrong-password counts shared by every instance on PostgreSQL (rate-limiter-flexible's store columns). */
+export interface SignInThrottleTable {
+  /** "signin-account:<e-mail>" or "signin-address:<address>". */
+  key: string;
+  points: Generated<number>;
+  /** When the window ends, ms since the epoch. */
+  expire: number | null;
+}
+
 export interface ScenePlanDetailsTable {
   id: Generated<number>;
   organisation_id: number;
@@ -296,6 +305,7 @@ export interface Database {
   lesson_steps: LessonStepTable;
   scene_figures: SceneFiguresTable;
   password_resets: PasswordResetTable;
+  sign_in_throttle: SignInThrottleTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;

@@ -5,7 +5,7 @@ import { getDb } from '@/db';
 import { endUserSessions, findUsersByEmail } from '@/db/repositories/users';
 import { verifyAgainstDummy, verifyPassword } from './password';
 import { PASSWORD_MAX_CHARS } from './password-policy';
-import { clientAddress, recordSignInFailure } from './sign-in-throttle';
+import { clientAddress, recordSignInFailure } from '@/lib/server/sign-in-throttle';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email().max(254),

@@ -13,7 +13,8 @@ import * as users from '@/app/api/users/route';
 import * as mePassword from '@/app/api/me/password/route';
 import * as currentUser from '@/lib/auth/current-user';
 import { authOptions, checkCredentials } from '@/lib/auth/options';
-import { ACCOUNT_FAILURES_PER_MINUTE, ADDRESS_FAILURES_PER_15_MIN, recordSignInFailure, resetSignInThrottle, signInWaitSeconds } from '@/lib/auth/sign-in-throttle';
+import { ACCOUNT_FAILURES_PER_MINUTE, ADDRESS_FAILURES_PER_15_MIN, forgetInstanceCounts, recordSignInFailure, resetSignInThrottle, signInWaitSeconds } from '@/lib/server/sign-in-throttle';
+import { isPostgres } from '@/db/dialect';
 import { isCommonPassword, passwordSchema } from '@/lib/auth/password-policy';
 import { DEMO_PASSWORD } from '@/db/seed/demo-users';
 import { signInAs } from '@/tests/setup/auth-mock';
@@ -52,6 +53,27 @@ describe('sign-in throttling', () => {
     const body = await res.json();
     expect(new URL(body.url).searchParams.get('error')).toBe('TooManyAttempts');
   }, 120_000);
+
+  it('on PostgreSQL every instance sees the same counts; on SQLite each process counts its own', async () => {
+    for (let i = 0; i < ACCOUNT_FAILURES_PER_MINUTE; i++) await recordSignInFailure('admin@harrow.example', '198.51.100.4');
+    expect(await signInWaitSeconds('admin@harrow.example', '198.51.100.99')).toBeGreaterThan(0);
+    // Another instance: nothing in its memory.
+    forgetInstanceCounts();
+    const elsewhere = await signInWaitSeconds('Admin@Harrow.example', '198.51.100.99');
+    if (isPostgres(db)) {
+      expect(elsewhere).toBeGreaterThan(0);
+      expect(elsewhere).toBeLessThanOrEqual(60);
+      const rows = await db.selectFrom('sign_in_throttle').select(['key', 'points']).orderBy('key').execute();
+      expect(rows).toEqual([
+        { key: 'signin-account:admin@harrow.example', points: ACCOUNT_FAILURES_PER_MINUTE },
+        { key: 'signin-address:198.51.100.4', points: ACCOUNT_FAILURES_PER_MINUTE },
+      ]);
+    } else {
+      expect(elsewhere).toBe(0);
+    }
+    await resetSignInThrottle();
+    expect(await signInWaitSeconds('admin@harrow.example', '198.51.100.4')).toBe(0);
+  });
 
   it('counts per account: another account from the same address is not held up by ten failures', async () => {
     for (let i = 0; i < ACCOUNT_FAILURES_PER_MINUTE; i++) await recordSignInFailure('trainer@harrow.example', '203.0.113.8');

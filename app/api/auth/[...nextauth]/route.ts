@@ -1,6 +1,6 @@
 import NextAuth from 'next-auth';
 import { authOptions } from '@/lib/auth/options';
-import { clientAddress, signInWaitSeconds } from '@/lib/auth/sign-in-throttle';
+import { clientAddress, signInWaitSeconds } from '@/lib/server/sign-in-throttle';
 
 export const runtime = 'nodejs';
 
