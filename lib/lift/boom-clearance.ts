@@ -148,13 +148,44 @@ function outsideBox(x: number, y: number, t: Target): boolean {
   return y > t.y1 || y < t.y0 || x > t.x1 + m || x < t.x0 - m;
 }
 
+/** Least squared distance from (x, y) to the polygon's edges: pointPolygonDistance's loop, for a point known to lie outside. */
+function edgeDist2(x: number, y: number, poly: Float64Array, n: number): number {
+  let best = Infinity;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const d = pointSegmentDist2(x, y, poly[2 * j], poly[2 * j + 1], poly[2 * i], poly[2 * i + 1]);
+    if (d < best) best = d;
+  }
+  return best;
+}
+
+/**
+ * planSegmentPolygon's distance, the same number, without its point-in-polygon tests where they are known
+ * false: at the first end after planSegmentPolygon's own test of it, and at either end outside the box.
+ */
+function planSegmentGap(ax: number, ay: number, bx: number, by: number, t: Target): number {
+  const poly = t.poly, n = t.n;
+  if (!outsideBox(ax, ay, t) && pointInPolygon(ax, ay, poly, n)) return 0;
+  let best = Infinity;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const cx = poly[2 * j], cy = poly[2 * j + 1], ex = poly[2 * i], ey = poly[2 * i + 1];
+    if (segmentsIntersect(ax, ay, bx, by, cx, cy, ex, ey)) return 0;
+    const dv = pointSegmentDist2(cx, cy, ax, ay, bx, by);
+    if (dv < best) best = dv;
+  }
+  const d0 = Math.sqrt(edgeDist2(ax, ay, poly, n));
+  if (d0 * d0 < best) best = d0 * d0;
+  const d1 = outsideBox(bx, by, t) ? Math.sqrt(edgeDist2(bx, by, poly, n)) : pointPolygonDistance(bx, by, poly, n);
+  if (d1 * d1 < best) best = d1 * d1;
+  return Math.sqrt(best);
+}
+
 /** The edge of the part's top face that came nearest in the last boomAxisGap call: tried first in the next. */
 let lastEdge = 0;
 
 /**
  * boomAxisToPrism's distance, the same number bit for bit, for the clearance walks (which need only the
  * distance, not where on the boom it is). The candidates are those of boomAxisToPrism: the piece at or
- * below the top (the same planSegmentPolygon), each end of the piece above it straight over the face, and
+ * below the top (planSegmentPolygon's distance, by planSegmentGap), each end of the piece above it straight over the face, and
  * each edge of the face; their least is the distance whichever order they are taken in. What changes:
  * - an end outside the face's box is not over the face (outsideBox), so no point-in-polygon test;
  * - the edge nearest at the previous slew is tried first (the walks move a small step at a time);
@@ -176,7 +207,7 @@ export function boomAxisGap(px: number, py: number, pz: number, qx: number, qy: 
   let best = Infinity;
   if (lo1 >= lo0) {
     const ax = px + (qx - px) * lo0, ay = py + (qy - py) * lo0, bx = px + (qx - px) * lo1, by = py + (qy - py) * lo1;
-    best = planSegmentPolygon(ax, ay, bx, by, t.poly, t.n);
+    best = planSegmentGap(ax, ay, bx, by, t);
     if (best === 0) return 0;
   }
   let u0: number, u1: number;
