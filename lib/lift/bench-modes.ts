@@ -36,14 +36,17 @@ export function perCall(fn: () => unknown, minMs = 1500): { wall: number; cpu: n
 }
 
 /**
- * Why the exact mode misses 2 ms on the 50-obstacle full turn (measured 2026-12-03, results unchanged):
- * each part's and obstacle's smallest gap is a Lipschitz walk (search.ts) held to 2 mm + 0.2 %, and that
- * tolerance is the result contract (golden fixtures, slews to 1e-9). Over a full turn the 50 load walks
- * take about 7,300 steps with 5,500 exact outline gaps, and the 50 boom walks 8,900 steps with 7,200 exact
- * boom-to-prism distances: some 12,700 exact evaluations at 0.25–0.5 µs each on this shared machine, i.e.
- * 3–6 ms before anything else. The walk per target cannot be pruned (every target's own minimum and slew
- * is reported); meeting 2 ms would need a looser walk (larger clearance figures within tolerance, new
- * goldens) or a cheaper exact gap for convex outlines. The breakdown line printed per case shows the split.
+ * Why the exact mode still misses 2 ms on the 50-obstacle full turn (2026-12-03; results unchanged, bit for
+ * bit: tests/lift/fast-paths.test.ts). Each part's and obstacle's smallest gap is a Lipschitz walk (search.ts)
+ * held to 2 mm + 0.2 %, and that walk is the result contract (golden fixtures, slews to 1e-9): every stride
+ * is worked out from the gap read at the step before, so each step must read the same gap to the last bit,
+ * and none can be skipped without moving the slews reported after it. A full turn takes about 7,300 load
+ * steps (5,500 exact outline gaps, some 0.2 µs each on this shared machine) and 8,900 boom steps (7,200 exact
+ * boom-to-prism distances, some 0.25 µs each with boomAxisGap); the rest of a step (its cosine and sine, the
+ * bound, the stride) is about 0.1 µs. That is some 3 ms before anything else. Speed work so far made each
+ * evaluation cheaper (boomAxisGap, fewer point-in-polygon tests, no getter per imported call); meeting 2 ms
+ * would need fewer evaluations, i.e. a different walk (larger clearance figures within tolerance, new
+ * goldens), which is a change of results. The breakdown line printed per case shows the split.
  */
 export function benchModes(cases: { name: string; input: LiftInputIn }[]): void {
   console.log('exact and coarse modes, time per swing (median; the exact mode samples every 1° and leaves out the weight sensitivity, the coarse samples every 3°)');
