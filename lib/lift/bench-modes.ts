@@ -42,7 +42,7 @@ export function perCall(fn: () => unknown, minMs = 1500): { wall: number; cpu: n
  * is worked out from the gap read at the step before, so each step must read the same gap to the last bit,
  * and none can be skipped without moving the slews reported after it. A full turn takes about 7,300 load
  * steps (5,500 exact outline gaps, some 0.2 µs each on this shared machine) and 8,900 boom steps (7,200 exact
- * boom-to-prism distances, some 0.25 µs each with boomAxisGap); the rest of a step (its cosine and sine, the
+ * boom-to-prism distances, 0.25–0.3 µs each with boomAxisGap); the rest of a step (its cosine and sine, the
  * bound, the stride) is about 0.1 µs. That is some 3 ms before anything else. Speed work so far made each
  * evaluation cheaper (boomAxisGap, fewer point-in-polygon tests, no getter per imported call); meeting 2 ms
  * would need fewer evaluations, i.e. a different walk (larger clearance figures within tolerance, new
