@@ -244,6 +244,15 @@ export interface PasswordResetTable {
   used_at: string | null;
 }
 
+/** Live scenes counted per organisation, owner, status and training flag (kept by triggers). */
+export interface SceneCountsTable {
+  organisation_id: number;
+  owner_id: number;
+  status: SceneStatus;
+  in_training_set: number;
+  n: number;
+}
+
 /** Wrong-password counts shared by every instance on PostgreSQL (rate-limiter-flexible's store columns). */
 export interface SignInThrottleTable {
   /** "signin-account:<e-mail>" or "signin-address:<address>". */
@@ -306,6 +315,7 @@ export interface Database {
   scene_figures: SceneFiguresTable;
   password_resets: PasswordResetTable;
   sign_in_throttle: SignInThrottleTable;
+  scene_counts: SceneCountsTable;
 }
 
 export type Organisation = Selectable<OrganisationTable>;

@@ -12,6 +12,7 @@ import * as sceneActions from './2026-12-02T16-00_scene-actions';
 import * as passwordResets from './2026-12-03T08-00_password-resets';
 import * as sceneCountIndex from './2026-12-03T11-30_scene-count-index';
 import * as signInThrottle from './2026-12-03T14-00_sign-in-throttle';
+import * as sceneCounts from './2026-12-03T14-30_scene-counts';
 
 /**
  * Every migration, by name, in order. A static list (not a folder scan) so the same migrations run under
@@ -31,4 +32,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-03T08-00_password-resets': passwordResets,
   '2026-12-03T11-30_scene-count-index': sceneCountIndex,
   '2026-12-03T14-00_sign-in-throttle': signInThrottle,
+  '2026-12-03T14-30_scene-counts': sceneCounts,
 };

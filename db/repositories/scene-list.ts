@@ -162,11 +162,26 @@ function filtered(db: Db, user: CurrentUser, opts: ListScenesOptions, matchIds: 
 }
 
 /**
- * The matching scenes counted up to COUNT_CAP + 1. Every column its filters read is in `scenes_count_idx`,
- * so the count reads that index alone, never the scenes' rows (search adds the FTS look-up).
+ * A search's matching scenes counted up to COUNT_CAP + 1. Every column its filters read is in
+ * `scenes_count_idx`, so the count reads that index and the search's matches, never the scenes' rows.
+ * (Without a search the list's total comes from keptCountQuery.)
  */
 export function countQuery(db: Db, user: CurrentUser, opts: Pick<ListScenesOptions, 'status' | 'inTrainingSet' | 'q'>, matchIds: number[] | null = null) {
   return db.selectFrom(filtered(db, user, opts as ListScenesOptions, matchIds).select('scenes.id').limit(COUNT_CAP + 1).as('matching')).select((eb) => eb.fn.countAll<number>().as('n'));
+}
+
+/**
+ * The total of a list without a search, from the counts the triggers keep (migrations/2026-12-03T14-30):
+ * a sum over a few rows per owner, whatever the organisation's history. The same filters as the list:
+ * the organisation, live scenes, the status (archived only when asked for), the training set, and for an
+ * operator their own scenes plus approved ones.
+ */
+export function keptCountQuery(db: Db, user: CurrentUser, opts: Pick<ListScenesOptions, 'status' | 'inTrainingSet'>) {
+  let q = db.selectFrom('scene_counts').where('organisation_id', '=', user.organisationId);
+  q = opts.status ? q.where('status', '=', opts.status) : q.where('status', '!=', 'archived');
+  if (opts.inTrainingSet !== undefined) q = q.where('in_training_set', '=', opts.inTrainingSet ? 1 : 0);
+  if (!mayReadAllScenes(user)) q = q.where((eb) => eb.or([eb('owner_id', '=', user.id), eb('status', '=', 'approved')]));
+  return q.select((eb) => eb.fn.coalesce(eb.fn.sum<number>('n'), eb.lit(0)).as('n'));
 }
 
 /**
@@ -217,7 +232,7 @@ export async function listScenes(db: Db, user: CurrentUser, opts: ListScenesOpti
   const hasNext = backward ? cursor !== null : more;
   const hasPrev = backward ? more : cursor !== null;
 
-  const counted = Number((await countQuery(db, user, opts, matchIds).executeTakeFirstOrThrow()).n);
+  const counted = Number((await (opts.q === undefined ? keptCountQuery(db, user, opts) : countQuery(db, user, opts, matchIds)).executeTakeFirstOrThrow()).n);
   return {
     items,
     total: Math.min(counted, COUNT_CAP),
