@@ -83,18 +83,52 @@ function rowMaxima(p: PreparedLift, nS: number, step: number, pick: number, cos:
   }
 }
 
-/** Index of a part or obstacle the load meets at this node, or −1. */
-function cutAt(p: PreparedLift, deg: number, clearance: number): number {
+/** Whether the load at this slew meets target i (in plan, within the clearance limit, not above it). */
+function meets(p: PreparedLift, i: number, deg: number, clearance: number): boolean {
+  const t = p.targets[i];
+  if (p.loadBottom - t.top >= clearance) return false;
   const a = (deg * Math.PI) / 180;
   const hx = Math.cos(a) * p.hookX0 - Math.sin(a) * p.hookY0;
   const hy = Math.sin(a) * p.hookX0 + Math.cos(a) * p.hookY0;
+  if (Math.hypot(hx - t.cx, hy - t.cy) - t.r - p.footprint.reach >= clearance) return false;
+  return gapAt(p, t, deg) < clearance;
+}
+
+/**
+ * One row's cut-outs into `cut` at offset `o`: per node, the lowest index of a part or obstacle the load
+ * meets there, or −1. Each target is tried only at the columns where its bounding circle can come within
+ * the clearance of the load's (law of cosines on the hook's circle, widened by a column), not at all 240:
+ * with hundreds of obstacles the grid was mostly these rejections. Same answer as trying every node.
+ */
+function rowCuts(p: PreparedLift, nS: number, step: number, clearance: number, cut: Int16Array, o: number): void {
+  cut.fill(-1, o, o + nS);
+  const R = Math.hypot(p.hookX0, p.hookY0);
+  const off = (Math.atan2(p.hookY0, p.hookX0) * 180) / Math.PI;
   for (let i = 0; i < p.targets.length; i++) {
     const t = p.targets[i];
     if (p.loadBottom - t.top >= clearance) continue;
-    if (Math.hypot(hx - t.cx, hy - t.cy) - t.r - p.footprint.reach >= clearance) continue;
-    if (gapAt(p, t, deg) < clearance) return i;
+    const lim = t.r + p.footprint.reach + clearance;
+    const d = Math.hypot(t.cx, t.cy);
+    if (Math.abs(R - d) >= lim + 1e-9) continue;
+    let first = 0, last = nS - 1;
+    if (R > 1e-9 && d > 1e-9) {
+      const q = (R * R + d * d - lim * lim) / (2 * R * d);
+      if (q > -1) {
+        const w = (Math.acos(Math.min(1, q)) * 180) / Math.PI;
+        const centre = (Math.atan2(t.cy, t.cx) * 180) / Math.PI - off;
+        first = Math.floor((centre - w) / step) - 1;
+        last = Math.ceil((centre + w) / step) + 1;
+        if (last - first >= nS) {
+          first = 0;
+          last = nS - 1;
+        }
+      }
+    }
+    for (let m = first; m <= last; m++) {
+      const k = ((m % nS) + nS) % nS;
+      if (cut[o + k] < 0 && meets(p, i, k * step, clearance)) cut[o + k] = i;
+    }
   }
-  return -1;
 }
 
 export function envelopeGrid(prepared: PreparedLift, opts: GridOptions = {}): EnvelopeGrid | null {
@@ -123,7 +157,7 @@ export function envelopeGrid(prepared: PreparedLift, opts: GridOptions = {}): En
     offset[j] = Math.atan2(pr.hookY0, pr.hookX0);
     chartPct[j] = chart ? (percentOfRated(chart, pr.radius, p.input.boom.length, pr.hookLoad).percent ?? Infinity) : NaN;
     rowMaxima(pr, nS, step, p.from, cos, sin, ccw, cw, j * nS);
-    for (let k = 0; k < nS; k++) cut[j * nS + k] = cutAt(pr, k * step, clearance);
+    rowCuts(pr, nS, step, clearance, cut, j * nS);
   }
   return {
     nR, nS, radii, reach, offset, step, pick: p.from, ccw, cw, chart: chartPct, cut,
