@@ -19,6 +19,12 @@ import { NOTHING, paintPicture, pictureServes, shapesBounds, viewInTruckFrame, t
 
 /** Share of the view's size painted beyond each edge, so a drag or pan of that much needs no new bitmap. */
 const MARGIN = 0.5;
+/**
+ * While a gesture is in progress the worker rests as long as its last job took before it starts the next,
+ * so it takes at most half a core: on a two-core machine a worker that never rests slows the editor's own
+ * frames (npm run bench:editor). A fast machine still gets an update every few frames.
+ */
+const REST_SHARE = 1;
 
 let worker: Worker | null = null;
 let nextId = 0;
@@ -32,6 +38,10 @@ let want: PictureRequest | null = null;
 let wantView: PictureRequest['view'] | null = null;
 /** Shapes kept on this side only when the worker cannot paint (or there is no worker). */
 let mainShapes: EnvelopeShapes | null = null;
+let gesture = false;
+let sentAt = 0;
+let restUntil = 0;
+let restTimer: ReturnType<typeof setTimeout> | null = null;
 
 function paintHere(req: PictureRequest | null): EnvelopePicture | null {
   if (!mainShapes || !req || typeof document === 'undefined') return null;
@@ -69,18 +79,29 @@ function post(job: EnvelopeJob) {
       if (e.data.id !== inFlight) return;
       inFlight = null;
       inFlightPicture = null;
+      const now = performance.now();
+      restUntil = now + REST_SHARE * (now - sentAt);
       pump();
       deliver(e.data, 'worker');
     };
   }
   inFlight = ++nextId;
   inFlightPicture = job.picture;
+  sentAt = performance.now();
   envelopeStore.set({ busy: true });
   worker.postMessage({ ...job, id: inFlight });
 }
 
 function pump() {
-  if (inFlight !== null) return;
+  if (inFlight !== null || restTimer !== null) return;
+  const wait = gesture ? restUntil - performance.now() : 0;
+  if (wait > 0 && (pendingInput || pendingPicture)) {
+    restTimer = setTimeout(() => {
+      restTimer = null;
+      pump();
+    }, wait);
+    return;
+  }
   if (pendingInput) {
     const input = pendingInput;
     pendingInput = null;
@@ -99,6 +120,14 @@ export function requestEnvelope(input: LiftInputIn) {
 
 /** Whether the bitmap shown (or the one on its way) serves the view; if not, asks for one that does. */
 function checkPicture(s: EditorState) {
+  const wasGesture = gesture;
+  gesture = s.gestureBase !== null;
+  // The gesture is over: what waits goes now.
+  if (wasGesture && !gesture && restTimer !== null) {
+    clearTimeout(restTimer);
+    restTimer = null;
+    pump();
+  }
   const truck = s.document.objects.find((o): o is TruckObject => o.kind === 'truck');
   if (!truck || !(s.viewport.width > 0)) return;
   const dpr = typeof window === 'undefined' ? 1 : window.devicePixelRatio || 1;
