@@ -3,7 +3,7 @@ import { useEffect } from 'react';
 import { prepareLift, type LiftInputIn } from '@/lib/lift';
 import { envelopeGrid, envelopeShapes, type EnvelopeShapes } from '@/lib/envelope';
 import type { TruckObject } from '@/lib/scene/objects';
-import { useEditorContext, useEditorState } from '../editor-context';
+import { useEditorContext } from '../editor-context';
 import type { EditorState } from '../store/types';
 import { envelopeStore, useEnvelopeState } from './reach-envelope-store';
 import type { EnvelopeAnswer, EnvelopeJob } from './envelope-messages';
@@ -147,26 +147,33 @@ function checkPicture(s: EditorState) {
 
 const inBox = (a: PictureRequest['view'], b: PictureRequest['view']) => a.x0 >= b.x0 && a.y0 >= b.y0 && a.x1 <= b.x1 && a.y1 <= b.y1;
 
+/**
+ * Follows the editor store while the envelope is shown: a new engine input asks for a new grid, a view
+ * the bitmap does not serve asks for a repaint. A store subscription rather than React state, so a drag
+ * frame does not re-render the envelope's key.
+ */
 export function useReachEnvelope() {
   const { store } = useEditorContext();
-  const lift = useEditorState((s) => s.analysis?.lift ?? null);
   const on = useEnvelopeState((s) => s.on);
   useEffect(() => {
     if (!on) return;
-    checkPicture(store.getState());
-    const off = store.subscribe((s) => checkPicture(s));
+    let last: LiftState | undefined;
+    const sync = (s: EditorState) => {
+      checkPicture(s);
+      const lift = s.analysis?.lift ?? null;
+      if (lift === last) return;
+      last = lift;
+      if (!lift?.ok) envelopeStore.set({ grid: null, cutBy: [], picture: null });
+      else requestEnvelope(lift.input);
+    };
+    sync(store.getState());
+    const off = store.subscribe(sync);
     const offEnvelope = envelopeStore.subscribe(() => checkPicture(store.getState()));
     return () => {
       off();
       offEnvelope();
     };
   }, [on, store]);
-  useEffect(() => {
-    if (!on) return;
-    if (!lift?.ok) {
-      envelopeStore.set({ grid: null, cutBy: [], picture: null });
-      return;
-    }
-    requestEnvelope(lift.input);
-  }, [on, lift]);
 }
+
+type LiftState = NonNullable<EditorState['analysis']>['lift'] | null;

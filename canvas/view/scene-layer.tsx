@@ -1,4 +1,5 @@
 'use client';
+import { useMemo } from 'react';
 import { useEditorState } from '../editor-context';
 import { TruckShape } from '../shapes/truck/truck-shape';
 import { LoadRestShape } from '../shapes/load/load-shape';
@@ -43,13 +44,20 @@ export function SceneObjects({ objects }: { objects: SceneObject[] }) {
   );
 }
 
-/** Everything that stays put while the boom swings or an object is dragged. */
+/**
+ * Everything that stays put while the boom swings or an object is dragged. During a gesture it draws the
+ * objects as the gesture found them, less the moving ones: that list does not change from frame to frame,
+ * so neither React nor Konva touches the scene's canvas until the gesture ends.
+ */
 export function SceneLayer() {
-  const objects = useEditorState((s) => s.document.objects);
+  const objects = useEditorState((s) => (s.gestureBase ?? s.document).objects);
   const moving = useEditorState(movingIds);
-  if (!moving) return <SceneObjects objects={objects} />;
-  const ids = new Set(moving.split('\n'));
-  return <SceneObjects objects={objects.filter((o) => !ids.has(o.id))} />;
+  const shown = useMemo(() => {
+    if (!moving) return objects;
+    const ids = new Set(moving.split('\n'));
+    return objects.filter((o) => !ids.has(o.id));
+  }, [objects, moving]);
+  return <SceneObjects objects={shown} />;
 }
 
 /** The objects a gesture is moving, drawn on the live layer while it lasts (see movingIds). */

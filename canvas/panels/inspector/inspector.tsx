@@ -1,4 +1,5 @@
 'use client';
+import { useShallow } from 'zustand/react/shallow';
 import { useEditorContext, useEditorState } from '../../editor-context';
 import { CommonFields } from './common-fields';
 import { TruckInspector } from './truck-inspector';
@@ -17,11 +18,10 @@ const KIND_NAMES: Record<SceneObject['kind'], string> = { truck: 'Truck', load: 
 /** Exact values for the selection, or the scene's own settings when nothing is selected. */
 export function Inspector() {
   const { store, editor } = useEditorContext();
-  const selection = useEditorState((s) => s.selection);
-  const objects = useEditorState((s) => s.document.objects);
+  // The selected objects only (compared item by item): a drag of something else does not re-render the panel.
+  const sel = useEditorState(useShallow((s) => s.document.objects.filter((o) => s.selection.includes(o.id))));
   const units = useEditorState((s) => s.units);
   const readOnly = useEditorState((s) => s.readOnly);
-  const sel = objects.filter((o) => selection.includes(o.id));
   if (sel.length === 0) return <SceneSettings />;
   if (sel.length > 1) {
     return (

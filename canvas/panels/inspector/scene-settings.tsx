@@ -40,13 +40,17 @@ export function autoFilledSwing(doc: SceneDocument): string[] {
 /** The swing plan, the ground and the plan's limits (nothing selected). */
 export function SceneSettings() {
   const { store } = useEditorContext();
-  const doc = useEditorState((s) => s.document);
+  // The parts of the document shown here, not the document: dragging the truck re-renders this panel only
+  // when the pick or set stops (or starts) pointing at the load or the trailer.
+  const swing = useEditorState((s) => s.document.swing);
+  const soil = useEditorState((s) => s.document.soil);
+  const background = useEditorState((s) => s.document.background);
+  const autoWords = useEditorState((s) => autoFilledSwing(s.document).join(' '));
   const units = useEditorState((s) => s.units);
   const ro = useEditorState((s) => s.readOnly);
   const run = store.getState().run;
   const sceneId = useEditorState((s) => s.sceneId);
   const fields = sceneFields(units);
-  const auto = autoFilledSwing(doc);
   return (
     <div data-testid="scene-settings">
       <p className="mb-3 text-sm text-ink-muted">Nothing selected. Press an object on the plan to see its exact values; these settings belong to the whole scene.</p>
@@ -54,15 +58,15 @@ export function SceneSettings() {
         {fields.slice(0, 2).map((f) => (
           <Bound key={f.key} field={f} disabled={ro} />
         ))}
-        {auto.length > 0 && (
+        {autoWords && (
           <p className="col-span-2 rounded bg-paper-sunk px-2 py-1 text-xs text-ink-soft" data-testid="swing-auto">
-            {auto.join(' ')} Type a figure to change it.
+            {autoWords} Type a figure to change it.
           </p>
         )}
         <div className="col-span-2">
           <SelectField
             label="Direction"
-            value={doc.swing.direction}
+            value={swing.direction}
             disabled={ro}
             testId="field-direction"
             options={[
@@ -73,19 +77,19 @@ export function SceneSettings() {
           />
         </div>
         <p className="col-span-2 text-xs text-ink-muted" data-testid="swing-arc">
-          {arcWords(doc.swing)}
+          {arcWords(swing)}
         </p>
       </Section>
       <Section title="Ground">
         <div className="col-span-2">
           <SelectField
             label="Ground under the pads"
-            value={doc.soil.preset}
+            value={soil.preset}
             disabled={ro}
             options={[{ value: 'custom', label: 'Entered value' }, ...SOIL_CHOICES.map((s) => ({ value: s.id, label: `${s.label} — IBC Table 1806.2, ${formatPressure(s.kPa, units)}` }))]}
             onCommit={(preset) => {
               const c = SOIL_CHOICES.find((s) => s.id === preset);
-              run(setDocumentFields({ soil: { preset, allowable: c ? c.kPa : doc.soil.allowable } }));
+              run(setDocumentFields({ soil: { preset, allowable: c ? c.kPa : soil.allowable } }));
             }}
           />
         </div>
@@ -101,7 +105,7 @@ export function SceneSettings() {
           <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-muted">Site image</h3>
           <BackgroundPanel
             sceneId={sceneId}
-            background={doc.background}
+            background={background}
             units={units}
             canEdit={!ro}
             placeAt={() => {
