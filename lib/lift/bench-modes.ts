@@ -41,12 +41,13 @@ export function perCall(fn: () => unknown, minMs = 1500): { wall: number; cpu: n
  * held to 2 mm + 0.2 %, and that walk is the result contract (golden fixtures, slews to 1e-9): every stride
  * is worked out from the gap read at the step before, so each step must read the same gap to the last bit,
  * and none can be skipped without moving the slews reported after it. A full turn takes about 7,300 load
- * steps (5,500 exact outline gaps, some 0.2 µs each on this shared machine) and 8,900 boom steps (7,200 exact
- * boom-to-prism distances, 0.25–0.3 µs each with boomAxisGap); the rest of a step (its cosine and sine, the
- * bound, the stride) is about 0.1 µs. That is some 3 ms before anything else. Speed work so far made each
- * evaluation cheaper (boomAxisGap, fewer point-in-polygon tests, no getter per imported call); meeting 2 ms
- * would need fewer evaluations, i.e. a different walk (larger clearance figures within tolerance, new
- * goldens), which is a change of results. The breakdown line printed per case shows the split.
+ * steps (5,500 exact outline gaps, about 0.22 µs each on this shared machine) and 8,900 boom steps (7,200
+ * exact boom-to-prism distances, about 0.25 µs each); the rest of a step (its cosine and sine, the bound,
+ * the stride) is about 0.08 µs: some 4 ms before anything else. The speed work so far only trims each
+ * evaluation (boomAxisGap and the walks skip point-in-polygon tests known false, the load walk most of its
+ * bound's hypot, slewAt its modulo), a few per cent. Meeting 2 ms needs fewer evaluations, i.e. a different
+ * walk (larger clearance figures within tolerance, new goldens): a change of results, not of speed alone.
+ * The breakdown line printed per case shows the split.
  */
 export function benchModes(cases: { name: string; input: LiftInputIn }[]): void {
   console.log('exact and coarse modes, time per swing (median; the exact mode samples every 1° and leaves out the weight sensitivity, the coarse samples every 3°)');

@@ -1,13 +1,7 @@
-import * as geometry from './geometry';
+import { pointInPolygon, pointPolygonDistance, pointSegmentDist2, segmentsIntersect } from './geometry';
 import { slewAt, type PreparedLift, type Target } from './prepare';
 import { lipschitzMin } from './search';
-import * as segment3d from './segment3d';
-
-// The walks below call these tens of thousands of times per analysis. Taken once into module constants:
-// where modules are compiled to CommonJS (tsx, which runs `npm run bench`), every call through an import
-// binding goes through a getter first.
-const { pointInPolygon, pointPolygonDistance, pointSegmentDist2, segmentsIntersect } = geometry;
-const { closest, segmentSegmentDistance } = segment3d;
+import { closest, segmentSegmentDistance } from './segment3d';
 
 /**
  * The boom against obstacles and the truck's own parts, in 3D. The boom is a capsule: its axis runs from
@@ -179,20 +173,12 @@ function planSegmentGap(ax: number, ay: number, bx: number, by: number, t: Targe
   return Math.sqrt(best);
 }
 
-/** The edge of the part's top face that came nearest in the last boomAxisGap call: tried first in the next. */
-let lastEdge = 0;
-
 /**
  * boomAxisToPrism's distance, the same number bit for bit, for the clearance walks (which need only the
- * distance, not where on the boom it is). The candidates are those of boomAxisToPrism: the piece at or
- * below the top (planSegmentPolygon's distance, by planSegmentGap), each end of the piece above it straight over the face, and
- * each edge of the face; their least is the distance whichever order they are taken in. What changes:
- * - an end outside the face's box is not over the face (outsideBox), so no point-in-polygon test;
- * - the edge nearest at the previous slew is tried first (the walks move a small step at a time);
- * - an edge is passed over when it cannot come nearer than the best so far: its distance is at least
- *   √(g² + h²), with g the plan gap between its box and the box of the part of the upper piece lower than
- *   top + best (the rest is more than best above the face), and h the upper piece's lowest height above the
- *   face. The 1e-9 relative and 1e-18 m² room is boomAxisToPrism's own, far above the rounding of either.
+ * distance, not where on the boom it is). The candidates and their order are boomAxisToPrism's: the piece at
+ * or below the top (planSegmentPolygon's distance, by planSegmentGap), each end of the piece above it straight
+ * over the face, and each edge of the face, passed over by the same plan test. What it leaves out are the
+ * point-in-polygon tests known to be false: an end outside the face's box (outsideBox) is not over the face.
  */
 export function boomAxisGap(px: number, py: number, pz: number, qx: number, qy: number, qz: number, t: Target): number {
   const dz = qz - pz;
@@ -227,32 +213,16 @@ export function boomAxisGap(px: number, py: number, pz: number, qx: number, qy: 
   const top = t.top, poly = t.poly, n = t.n;
   if (sz - top < best && !outsideBox(sx, sy, t) && pointInPolygon(sx, sy, poly, n)) best = sz - top;
   if (ez - top < best && !outsideBox(ex, ey, t) && pointInPolygon(ex, ey, poly, n)) best = ez - top;
-  const low = Math.max(0, Math.min(sz, ez) - top);
-  const first = lastEdge < n ? lastEdge : 0;
-  for (let m = 0; m < n; m++) {
-    const i = m === 0 ? first : m <= first ? m - 1 : m;
-    const j = i === 0 ? n - 1 : i - 1;
+  const x0 = sx < ex ? sx : ex, x1 = sx < ex ? ex : sx, y0 = sy < ey ? sy : ey, y1 = sy < ey ? ey : sy;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
     const cx = poly[2 * j], cy = poly[2 * j + 1], fx = poly[2 * i], fy = poly[2 * i + 1];
     if (best < Infinity) {
-      // The upper piece's plan box, cut to where it is less than best (with room) above the face.
-      let x0 = sx < ex ? sx : ex, x1 = sx < ex ? ex : sx, y0 = sy < ey ? sy : ey, y1 = sy < ey ? ey : sy;
-      const reachZ = top + best * (1 + 1e-6) + 1e-9;
-      if (sz !== ez && (sz > reachZ || ez > reachZ)) {
-        // Fraction of the piece (from its lower end) below reachZ; the box of that part.
-        const lowX = sz < ez ? sx : ex, lowY = sz < ez ? sy : ey, highX = sz < ez ? ex : sx, highY = sz < ez ? ey : sy;
-        const f = Math.min(1, Math.max(0, (reachZ - Math.min(sz, ez)) / Math.abs(ez - sz)) * (1 + 1e-9) + 1e-9);
-        const cutX = lowX + (highX - lowX) * f, cutY = lowY + (highY - lowY) * f;
-        x0 = lowX < cutX ? lowX : cutX; x1 = lowX < cutX ? cutX : lowX; y0 = lowY < cutY ? lowY : cutY; y1 = lowY < cutY ? cutY : lowY;
-      }
       const gx = Math.max(0, (cx < fx ? cx : fx) - x1, x0 - (cx < fx ? fx : cx));
       const gy = Math.max(0, (cy < fy ? cy : fy) - y1, y0 - (cy < fy ? fy : cy));
-      if (gx * gx + gy * gy + low * low > best * best * (1 + 1e-9) + 1e-18) continue;
+      if (gx * gx + gy * gy > best * best * (1 + 1e-9) + 1e-18) continue;
     }
     const d = segmentSegmentDistance(sx, sy, sz, ex, ey, ez, cx, cy, top, fx, fy, top);
-    if (d < best) {
-      best = d;
-      lastEdge = i;
-    }
+    if (d < best) best = d;
   }
   return best;
 }

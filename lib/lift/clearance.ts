@@ -1,15 +1,7 @@
-import * as footprint from './footprint';
-import * as geometry from './geometry';
-import * as prepare from './prepare';
-import type { PreparedLift, Target } from './prepare';
+import { placeOutline } from './footprint';
+import { pointPolygonDistance, polygonGap } from './geometry';
+import { slewAt, type PreparedLift, type Target } from './prepare';
 import { lipschitzMin } from './search';
-
-// The walk below calls these thousands of times per analysis, so they are read once into module constants:
-// where a loader compiles modules to CommonJS (tsx does for some under `npm run bench`), each call through
-// an imported name first calls a getter.
-const { placeOutline } = footprint;
-const { pointPolygonDistance, polygonGap } = geometry;
-const { slewAt } = prepare;
 
 /**
  * Clearance between the load and the truck's own parts and obstacles as the load turns with the boom.

@@ -1,7 +1,7 @@
 import { G } from '@/lib/units';
-import * as boomClearance from './boom-clearance';
-import * as clearance from './clearance';
-import * as geometry from './geometry';
+import { boomGapAt, boomMeets } from './boom-clearance';
+import { gapAt } from './clearance';
+import { pointSegmentDist2 } from './geometry';
 import { lipschitzLowerBound, reactionSlopes, ROUNDING, tippingOnArc } from './coarse-bounds';
 import { percentOfRated } from './load-chart';
 import { upperWeight } from './load-weight';
@@ -10,11 +10,6 @@ import { slewAt, withLoadMass, type PreparedLift, type Target } from './prepare'
 import { createReactionState, reactionsAt } from './reactions';
 import { assertStandsUnloaded } from './tipping';
 import { atLeast, atMost, CLEARANCE_MARGIN_CAP, clearanceScale, type Margin } from './margins';
-
-// Called per sample of every part and obstacle, so read once into module constants (as in clearance.ts).
-const { boomGapAt, boomMeets } = boomClearance;
-const { gapAt } = clearance;
-const { pointSegmentDist2 } = geometry;
 
 /**
  * The coarse mode: the same limits as analyzeLift, each as a bound that is never on the favourable side
