@@ -72,13 +72,22 @@ function upperReaction(t0: number, m0: number, t1: number, m1: number, depth: nu
   if (depth === 0 || bound <= refine.best + REFINE * Math.abs(refine.best)) return Math.max(bound, m0, m1);
   const tm = (t0 + t1) / 2;
   if (refine.stamp[node] !== refine.generation) {
-    refine.memo.set(reactionsAt(refine.p, slewAt(refine.p, tm), refine.state).mass, node * refine.n);
+    copyInto(refine.memo, reactionsAt(refine.p, slewAt(refine.p, tm), refine.state).mass, node * refine.n);
     refine.stamp[node] = refine.generation;
   }
   const mm = refine.memo[node * refine.n + refine.i];
   refine.best = Math.max(refine.best, mm);
   const child = node - (node % NODES) + 2 * (node % NODES);
   return Math.max(upperReaction(t0, m0, tm, mm, depth - 1, child), upperReaction(tm, mm, t1, m1, depth - 1, child + 1));
+}
+
+/** reactionBounds' sample buffers, kept between analyses (every entry it reads is written first). */
+let sampleT = new Float64Array(0);
+let sampleM = new Float64Array(0);
+
+/** dst.set(src, at) for the few supports of a truck, without the call into the runtime. */
+function copyInto(dst: Float64Array, src: Float64Array, at: number): void {
+  for (let i = 0; i < src.length; i++) dst[at + i] = src[i];
 }
 
 function reactionBounds(p: PreparedLift, step: number): Float64Array {
@@ -91,12 +100,14 @@ function reactionBounds(p: PreparedLift, step: number): Float64Array {
   const slope = reactionSlopes(p.supportX, p.supportY, p.input.supports);
   const state = createReactionState(n);
   const samples = p.span > 0 ? Math.ceil(p.span / step - 1e-9) : 0;
-  const ts = new Float64Array(samples + 1);
+  if (sampleT.length < samples + 1) sampleT = new Float64Array(samples + 1);
+  if (sampleM.length < (samples + 1) * n) sampleM = new Float64Array((samples + 1) * n);
+  const ts = sampleT;
   // Reactions at the samples, flat: ms[k·n + i] is support i at sample k.
-  const ms = new Float64Array((samples + 1) * n);
+  const ms = sampleM;
   for (let k = 0; k <= samples; k++) {
     ts[k] = Math.min(k * step, p.span);
-    ms.set(reactionsAt(p, slewAt(p, ts[k]), state).mass, k * n);
+    copyInto(ms, reactionsAt(p, slewAt(p, ts[k]), state).mass, k * n);
   }
   const out = new Float64Array(n);
   refine.p = p;
@@ -125,10 +136,26 @@ function pressureOf(p: PreparedLift, i: number, m: number): number {
   return sup.cribbingArea ? ((m + (sup.cribbingMass ?? 0)) * G) / 1000 / sup.cribbingArea : (m * G) / 1000 / sup.area;
 }
 
+/**
+ * What the clearance bounds of every part and obstacle share, worked out once per prepared lift (the same
+ * expressions each bound used to work out for itself): the hook's angle at slew 0 (degrees), the pivot's
+ * distance from the slew axis and the boom's run in plan, m.
+ */
+const shape = { p: null as PreparedLift | null, hookAngle: 0, pivotR: 0, run: 0 };
+function shapeOf(p: PreparedLift): typeof shape {
+  if (shape.p !== p) {
+    shape.p = p;
+    shape.hookAngle = Math.atan2(p.hookY0, p.hookX0) / DEG;
+    shape.pivotR = Math.hypot(p.pivotX0, p.pivotY0);
+    shape.run = Math.hypot(p.hookX0 - p.pivotX0, p.hookY0 - p.pivotY0);
+  }
+  return shape;
+}
+
 /** Smallest distance from the hook's arc to a point, m (closed form). */
 function hookArcDistance(p: PreparedLift, x: number, y: number): number {
   const d = Math.hypot(x, y);
-  const hookAngle = Math.atan2(p.hookY0, p.hookX0) / DEG;
+  const hookAngle = shapeOf(p).hookAngle;
   const slew = Math.atan2(y, x) / DEG - hookAngle;
   const rel = (((p.sign * (slew - p.from)) % 360) + 360) % 360;
   if (rel <= p.span) return Math.abs(p.radius - d);
@@ -261,7 +288,7 @@ function boundWithFloors(s: Samples, lipschitz: number): number {
 }
 
 function boomGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: number, limit: number): number {
-  const reach = Math.max(p.radius, Math.hypot(p.pivotX0, p.pivotY0));
+  const reach = Math.max(p.radius, shapeOf(p).pivotR);
   const plan = Math.hypot(t.cx, t.cy) - t.r - reach;
   const above = Math.min(p.pivotZ, p.tipZ) - t.top;
   const rough = Math.max(0, Math.max(plan, above, risingBoomGap(p, t)) - p.boomRadius);
@@ -284,10 +311,10 @@ function boomGapBound(p: PreparedLift, t: Target, samples: () => Samples, step: 
  * and the smallest of that over s is where the two meet (or at an end).
  */
 function risingBoomGap(p: PreparedLift, t: Target): number {
-  const run = Math.hypot(p.hookX0 - p.pivotX0, p.hookY0 - p.pivotY0);
+  const { run, pivotR } = shapeOf(p);
   if (!(p.tipZ > p.pivotZ) || !(run > 0)) return -Infinity;
   const slope = (p.tipZ - p.pivotZ) / run;
-  const start = Math.max(0, Math.hypot(t.cx, t.cy) - t.r) - Math.hypot(p.pivotX0, p.pivotY0);
+  const start = Math.max(0, Math.hypot(t.cx, t.cy) - t.r) - pivotR;
   const meet = Math.min(run, Math.max(0, (start - p.pivotZ + t.top) / (1 + slope)));
   const lb0 = Math.max(start - 0, p.pivotZ + 0 * slope - t.top);
   const lbRun = Math.max(start - run, p.pivotZ + run * slope - t.top);

@@ -179,9 +179,12 @@ function wasTried(mask: number, count: number): boolean {
 export function solveContact(xs: Float64Array, ys: Float64Array, W: number, Mx: number, My: number, out: ContactSolution): ContactSolution {
   const n = xs.length;
   out.tips = false;
-  out.mass.fill(0);
-  out.active.fill(0);
-  if (!(W > 0)) return out;
+  // Every way out below writes every support's reaction (write, limitState); only this one needs the zeros.
+  if (!(W > 0)) {
+    out.mass.fill(0);
+    out.active.fill(0);
+    return out;
+  }
   const model = modelOf(xs, ys);
   const { edges, scale } = model;
   const cx = Mx / W, cy = My / W;
