@@ -38,6 +38,22 @@ export async function sceneIdByTitle(page: Page, title: string): Promise<number>
   return list.items.find((s) => s.title === title)!.id;
 }
 
+/**
+ * Copies a seeded scene through the API (so a test may edit it freely), runs `body` with the copy's id, and
+ * deletes the copy afterwards, whether `body` passed or failed.
+ */
+export async function withSceneCopy(page: Page, sourceTitle: string, copyTitle: string, body: (id: number) => Promise<void>): Promise<void> {
+  const source = await sceneIdByTitle(page, sourceTitle);
+  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: copyTitle } });
+  expect(copy.status()).toBe(201);
+  const id = (await copy.json()).id as number;
+  try {
+    await body(id);
+  } finally {
+    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
+  }
+}
+
 /** Creates a scene through the API with the page's session (for setting up a test, not for the journey under test). */
 export async function createSceneViaApi(page: Page, title: string): Promise<number> {
   const res = await page.request.post('/api/scenes', { data: { title } });

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { HARROW_SCENES, VIEWPORTS, sceneIdByTitle, signIn } from './helpers';
+import { HARROW_SCENES, VIEWPORTS, sceneIdByTitle, signIn, withSceneCopy } from './helpers';
 
 /**
  * The reach envelope while the truck is dragged. The worker answers the grid and a bitmap of the envelope
@@ -88,11 +88,7 @@ const seen = (page: Page) => page.evaluate(() => (window as unknown as { __envel
 
 test('the reach envelope is painted in the worker and drawn as one bitmap on drag frames', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
-  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
-  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Envelope check (coil copy)' } });
-  expect(copy.status()).toBe(201);
-  const id = (await copy.json()).id as number;
-  try {
+  await withSceneCopy(page, HARROW_SCENES.coil, 'Envelope check (coil copy)', async (id) => {
     await watchWorker(page);
     await page.goto(`/scenes/${id}`);
     await expect(page.getByTestId('live-readout')).toBeVisible({ timeout: 30_000 });
@@ -149,9 +145,7 @@ test('the reach envelope is painted in the worker and drawn as one bitmap on dra
     expect(zoomed.jobs.filter((j) => j.kind === 'grid').length).toBe(gridsBefore);
     await expect(page.getByTestId('reach-envelope-ms')).toHaveText(/beside the editor\.$/, { timeout: 30_000 });
     expect((await seen(page)).answers.at(-1)).toMatchObject({ kind: 'picture', image: 'ImageBitmap' });
-  } finally {
-    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
-  }
+  });
 });
 
 test('screens: the reach envelope on the plan', async ({ page }) => {

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { HARROW_SCENES, sceneIdByTitle, signIn } from './helpers';
+import { HARROW_SCENES, sceneIdByTitle, signIn, withSceneCopy } from './helpers';
 
 /**
  * What moves with the slew is drawn on its own canvas: scrubbing the slew redraws only the top (live) layer,
@@ -29,11 +29,7 @@ async function countLayerDraws(page: Page) {
 test('scrubbing the slew in the editor redraws only the live layer', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
   // A copy of the coil transfer (it has a tape, obstacles, a trailer): scrubbing an editable scene saves the slew.
-  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
-  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Redraw check (coil copy)' } });
-  expect(copy.status()).toBe(201);
-  const id = (await copy.json()).id as number;
-  try {
+  await withSceneCopy(page, HARROW_SCENES.coil, 'Redraw check (coil copy)', async (id) => {
     await page.goto(`/scenes/${id}`);
     await expect(page.getByTestId('live-readout')).toBeVisible({ timeout: 30_000 });
     const slider = page.getByTestId('slew-slider');
@@ -45,18 +41,12 @@ test('scrubbing the slew in the editor redraws only the live layer', async ({ pa
     expect(live).toBeGreaterThanOrEqual(10);
     // Every layer under the live one (grid, scene) stays as it was drawn before the scrub.
     expect(draws.slice(0, -1)).toEqual(draws.slice(0, -1).map(() => 0));
-  } finally {
-    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
-  }
+  });
 });
 
 test('dragging the truck redraws the scene layer only as the drag starts and ends', async ({ page }) => {
   await signIn(page, 'operator@harrow.example');
-  const source = await sceneIdByTitle(page, HARROW_SCENES.coil);
-  const copy = await page.request.post(`/api/scenes/${source}/duplicate`, { data: { title: 'Redraw check, truck drag (coil copy)' } });
-  expect(copy.status()).toBe(201);
-  const id = (await copy.json()).id as number;
-  try {
+  await withSceneCopy(page, HARROW_SCENES.coil, 'Redraw check, truck drag (coil copy)', async (id) => {
     await page.goto(`/scenes/${id}`);
     await expect(page.getByTestId('live-readout')).toBeVisible({ timeout: 30_000 });
     const box = (await page.getByTestId('plan-view').boundingBox())!;
@@ -82,9 +72,7 @@ test('dragging the truck redraws the scene layer only as the drag starts and end
     // ...and goes back once when it is set down. The grid never redraws.
     expect(after[scene]! - during[scene]!).toBe(1);
     expect(after.slice(0, scene)).toEqual(after.slice(0, scene).map(() => 0));
-  } finally {
-    expect((await page.request.delete(`/api/scenes/${id}`)).status()).toBeLessThan(300);
-  }
+  });
 });
 
 test('playing the replay redraws only the live layer', async ({ page }) => {
